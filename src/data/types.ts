@@ -1,0 +1,199 @@
+/**
+ * The validated, unit-normalised project that src/data hands to everything after it.
+ * Built only by the loader (src/data/load.ts); never half-built: a load returns either a Project
+ * or a list of located errors.
+ */
+import type {
+  Ambient,
+  DriveLineSpec,
+  EngineSpec,
+  Fuel,
+  ImpellerFamilySpec,
+  ImpellerSpec,
+} from '../model/types.ts';
+
+/** Where a definition came from, for messages and the site ("data/boats/river-runner.yaml"). */
+export interface SourceRef {
+  readonly file: string;
+}
+
+export interface EngineFamily {
+  /** Lower-case slug; also the file name. */
+  readonly id: string;
+  readonly label: string;
+  /** Fictional maker name in the demo. */
+  readonly maker: string;
+  readonly fuel: Fuel;
+  readonly notes?: string;
+  /** One EngineSpec per variant (tune); EngineSpec.id is "familyId/variantId". */
+  readonly variants: readonly EngineVariant[];
+  readonly source: SourceRef;
+}
+
+export interface EngineVariant extends EngineSpec {
+  readonly familyId: string;
+  readonly variantId: string;
+}
+
+export interface JetUnit {
+  readonly id: string;
+  readonly label: string;
+  readonly maker: string;
+  readonly family: ImpellerFamilySpec;
+  /** In the order the file lists them (conventionally lightest first). */
+  readonly impellers: readonly ImpellerSpec[];
+  readonly notes?: string;
+  readonly source: SourceRef;
+}
+
+export type WaterKind = 'fresh' | 'salt' | 'custom';
+
+export interface Water {
+  readonly kind: WaterKind;
+  readonly densityKgM3: number;
+}
+
+/** Where the boat runs. altitudeM is kept when the file gave altitude rather than pressure. */
+export interface Site {
+  readonly label: string;
+  readonly ambient: Ambient;
+  readonly altitudeM?: number;
+}
+
+/** A cruise setting of interest: by power, by engine rpm, or by boat speed (knots). */
+export type CruiseSetting =
+  | { readonly kind: 'power'; readonly label: string; readonly powerKw: number }
+  | { readonly kind: 'rpm'; readonly label: string; readonly speedRpm: number }
+  | { readonly kind: 'speed'; readonly label: string; readonly speedKn: number };
+
+export type HullType = 'runabout' | 'cruiser' | 'high-speed-runabout' | 'workboat' | 'race';
+
+export interface Hull {
+  readonly description: string;
+  readonly type: HullType;
+  /** Loaded displacement used for speed estimates. */
+  readonly displacementKg: number;
+  /** Crouch hull constant when the file states one. */
+  readonly crouchConstant?: number;
+}
+
+/** One sea-trial record: what was measured at WOT with a given impeller. */
+export interface SeaTrial {
+  /** ISO date, YYYY-MM-DD. */
+  readonly date: string;
+  readonly impellerId: string;
+  readonly wotRpm: number;
+  readonly speedKn?: number;
+  /** Load aboard beyond the hull's displacement (people, gear), kg. */
+  readonly loadKg?: number;
+  /** Conditions of the trial; the boat's site when the record gives none. */
+  readonly ambient: Ambient;
+  readonly water: Water;
+  readonly notes?: string;
+}
+
+export interface Boat {
+  readonly id: string;
+  readonly name: string;
+  readonly hull: Hull;
+  readonly engineFamilyId: string;
+  readonly engineVariantId: string;
+  /** The resolved engine variant (same object as in the family). */
+  readonly engine: EngineVariant;
+  readonly jetId: string;
+  readonly jet: JetUnit;
+  readonly impellerId: string;
+  readonly driveLine: DriveLineSpec;
+  readonly water: Water;
+  readonly site: Site;
+  readonly cruise: readonly CruiseSetting[];
+  readonly fuelTankL?: number;
+  readonly trials: readonly SeaTrial[];
+  readonly notes?: string;
+  readonly source: SourceRef;
+}
+
+export type PaperSize = 'A3' | 'A4' | 'A5' | 'A6' | 'Letter' | 'Legal' | 'Tabloid' | 'Card4x6';
+export type Orientation = 'portrait' | 'landscape';
+
+export interface Paper {
+  readonly size: PaperSize;
+  readonly orientation: Orientation;
+  /** 0 or 3 (mm); with bleed the sheet gets crop marks. */
+  readonly bleedMm: number;
+}
+
+/** Conditions a wall chart is drawn for, when no boat fixes them. */
+export interface ChartConditions {
+  readonly driveLine: DriveLineSpec;
+  readonly water: Water;
+  readonly site: Site;
+  /** Constant-power cruise lines to draw, kW. */
+  readonly cruisePowersKw: readonly number[];
+}
+
+export type SheetRequest =
+  | {
+      readonly kind: 'wallChart';
+      readonly engineFamilyId: string;
+      readonly jetId: string;
+      readonly conditions: ChartConditions;
+      readonly paper: Paper;
+    }
+  | { readonly kind: 'specSheet'; readonly boatId: string; readonly paper: Paper }
+  | { readonly kind: 'consoleCard'; readonly boatId: string; readonly paper: Paper }
+  | { readonly kind: 'upgradeSheet'; readonly boatId: string; readonly paper: Paper };
+
+export type Audience = 'shop' | 'dealer' | 'owner';
+
+export interface Book {
+  readonly id: string;
+  readonly title: string;
+  readonly audience: Audience;
+  readonly sheets: readonly SheetRequest[];
+  readonly source: SourceRef;
+}
+
+export type PowerUnit = 'kW' | 'hp';
+export type SpeedUnit = 'kn' | 'mph' | 'km/h';
+
+export interface SiteConfig {
+  readonly shopName: string;
+  readonly contactLine: string;
+  readonly powerUnitFirst: PowerUnit;
+  readonly speedUnit: SpeedUnit;
+  /** Replaces the built-in cautions when a shop must use its own (each entry one sentence). */
+  readonly cautions?: readonly string[];
+  /** Shown on every sheet as the data revision ("2026-11 rev 3"). */
+  readonly dataRevision: string;
+  /** ISO date printed on sheets when SOURCE_DATE_EPOCH is not set. */
+  readonly issueDate: string;
+}
+
+export interface Project {
+  readonly site: SiteConfig;
+  /** Each list sorted by id. */
+  readonly engines: readonly EngineFamily[];
+  readonly jets: readonly JetUnit[];
+  readonly boats: readonly Boat[];
+  readonly books: readonly Book[];
+}
+
+/** A located problem in the data. line and column are 1-based. */
+export interface DataError {
+  readonly file: string;
+  readonly line: number;
+  readonly column: number;
+  /** Dotted path of the field, e.g. "impellers[2].rating_kw". Empty for whole-file problems. */
+  readonly field: string;
+  /** What was found, shown to the user (already shortened). */
+  readonly found: string;
+  /** What was expected, and how to fix it. */
+  readonly expected: string;
+  /** The whole sentence, as printed: "data/jets/x.yaml:14:17 rating_kw must be ..., found -3.4". */
+  readonly message: string;
+}
+
+export type LoadResult =
+  | { readonly ok: true; readonly project: Project; readonly warnings: readonly DataError[] }
+  | { readonly ok: false; readonly errors: readonly DataError[]; readonly warnings: readonly DataError[] };
