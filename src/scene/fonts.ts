@@ -20,15 +20,8 @@ export const FONT_FILES: Readonly<Record<FontWeight, string>> = Object.freeze({
 });
 
 /**
- * OpenType features used when shaping for measurement and for the PDF. Ligatures and contextual
- * alternates are off so one character is one glyph (predictable widths, clean text extraction);
- * kerning is off because pdf-lib draws plain advances, and the SVG asks for `font-kerning: none`.
+ * OpenType features used when shaping for measurement and for the PDF: the font's defaults
+ * (ligatures included, as every SVG viewer and resvg apply them and resvg cannot turn them off)
+ * with kerning off, because pdf-lib draws plain advances and the SVG asks for `font-kerning: none`.
  */
-export const SHAPING_FEATURES: Readonly<Record<string, boolean>> = Object.freeze({
-  liga: false,
-  clig: false,
-  dlig: false,
-  hlig: false,
-  calt: false,
-  kern: false,
-});
+export const SHAPING_FEATURES: Readonly<Record<string, boolean>> = Object.freeze({ kern: false });

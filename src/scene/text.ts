@@ -1,7 +1,7 @@
 /**
  * Text metrics with the embedded font, so every renderer and every collision check agree on how
- * wide a run of text is. Widths are plain glyph advances (no kerning, no ligatures): exactly what
- * pdf-lib's widthOfTextAtSize returns for the same font and shaping features.
+ * wide a run of text is. Widths are the sum of glyph advances after shaping with SHAPING_FEATURES
+ * (ligatures yes, kerning no): exactly what pdf-lib's widthOfTextAtSize returns for the same font.
  */
 import { readFileSync } from 'node:fs';
 import * as fontkit from 'fontkit';
