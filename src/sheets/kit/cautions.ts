@@ -1,0 +1,75 @@
+/**
+ * The cautions every sheet carries. Built-in wording is our own; a shop's SiteConfig.cautions replaces it
+ * (each entry one sentence).
+ */
+import type { SiteConfig } from '../../data/types.ts';
+import type { SceneNode } from '../../scene/types.ts';
+import { type Block, linePitchMm, paragraph, label, ascentMm } from './block.ts';
+import { STROKE, WARN, INK, stroke } from './style.ts';
+
+/** Built-in cautions, in the order printed. */
+export const BUILT_IN_CAUTIONS: readonly string[] = [
+  'These figures are predictions from published data and a physical model: estimates only. Confirm them by a sea trial before relying on them.',
+  "Never run the engine past its maker's maximum rpm.",
+  "Impeller changes and engine work belong to a qualified marine technician following the engine and jet makers' instructions and local regulations.",
+];
+
+/** The cautions a sheet prints: the shop's own when it set them, else the built-in ones. */
+export function cautionsFor(site: SiteConfig): readonly string[] {
+  return site.cautions && site.cautions.length > 0 ? site.cautions : BUILT_IN_CAUTIONS;
+}
+
+/** Cautions block: a heading and one paragraph per caution, with a warning bar at the left edge. */
+export function cautionsBlock(args: {
+  site: SiteConfig;
+  x: number;
+  y: number;
+  widthMm: number;
+  sizePt: number;
+  headingPt: number;
+  where: string;
+}): Block {
+  const barMm = 1.2;
+  const indentMm = barMm + 2;
+  const innerX = args.x + indentMm;
+  const innerW = args.widthMm - indentMm;
+  const nodes: SceneNode[] = [];
+  const heading = label({
+    x: innerX,
+    y: args.y + ascentMm(args.headingPt, 'bold'),
+    text: 'Cautions',
+    sizePt: args.headingPt,
+    weight: 'bold',
+    colour: INK,
+    role: 'cautions-heading',
+    where: `${args.where}: cautions`,
+  });
+  nodes.push(heading);
+  let cursor = args.y + linePitchMm(args.headingPt, 'bold');
+  const gap = linePitchMm(args.sizePt) * 0.25;
+  for (const text of cautionsFor(args.site)) {
+    const p = paragraph({
+      x: innerX,
+      y: cursor,
+      widthMm: innerW,
+      text,
+      sizePt: args.sizePt,
+      role: 'caution',
+      where: `${args.where}: cautions`,
+    });
+    nodes.push(...p.nodes);
+    cursor += p.heightMm + gap;
+  }
+  const heightMm = cursor - gap - args.y;
+  nodes.unshift({
+    type: 'rect',
+    role: 'cautions-bar',
+    x: args.x,
+    y: args.y,
+    width: barMm,
+    height: heightMm,
+    fill: { colour: WARN },
+    stroke: stroke(WARN, STROKE.hairline),
+  });
+  return { nodes: [{ type: 'group', role: 'cautions', children: nodes }], heightMm };
+}

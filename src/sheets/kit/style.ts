@@ -1,0 +1,123 @@
+/**
+ * Style tokens shared by every sheet: ink, series colours, dash patterns, marker shapes, type sizes
+ * and stroke widths. Series are told apart three ways (colour, dash, marker) plus a direct label, so a
+ * greyscale photocopy still reads.
+ *
+ * Series colours: the Okabe–Ito palette (M. Okabe and K. Ito, "Color Universal Design (CUD): How to make
+ * figures and presentations that are friendly to colorblind people", J*Fly, 2002/2008), chosen to stay
+ * distinguishable for the common colour-vision deficiencies. Its yellow (#F0E442) is left out: on white
+ * paper it vanishes in a photocopy.
+ */
+import type { Colour, Stroke } from '../../scene/types.ts';
+import type { Paper, PaperSize } from '../../data/types.ts';
+import { MM_PER_PT } from '../../scene/text.ts';
+
+/** Text and rules: near-black so photocopies keep full contrast. */
+export const INK: Colour = '#000000';
+/** Secondary text (axis titles, notes): still dark enough to photocopy (about 75 % black). */
+export const INK_SOFT: Colour = '#333333';
+/** Grid lines. */
+export const GRID: Colour = '#9a9a9a';
+/** Warnings (over-rev, lugging): Okabe–Ito vermillion, always paired with words. */
+export const WARN: Colour = '#D55E00';
+export const PAPER_WHITE: Colour = '#ffffff';
+/** Recommended-window band fill. */
+export const WINDOW_FILL: Colour = '#009E73';
+
+/** Okabe–Ito series colours in the order series take them (yellow omitted, see above). */
+export const SERIES_COLOURS: readonly Colour[] = [
+  '#0072B2', // blue
+  '#D55E00', // vermillion
+  '#009E73', // bluish green
+  '#CC79A7', // reddish purple
+  '#E69F00', // orange
+  '#56B4E9', // sky blue
+  '#000000', // black
+];
+
+/** Dash patterns (mm) in series order; the first is solid. Chosen to differ at a glance in grey. */
+export const SERIES_DASHES: readonly (readonly number[])[] = [
+  [],
+  [4, 1.5],
+  [1, 1.2],
+  [5, 1.2, 1, 1.2],
+  [2.2, 1.2],
+  [6, 1.5, 1, 1.2, 1, 1.5],
+  [0.6, 0.9],
+];
+
+export type MarkerShape = 'circle' | 'square' | 'triangle' | 'diamond' | 'triangleDown' | 'cross' | 'star';
+export const SERIES_MARKERS: readonly MarkerShape[] = [
+  'circle',
+  'square',
+  'triangle',
+  'diamond',
+  'triangleDown',
+  'cross',
+  'star',
+];
+
+/** Everything that identifies one series on paper. */
+export interface SeriesStyle {
+  readonly colour: Colour;
+  readonly dashMm: readonly number[];
+  readonly marker: MarkerShape;
+}
+
+/**
+ * Style of the i-th series (0-based). Colour and dash cycle with co-prime periods (7 and 7 shifted by
+ * a turn each lap) so two series never share colour, dash and marker together.
+ */
+export function seriesStyle(index: number): SeriesStyle {
+  const lap = Math.floor(index / SERIES_COLOURS.length);
+  return {
+    colour: SERIES_COLOURS[index % SERIES_COLOURS.length],
+    dashMm: SERIES_DASHES[(index + lap) % SERIES_DASHES.length],
+    marker: SERIES_MARKERS[(index + 2 * lap) % SERIES_MARKERS.length],
+  };
+}
+
+/** Stroke widths (mm). The thinnest is 0.7 pt, above the 0.5 pt print minimum. */
+export const STROKE = {
+  hairline: 0.25,
+  grid: 0.25,
+  rule: 0.35,
+  axis: 0.4,
+  series: 0.6,
+  engine: 0.9,
+  emphasis: 1.2,
+} as const;
+
+/** The minimum stroke the print rules allow: 0.5 pt. */
+export const MIN_STROKE_MM = 0.5 * MM_PER_PT;
+
+/** Type sizes (pt) of one sheet; `min` is the smallest size the sheet may use anywhere. */
+export interface TypeScale {
+  readonly min: number;
+  readonly small: number;
+  readonly body: number;
+  readonly heading: number;
+  readonly title: number;
+  /** Big numbers on console cards. */
+  readonly display: number;
+}
+
+const LARGE_PAPER: ReadonlySet<PaperSize> = new Set<PaperSize>(['A3', 'Tabloid']);
+
+/** Smallest type allowed on the paper: 10 pt on A3/Tabloid (read across a workshop), 8 pt on A4 and smaller. */
+export function minTypePt(paper: Paper): number {
+  return LARGE_PAPER.has(paper.size) ? 10 : 8;
+}
+
+/** Type scale for a paper size. */
+export function typeScale(paper: Paper): TypeScale {
+  if (LARGE_PAPER.has(paper.size)) {
+    return { min: 10, small: 10, body: 11, heading: 14, title: 22, display: 36 };
+  }
+  return { min: 8, small: 8, body: 9, heading: 11, title: 16, display: 28 };
+}
+
+/** A stroke from the tokens. */
+export function stroke(colour: Colour, widthMm: number, dashMm?: readonly number[]): Stroke {
+  return dashMm && dashMm.length > 0 ? { colour, widthMm, dashMm, cap: 'butt' } : { colour, widthMm, cap: 'butt' };
+}

@@ -1,0 +1,108 @@
+/**
+ * Tables with columns measured from their real text: each column is as wide as its widest cell plus
+ * padding. A table that cannot fit its width even at the sheet's smallest type size is a LayoutError
+ * (never clipped). Alternate rows get a light tint so a row can be followed across a wide sheet.
+ */
+import type { Colour, FontWeight, SceneNode } from '../../scene/types.ts';
+import { measureTextMm } from '../../scene/text.ts';
+import { ascentMm, label, linePitchMm, type Block } from './block.ts';
+import { LayoutError } from './errors.ts';
+import { INK, STROKE, stroke } from './style.ts';
+
+export interface Column {
+  readonly header: string;
+  readonly align: 'left' | 'right';
+}
+
+export type Cell = string | { readonly text: string; readonly weight?: FontWeight; readonly colour?: Colour };
+
+const PAD_MM = 1.6;
+const ZEBRA: Colour = '#ececec';
+
+function cellText(cell: Cell): { text: string; weight: FontWeight; colour: Colour } {
+  return typeof cell === 'string' ? { text: cell, weight: 'regular', colour: INK } : { text: cell.text, weight: cell.weight ?? 'regular', colour: cell.colour ?? INK };
+}
+
+/** Column widths (mm) at a size: widest cell (header bold) plus padding on both sides. */
+function columnWidths(columns: readonly Column[], rows: readonly (readonly Cell[])[], sizePt: number): number[] {
+  return columns.map((col, c) => {
+    let w = measureTextMm({ text: col.header, sizePt, weight: 'bold' });
+    for (const row of rows) {
+      const cell = cellText(row[c]);
+      w = Math.max(w, measureTextMm({ text: cell.text, sizePt, weight: cell.weight }));
+    }
+    return w + 2 * PAD_MM;
+  });
+}
+
+/** A table whose top-left is (x, y); uses sizePt, shrinking toward minSizePt only if it must. */
+export function table(args: {
+  x: number;
+  y: number;
+  maxWidthMm: number;
+  columns: readonly Column[];
+  rows: readonly (readonly Cell[])[];
+  sizePt: number;
+  minSizePt: number;
+  /** Spread spare width over the columns so the table spans maxWidthMm. */
+  fullWidth?: boolean;
+  role?: string;
+  where: string;
+}): Block & { widthMm: number; sizePt: number } {
+  for (const row of args.rows) {
+    if (row.length !== args.columns.length) {
+      throw new LayoutError(args.where, `a table row has ${row.length} cells, expected ${args.columns.length}`);
+    }
+  }
+  let sizePt = args.sizePt;
+  let widths = columnWidths(args.columns, args.rows, sizePt);
+  let total = widths.reduce((a, b) => a + b, 0);
+  if (total > args.maxWidthMm) {
+    // Width is proportional to size, so one step lands on the size that fits (rounded down to 0.1 pt).
+    sizePt = Math.floor(((sizePt * args.maxWidthMm) / total) * 10) / 10;
+    if (sizePt < args.minSizePt) {
+      throw new LayoutError(args.where, `the table needs ${total.toFixed(0)} mm at ${args.sizePt} pt but has ${args.maxWidthMm.toFixed(0)} mm, and would need type under ${args.minSizePt} pt; use wider paper or fewer columns`);
+    }
+    widths = columnWidths(args.columns, args.rows, sizePt);
+    total = widths.reduce((a, b) => a + b, 0);
+  }
+  if (args.fullWidth && total < args.maxWidthMm) {
+    const extra = (args.maxWidthMm - total) / widths.length;
+    widths = widths.map((w) => w + extra);
+    total = args.maxWidthMm;
+  }
+  const rowPitch = linePitchMm(sizePt, 'bold') + 0.6;
+  const baselineOffset = 0.3 + ascentMm(sizePt, 'bold');
+  const nodes: SceneNode[] = [];
+  const lefts = widths.map((_, i) => args.x + widths.slice(0, i).reduce((a, b) => a + b, 0));
+  const emitRow = (cells: readonly Cell[], top: number, header: boolean): void => {
+    cells.forEach((raw, c) => {
+      const cell = header ? { text: cellText(raw).text, weight: 'bold' as const, colour: INK } : cellText(raw);
+      const right = args.columns[c].align === 'right';
+      nodes.push(
+        label({
+          x: right ? lefts[c] + widths[c] - PAD_MM : lefts[c] + PAD_MM,
+          y: top + baselineOffset,
+          text: cell.text,
+          sizePt,
+          weight: cell.weight,
+          colour: cell.colour,
+          anchor: right ? 'end' : 'start',
+          role: header ? 'table-header' : 'table-cell',
+          where: args.where,
+        }),
+      );
+    });
+  };
+  emitRow(args.columns.map((c) => c.header), args.y, true);
+  const bodyTop = args.y + rowPitch;
+  args.rows.forEach((row, r) => {
+    const top = bodyTop + r * rowPitch;
+    if (r % 2 === 1) nodes.push({ type: 'rect', role: 'table-zebra', x: args.x, y: top, width: total, height: rowPitch, fill: { colour: ZEBRA } });
+    emitRow(row, top, false);
+  });
+  const heightMm = rowPitch * (args.rows.length + 1);
+  const line = (y: number, w: number): SceneNode => ({ type: 'path', role: 'table-rule', segments: [{ op: 'M', x: args.x, y }, { op: 'L', x: args.x + total, y }], stroke: stroke(INK, w) });
+  nodes.push(line(args.y, STROKE.rule), line(bodyTop, STROKE.rule), line(args.y + heightMm, STROKE.rule));
+  return { nodes: [{ type: 'group', role: args.role ?? 'table', children: nodes }], heightMm, widthMm: total, sizePt };
+}
