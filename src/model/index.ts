@@ -1,0 +1,21 @@
+/** Public API of the physics model: pure functions, powers in kW, speeds in rpm. */
+export type * from './types.ts';
+export { engineCurve, type CurveKind, type CurveValue, type EngineCurve } from './engineCurve.ts';
+export { hermiteSlope, hermiteValue, type HermitePiece } from './monotoneCubic.ts';
+export {
+  ambientPowerFactor,
+  compressionIgnitionCorrection,
+  DEFAULT_ENGINE_FACTOR_FM,
+  dryAirPressureKpa,
+  isaPressureKpa,
+  sparkIgnitionCorrection,
+  waterVapourPressureKpa,
+} from './ambient.ts';
+export { FRESH_WATER_KG_M3, SALT_WATER_KG_M3 } from './water.ts';
+export { absorbedPowerKw, makeAbsorber, speedAtAbsorbedPowerRpm, type Absorber } from './absorption.ts';
+export { operatingPoint, REASONS, type MatchStatus, type OperatingPoint } from './operatingPoint.ts';
+export { installationAbsorber, solveInstallation, type Installation } from './installation.ts';
+export { operatingBand, type OperatingBand } from './toleranceBand.ts';
+export { cruiseAtRpm, cruiseRpmAtPower } from './cruise.ts';
+export { swapFromKnownPoint } from './swap.ts';
+export { powerChangeForRpm, upgradeOperatingPoint } from './upgrade.ts';
