@@ -8,16 +8,19 @@ import type { Box, PathNode } from './types.ts';
 
 const MM_PER_IN = 25.4;
 
+/** Inches → mm, rounded to the µm so 8.5 in is exactly 215.9 mm in floating point too. */
+const inchesMm = (inches: number): number => Math.round(inches * MM_PER_IN * 1000) / 1000;
+
 /** Portrait width × height in mm. */
 const PORTRAIT_MM: Readonly<Record<PaperSize, readonly [number, number]>> = Object.freeze({
   A3: [297, 420],
   A4: [210, 297],
   A5: [148, 210],
   A6: [105, 148],
-  Letter: [8.5 * MM_PER_IN, 11 * MM_PER_IN],
-  Legal: [8.5 * MM_PER_IN, 14 * MM_PER_IN],
-  Tabloid: [11 * MM_PER_IN, 17 * MM_PER_IN],
-  Card4x6: [4 * MM_PER_IN, 6 * MM_PER_IN],
+  Letter: [inchesMm(8.5), inchesMm(11)],
+  Legal: [inchesMm(8.5), inchesMm(14)],
+  Tabloid: [inchesMm(11), inchesMm(17)],
+  Card4x6: [inchesMm(4), inchesMm(6)],
 });
 
 /** Trim size of a sheet in mm for a paper size and orientation. */

@@ -31,10 +31,11 @@ const fontFor = (() => {
   };
 })();
 
-// C0 and C1 control characters (tab, newline, NUL…) have no place in a one-line run of text.
-const CONTROL_CHARS = /[\u0000-\u001f\u007f-\u009f]/g;
+// C0 and C1 control characters (tab, newline, NUL…) have no place in a one-line run of text, and
+// bidirectional marks, embeddings, overrides and isolates could make a label display reversed.
+const CONTROL_CHARS = /[\u0000-\u001f\u007f-\u009f\u200e\u200f\u202a-\u202e\u2066-\u2069]/g;
 
-/** The text as every renderer draws it: control characters removed. */
+/** The text as every renderer draws it: control and bidirectional-control characters removed. */
 export function printableText(text: string): string {
   return text.replace(CONTROL_CHARS, '');
 }
