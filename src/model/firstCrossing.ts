@@ -9,7 +9,7 @@
  *     the only root and safeguarded Newton (bisection whenever Newton leaves the bracket) refines it;
  *   - otherwise split in half and search the left half first, so the first crossing wins.
  */
-import { hermiteMaxSlope, hermiteSlope, hermiteValue, type HermitePiece } from './monotoneCubic.ts';
+import { hermiteMaxSlope, hermiteValue, type HermitePiece } from './monotoneCubic.ts';
 
 /** Bisection depth cap: 2^-60 of a piece is far below any meaningful rpm. */
 const MAX_DEPTH = 60;
@@ -71,17 +71,24 @@ function searchPiece(
 /** Root of a strictly falling surplus on [u, v], s(u) ≥ 0 > s(v): Newton kept inside a shrinking bracket. */
 function refine(p: HermitePiece, c: number, k: number, u: number, su: number, v: number, sv: number): number {
   if (su === 0) return u;
+  // Cubic in t = (x − x0)/h: y = y0 + t·(A + t·(B + t·C)), dy/dx = (A + t·(2B + 3C·t)) / h.
+  const h = p.x1 - p.x0;
+  const d = p.y1 - p.y0;
+  const A = h * p.m0;
+  const B = 3 * d - 2 * A - h * p.m1;
+  const C = A + h * p.m1 - 2 * d;
   let a = u;
   let b = v;
   // Start from the secant (regula falsi) point: already close when the piece is nearly straight.
   let x = u + ((v - u) * su) / (su - sv);
   for (let iter = 0; iter < 100; iter++) {
+    const t = (x - p.x0) / h;
     const ab = absorbed(c, k, x);
-    const sx = hermiteValue(p, x) - ab;
+    const sx = p.y0 + t * (A + t * (B + t * C)) - ab;
     if (sx === 0) return x;
     if (sx > 0) a = x;
     else b = x;
-    const slope = hermiteSlope(p, x) - (k * ab) / x;
+    const slope = (A + t * (2 * B + 3 * C * t)) / h - (k * ab) / x;
     let next = x - sx / slope;
     if (!(next > a && next < b)) next = 0.5 * (a + b);
     if (Math.abs(next - x) <= 1e-13 * x || b - a <= 1e-13 * b) return next;
