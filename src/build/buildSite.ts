@@ -1,0 +1,58 @@
+/**
+ * One complete build: load and validate the data, compute and write everything into a staging folder,
+ * let Eleventy write the pages there, then swap the staging folder in as the output. Any failure leaves
+ * the previous output exactly as it was.
+ */
+import { loadProject } from '../data/load.ts';
+import type { DataError } from '../data/types.ts';
+import { checkOutputFolder, createStaging, discardStaging, swapIn } from './atomicDir.ts';
+import { buildDateIso } from './dateIso.ts';
+import type { BuildCache } from './renderCache.ts';
+import { writePages } from './runEleventy.ts';
+import { writeSiteFiles, type SiteCounts } from './siteFiles.ts';
+
+export interface BuildOptions {
+  readonly dataDir: string;
+  readonly outDir: string;
+  /** The SOURCE_DATE_EPOCH environment value, if any. */
+  readonly sourceDateEpoch?: string;
+  readonly onProgress?: (done: number, total: number) => void;
+  /** Reuse rendered sheets across builds in one process (dev server, benchmarks). */
+  readonly cache?: BuildCache;
+}
+
+export type BuildOutcome =
+  | { readonly ok: true; readonly counts: SiteCounts & { readonly pages: number }; readonly warningsText: string }
+  | { readonly ok: false; readonly errorsText: string; readonly warningsText: string };
+
+/** Every data problem on its own line, then a count. */
+export function formatDataErrors(errors: readonly DataError[], what: 'problem' | 'warning'): string {
+  if (errors.length === 0) return '';
+  const lines = [...new Set(errors.map((e) => e.message))];
+  return `${lines.join('\n')}\n${lines.length} ${what}${lines.length === 1 ? '' : 's'} in the data.\n`;
+}
+
+/** Builds the site from dataDir into outDir atomically. */
+export async function buildSite(opts: BuildOptions): Promise<BuildOutcome> {
+  checkOutputFolder({ outDir: opts.outDir, dataDir: opts.dataDir });
+  const loaded = await loadProject(opts.dataDir);
+  const warningsText = formatDataErrors(loaded.warnings, 'warning');
+  if (!loaded.ok) return { ok: false, errorsText: formatDataErrors(loaded.errors, 'problem'), warningsText };
+  const dateIso = buildDateIso({ sourceDateEpoch: opts.sourceDateEpoch, issueDate: loaded.project.site.issueDate });
+  const staging = createStaging(opts.outDir);
+  try {
+    const { site, counts } = await writeSiteFiles({
+      project: loaded.project,
+      dateIso,
+      dir: staging,
+      cache: opts.cache,
+      onProgress: opts.onProgress,
+    });
+    const pages = await writePages({ site, outDir: staging });
+    swapIn({ staging, outDir: opts.outDir });
+    return { ok: true, counts: { ...counts, pages }, warningsText };
+  } catch (error) {
+    discardStaging(staging);
+    throw error;
+  }
+}

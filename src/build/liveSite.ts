@@ -1,0 +1,39 @@
+/**
+ * Site data for the dev server and for running Eleventy directly: recomputed from the data folder
+ * before every (re)build, files written straight into the served folder (no atomic swap: the page
+ * reloads after the rebuild anyway). Rendered sheets are reused through the content-hash cache.
+ */
+import { loadProject } from '../data/load.ts';
+import { formatDataErrors } from './buildSite.ts';
+import { buildDateIso } from './dateIso.ts';
+import { createBuildCache } from './renderCache.ts';
+import { writeSiteFiles } from './siteFiles.ts';
+import type { SiteData } from './siteView.ts';
+
+export class InvalidDataError extends Error {}
+
+export interface LiveSiteOptions {
+  readonly dataDir: string;
+  readonly outDir: string;
+  /** Where messages go (problems in the data, rebuild summaries). */
+  readonly report?: (text: string) => void;
+}
+
+/** A function Eleventy calls on every build to get fresh site data. */
+export function liveSiteData(opts: LiveSiteOptions): () => Promise<SiteData> {
+  const cache = createBuildCache();
+  const report = opts.report ?? ((text: string) => process.stderr.write(text));
+  return async () => {
+    const startMs = performance.now();
+    const loaded = await loadProject(opts.dataDir);
+    report(formatDataErrors(loaded.warnings, 'warning'));
+    if (!loaded.ok) {
+      report(formatDataErrors(loaded.errors, 'problem'));
+      throw new InvalidDataError('the data has problems; fix them and save again');
+    }
+    const dateIso = buildDateIso({ sourceDateEpoch: process.env.SOURCE_DATE_EPOCH, issueDate: loaded.project.site.issueDate });
+    const { site, counts } = await writeSiteFiles({ project: loaded.project, dateIso, dir: opts.outDir, cache });
+    report(`rebuilt ${counts.sheets} sheets in ${((performance.now() - startMs) / 1000).toFixed(1)} s\n`);
+    return site;
+  };
+}

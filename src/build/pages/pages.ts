@@ -1,0 +1,74 @@
+/** The bodies of the site's pages; templates/ only pick the page and its data. */
+import { html, type SafeHtml } from '../html.ts';
+import type { BoatView, BookView, FamilyView, SiteView } from '../siteView.ts';
+import { pageLayout } from './layout.ts';
+import { facts, linkList, sheetFigure, table } from './parts.ts';
+
+function section(id: string, title: string, body: SafeHtml): SafeHtml {
+  return html`<section id="${id}" aria-labelledby="${id}-title"><h2 id="${id}-title">${title}</h2>${body}</section>`;
+}
+
+function none(list: readonly unknown[], text: string): SafeHtml | null {
+  return list.length === 0 ? html`<p>${text}</p>` : null;
+}
+
+/** The front page: engine families, jet units, boats and books. */
+export function indexPage(site: SiteView): string {
+  const root = '';
+  const body = html`<h1>${site.shopName}: impeller matching charts</h1>
+<p class="lede">Predicted wide-open-throttle (WOT) operating points of waterjet impellers on marine engines,
+as wall charts for the shop, spec sheets for dealers and console cards for owners.</p>
+${section('families', 'Engine families', html`${none(site.families, 'No engine families defined.')}${linkList(
+    site.families.map((f) => ({ label: `${f.label} (${f.maker})`, href: f.href })),
+    root,
+  )}`)}
+${section('jets', 'Jet units', html`${none(site.jets, 'No jet units defined.')}${site.jets.map(
+    (j) => html`<h3 id="jet-${j.id}">${j.label} (${j.maker})</h3>${table(j.table)}`,
+  )}`)}
+${section('boats', 'Boats', html`${none(site.boats, 'No boats defined.')}${linkList(
+    site.boats.map((b) => ({ label: b.name, href: b.href })),
+    root,
+  )}`)}
+${section('books', 'Chart books', html`${none(site.books, 'No books defined.')}<ul class="links">${site.books.map(
+    (b) => html`<li><a href="${root}${b.href}">${b.title}</a> (for the ${b.audience}, ${b.sheets.length} sheets,
+<a href="${root}${b.pdfHref}" download>PDF</a>)</li>`,
+  )}</ul>`)}
+<p>How the definitions are written: <a href="data-format/index.html">data format</a>.</p>`;
+  return pageLayout({ site, title: 'Impeller matching charts', root, body });
+}
+
+/** One engine family: wall charts inline, results tables, downloads. */
+export function familyPage(site: SiteView, family: FamilyView): string {
+  const root = '../../';
+  const body = html`<h1>${family.label}</h1>
+${facts(family.facts)}${family.notes ? html`<p>${family.notes}</p>` : ''}
+${section('charts', 'Wall charts', html`${none(family.charts, 'No wall charts for this family.')}${family.charts.map((s) => sheetFigure(s, root))}`)}
+${section('results', 'Predicted operating points', html`${family.tables.map(table)}
+<p><a href="${root}${family.resultsHref}" download>Results as JSON</a> (shape described in
+<a href="${root}${site.resultsDocHref}">results.md</a>).</p>`)}
+${section('boats', 'Boats with this engine family', html`${none(family.boats, 'No boats use this family.')}${linkList(family.boats, root)}`)}`;
+  return pageLayout({ site, title: family.label, root, body, sheets: family.charts });
+}
+
+/** One boat: spec sheet and console card inline, tables, downloads. */
+export function boatPage(site: SiteView, boat: BoatView): string {
+  const root = '../../';
+  const body = html`<h1>${boat.name}</h1>
+${facts(boat.facts)}${boat.notes ? html`<p>${boat.notes}</p>` : ''}
+${linkList(boat.links, root)}
+${section('results', 'Predictions', html`${boat.tables.map(table)}
+<p><a href="${root}${boat.resultsHref}" download>Results as JSON</a> (shape described in
+<a href="${root}${site.resultsDocHref}">results.md</a>).</p>`)}
+${section('sheets', 'Sheets', html`${boat.sheets.map((s) => sheetFigure(s, root))}`)}`;
+  return pageLayout({ site, title: boat.name, root, body, sheets: boat.sheets });
+}
+
+/** One chart book: its PDF and every sheet in order. */
+export function bookPage(site: SiteView, book: BookView): string {
+  const root = '../../';
+  const body = html`<h1>${book.title}</h1>
+<p>A book for the ${book.audience} of ${book.sheets.length} sheets.
+<a href="${root}${book.pdfHref}" download>Download the whole book as one PDF</a> (one bookmark per sheet).</p>
+${section('sheets', 'Sheets', html`${book.sheets.map((s) => sheetFigure(s, root))}`)}`;
+  return pageLayout({ site, title: book.title, root, body, sheets: book.sheets });
+}

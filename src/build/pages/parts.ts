@@ -1,0 +1,54 @@
+/** Building blocks of pages: tables, fact lists, sheet figures with their downloads. */
+import { html, trustedHtml, type SafeHtml } from '../html.ts';
+import type { LinkView, SheetView, TableView } from '../siteView.ts';
+
+/** A real HTML table with a caption and header cells. */
+export function table(t: TableView): SafeHtml {
+  const cls = (i: number) => (t.numeric.includes(i) ? 'num' : null);
+  return html`<div class="table-wrap"><table>
+<caption>${t.caption}</caption>
+<thead><tr>${t.head.map((h, i) => html`<th scope="col"${cls(i) ? html` class="num"` : ''}>${h}</th>`)}</tr></thead>
+<tbody>
+${t.rows.map(
+  (row) =>
+    html`<tr>${row.map((cell, i) =>
+      i === 0 ? html`<th scope="row">${cell}</th>` : html`<td${cls(i) ? html` class="num"` : ''}>${cell}</td>`,
+    )}</tr>
+`,
+)}</tbody>
+</table>${t.note ? html`<p class="table-note">${t.note}</p>` : ''}</div>`;
+}
+
+/** A definition list of label/value pairs. */
+export function facts(pairs: readonly (readonly [string, string])[]): SafeHtml {
+  return html`<dl class="facts">${pairs.map(([k, v]) => html`<dt>${k}</dt><dd>${v}</dd>`)}</dl>`;
+}
+
+/** A list of links. */
+export function linkList(links: readonly LinkView[], root: string): SafeHtml {
+  return html`<ul class="links">${links.map((l) => html`<li><a href="${root}${l.href}">${l.label}</a></li>`)}</ul>`;
+}
+
+/** The three download links of one sheet. */
+export function downloads(sheet: SheetView, root: string): SafeHtml {
+  const d = sheet.downloads;
+  return html`<p class="downloads">Download ${sheet.title}:
+<a href="${root}${d.pdf}" download>PDF</a>
+<a href="${root}${d.svg}" download>SVG</a>
+<a href="${root}${d.png}" download>PNG (150 dpi)</a></p>`;
+}
+
+/**
+ * One sheet inline: the SVG is the chart, its <desc> and the visible text alternative below carry
+ * the same description for people who cannot see it. Printing shows only these figures, each on
+ * a page of its own paper size.
+ */
+export function sheetFigure(sheet: SheetView, root: string): SafeHtml {
+  const descId = `desc-${sheet.slug}`;
+  return html`<figure class="sheet" id="sheet-${sheet.slug}" data-sheet-kind="${sheet.kind}" style="page: ${sheet.printPage}">
+<div class="sheet-art" role="img" aria-labelledby="title-${sheet.slug}" aria-describedby="${descId}">${trustedHtml(sheet.svgInline)}</div>
+<figcaption><span id="title-${sheet.slug}" class="sheet-title">${sheet.title}</span>
+<details class="text-alternative"><summary>Chart in words</summary><p id="${descId}">${sheet.description}</p></details>
+${downloads(sheet, root)}</figcaption>
+</figure>`;
+}

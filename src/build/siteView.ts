@@ -1,0 +1,117 @@
+/**
+ * What the templates see: plain, already-formatted views of the project, computed once per build
+ * by src/build and handed to Eleventy as the global data "site". Hrefs are relative to the site root
+ * ("sheets/x.svg"); pages prefix them with the way back to the root so the site also works when
+ * opened from disk.
+ */
+
+/** A table of already-formatted cells; numbers right-aligned by column. */
+export interface TableView {
+  readonly caption: string;
+  readonly head: readonly string[];
+  readonly rows: readonly (readonly string[])[];
+  /** Columns (by index) that hold numbers. */
+  readonly numeric: readonly number[];
+  /** Optional plain sentence under the table. */
+  readonly note?: string;
+}
+
+export interface Downloads {
+  readonly svg: string;
+  readonly png: string;
+  readonly pdf: string;
+}
+
+/** One sheet: inline SVG for the page, text alternative, downloads. */
+export interface SheetView {
+  readonly slug: string;
+  readonly kind: string;
+  readonly title: string;
+  /** Text alternative of the whole chart (Scene.description). */
+  readonly description: string;
+  /** The sheet's SVG, ready to inline (no XML prolog, ids made unique per sheet). */
+  readonly svgInline: string;
+  /** CSS page name for printing at paper size, e.g. "A4-landscape". */
+  readonly printPage: string;
+  readonly widthMm: number;
+  readonly heightMm: number;
+  readonly downloads: Downloads;
+}
+
+export interface LinkView {
+  readonly label: string;
+  readonly href: string;
+}
+
+export interface FamilyView {
+  readonly id: string;
+  readonly label: string;
+  readonly maker: string;
+  readonly href: string;
+  readonly notes?: string;
+  readonly facts: readonly (readonly [string, string])[];
+  readonly charts: readonly SheetView[];
+  readonly tables: readonly TableView[];
+  readonly boats: readonly LinkView[];
+  readonly resultsHref: string;
+}
+
+export interface BoatView {
+  readonly id: string;
+  readonly name: string;
+  readonly href: string;
+  readonly notes?: string;
+  readonly facts: readonly (readonly [string, string])[];
+  readonly links: readonly LinkView[];
+  readonly sheets: readonly SheetView[];
+  readonly tables: readonly TableView[];
+  readonly resultsHref: string;
+}
+
+export interface BookView {
+  readonly id: string;
+  readonly title: string;
+  readonly audience: string;
+  readonly href: string;
+  readonly pdfHref: string;
+  readonly sheets: readonly SheetView[];
+}
+
+export interface JetView {
+  readonly id: string;
+  readonly label: string;
+  readonly maker: string;
+  readonly table: TableView;
+}
+
+export interface SiteView {
+  readonly shopName: string;
+  readonly contactLine: string;
+  readonly dataRevision: string;
+  readonly dateIso: string;
+  readonly cautions: readonly string[];
+  readonly families: readonly FamilyView[];
+  readonly jets: readonly JetView[];
+  readonly boats: readonly BoatView[];
+  readonly books: readonly BookView[];
+  readonly schemas: readonly LinkView[];
+  /** Where the results JSON shape is documented (docs/results.md, copied into the site). */
+  readonly resultsDocHref: string;
+}
+
+/**
+ * The global data object. A class instance on purpose: Eleventy deep-copies plain objects into every
+ * page's data, which for a thousand boats would copy the whole site a thousand times.
+ */
+export class SiteData {
+  constructor(readonly view: SiteView) {}
+  get families(): readonly FamilyView[] {
+    return this.view.families;
+  }
+  get boats(): readonly BoatView[] {
+    return this.view.boats;
+  }
+  get books(): readonly BookView[] {
+    return this.view.books;
+  }
+}

@@ -1,0 +1,126 @@
+/** Assembles the templates' view of the site from the project, the drawn sheets and the analyses. */
+import type { BoatResult } from '../analysis/boat.ts';
+import type { WallChartResult } from '../analysis/wallChart.ts';
+import type { Boat, EngineFamily, JetUnit, Project } from '../data/types.ts';
+import { cautionsFor } from '../sheets/kit/cautions.ts';
+import { powerText, rpmRangeText, rpmWithUnit } from '../sheets/kit/format.ts';
+import { boatTables } from './boatTables.ts';
+import type { SheetPlan } from './planSheets.ts';
+import type { BoatView, FamilyView, JetView, SheetView, SiteView } from './siteView.ts';
+import { wallChartTables } from './wallChartTables.ts';
+
+export interface SiteViewArgs {
+  readonly project: Project;
+  readonly dateIso: string;
+  readonly plan: SheetPlan;
+  readonly sheets: ReadonlyMap<string, SheetView>;
+  readonly boatResults: ReadonlyMap<string, BoatResult>;
+  readonly familyResults: ReadonlyMap<string, readonly WallChartResult[]>;
+  /** File names of the JSON Schemas copied to schema/. */
+  readonly schemas: readonly string[];
+}
+
+function pick(sheets: ReadonlyMap<string, SheetView>, slugs: readonly string[] | undefined): SheetView[] {
+  return (slugs ?? []).map((slug) => sheets.get(slug)).filter((s): s is SheetView => s !== undefined);
+}
+
+function familyView(args: SiteViewArgs, family: EngineFamily): FamilyView {
+  const unit = args.project.site.powerUnitFirst;
+  return {
+    id: family.id,
+    label: family.label,
+    maker: family.maker,
+    href: `families/${family.id}/index.html`,
+    notes: family.notes,
+    facts: [
+      ['Maker', family.maker],
+      ['Fuel', family.fuel],
+      ['Variants', family.variants.map((v) => v.label).join('; ')],
+      ['Defined in', family.source.file],
+    ],
+    charts: pick(args.sheets, args.plan.byFamily.get(family.id)),
+    tables: (args.familyResults.get(family.id) ?? []).flatMap((r) => wallChartTables(r, unit)),
+    boats: args.project.boats
+      .filter((b) => b.engineFamilyId === family.id)
+      .map((b) => ({ label: b.name, href: `boats/${b.id}/index.html` })),
+    resultsHref: `results/families/${family.id}.json`,
+  };
+}
+
+function boatView(args: SiteViewArgs, boat: Boat): BoatView {
+  const result = args.boatResults.get(boat.id) as BoatResult;
+  const unit = args.project.site.powerUnitFirst;
+  const wot = result.wot;
+  return {
+    id: boat.id,
+    name: boat.name,
+    href: `boats/${boat.id}/index.html`,
+    notes: boat.notes,
+    facts: [
+      ['Hull', boat.hull.description],
+      ['Engine', result.engineLabel],
+      ['Jet unit', result.jetLabel],
+      ['Fitted impeller', result.impellerLabel],
+      ['Drive line', `ratio ${boat.driveLine.ratio.toFixed(3)}, efficiency ${(boat.driveLine.efficiency * 100).toFixed(1)} %`],
+      ['Water', `${boat.water.kind}, ${boat.water.densityKgM3.toFixed(1)} kg/m³`],
+      ['Site', boat.site.label],
+      ['Predicted WOT', `${rpmWithUnit(wot.nominal.speedRpm)} (${rpmRangeText(wot.low.speedRpm, wot.high.speedRpm)}), ${powerText(wot.nominal.powerKw, unit)}`],
+      ['Verdict', wot.verdict],
+      ['Defined in', boat.source.file],
+    ],
+    links: [
+      { label: `Engine family: ${boat.engine.label}`, href: `families/${boat.engineFamilyId}/index.html` },
+      { label: `Jet unit: ${boat.jet.label}`, href: `index.html#jet-${boat.jetId}` },
+    ],
+    sheets: pick(args.sheets, args.plan.byBoat.get(boat.id)),
+    tables: boatTables(result, unit),
+    resultsHref: `results/boats/${boat.id}.json`,
+  };
+}
+
+function jetView(jet: JetUnit, project: Project): JetView {
+  const unit = project.site.powerUnitFirst;
+  const f = jet.family;
+  const tol = f.tolerancePct / 100;
+  return {
+    id: jet.id,
+    label: jet.label,
+    maker: jet.maker,
+    table: {
+      caption: `${jet.label} impellers: power absorbed at ${rpmWithUnit(f.referenceSpeedRpm)} impeller speed (exponent ${f.exponent}, tolerance ±${f.tolerancePct} %)`,
+      head: ['Impeller', `Rating (${unit})`, `Low (${unit})`, `High (${unit})`],
+      numeric: [1, 2, 3],
+      rows: jet.impellers.map((i) => [
+        i.label,
+        powerText(i.ratingKw, unit),
+        powerText(i.ratingKw * (1 - tol), unit),
+        powerText(i.ratingKw * (1 + tol), unit),
+      ]),
+    },
+  };
+}
+
+/** The whole site as the templates see it. */
+export function siteView(args: SiteViewArgs): SiteView {
+  const { project } = args;
+  return {
+    shopName: project.site.shopName,
+    contactLine: project.site.contactLine,
+    dataRevision: project.site.dataRevision,
+    dateIso: args.dateIso,
+    cautions: cautionsFor(project.site),
+    families: project.engines.map((f) => familyView(args, f)),
+    jets: project.jets.map((j) => jetView(j, project)),
+    boats: project.boats.map((b) => boatView(args, b)),
+    books: project.books.map((book) => ({
+      id: book.id,
+      title: book.title,
+      audience: book.audience,
+      href: `books/${book.id}/index.html`,
+      pdfHref: `books/${book.id}.pdf`,
+      sheets: pick(args.sheets, args.plan.byBook.get(book.id)),
+    })),
+    schemas: args.schemas.map((name) => ({ label: name, href: `schema/${name}` })),
+    resultsDocHref: 'docs/results.md',
+  };
+}

@@ -1,0 +1,41 @@
+/** Help texts of the matchbook command line, in plain words. */
+import type { CommandName } from './args.ts';
+
+const GENERAL = `matchbook: impeller-to-engine matching charts from YAML definitions.
+
+Usage: matchbook <command> [options]
+
+Commands:
+  build   check the data and write the site and chart books
+  check   check the data only and list every problem found
+  serve   build, serve the site locally and rebuild when a file changes
+
+Run "matchbook <command> --help" for a command's options.
+Exit status: 0 done, 1 the data has problems, 2 the command was misused, 3 matchbook failed (a bug).
+`;
+
+const COMMANDS: Readonly<Record<CommandName, string>> = {
+  build: `Usage: matchbook build [--data DIR] [--out DIR]
+
+Checks the definitions in DIR (default: data), computes every match and writes the site, every
+sheet as SVG, PNG and PDF, every book as one PDF and the results as JSON into the output folder
+(default: out). The output folder is replaced only when the whole build succeeds.
+Set SOURCE_DATE_EPOCH to fix the date printed on the sheets.
+`,
+  check: `Usage: matchbook check [--data DIR]
+
+Checks the definitions in DIR (default: data) without writing anything and lists every problem
+with its file, line, column and field. Exit status 1 when there is a problem.
+`,
+  serve: `Usage: matchbook serve [--data DIR] [--out DIR] [--port N]
+
+Builds the site into the output folder (default: out), serves it on http://localhost:N/
+(default 8080) and rebuilds and reloads the page when a definition or template changes.
+Stop with Ctrl+C.
+`,
+};
+
+/** The help text for one command, or the general help. */
+export function helpText(command?: CommandName): string {
+  return command === undefined ? GENERAL : COMMANDS[command];
+}

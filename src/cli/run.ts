@@ -1,0 +1,51 @@
+/**
+ * The top of the command line: parse, dispatch, and turn every failure into a plain message and an
+ * exit status (0 done, 1 invalid data, 2 misuse, 3 internal failure). No stack trace reaches a user.
+ */
+import { parseArgs, UsageError } from './args.ts';
+import { helpText } from './help.ts';
+import type { CliIo } from './io.ts';
+import { runBuild } from './build.ts';
+import { runCheck } from './check.ts';
+import { runServe } from './serve.ts';
+import { OutputFolderError } from '../build/atomicDir.ts';
+import { BuildDateError } from '../build/dateIso.ts';
+
+export const EXIT_OK = 0;
+export const EXIT_INVALID_DATA = 1;
+export const EXIT_MISUSE = 2;
+export const EXIT_INTERNAL = 3;
+
+/** Runs one matchbook command; resolves to the exit status. */
+export async function runCli(argv: readonly string[], io: CliIo): Promise<number> {
+  try {
+    const args = parseArgs(argv);
+    switch (args.command) {
+      case 'help':
+        io.out(helpText(args.helpFor));
+        return EXIT_OK;
+      case 'build':
+        return await runBuild(args, io);
+      case 'check':
+        return await runCheck(args, io);
+      case 'serve':
+        return await runServe(args, io);
+    }
+  } catch (error) {
+    return reportFailure(error, io);
+  }
+}
+
+/** Prints one failure as a sentence and picks its exit status. */
+export function reportFailure(error: unknown, io: CliIo): number {
+  if (error instanceof UsageError || error instanceof OutputFolderError || error instanceof BuildDateError) {
+    io.err(`matchbook: ${error.message}\n${error instanceof UsageError ? 'Run "matchbook --help" for usage.\n' : ''}`);
+    return EXIT_MISUSE;
+  }
+  const message = error instanceof Error ? error.message : String(error);
+  io.err(
+    `matchbook: the build stopped unexpectedly: ${message.split('\n')[0]}\n` +
+      'This is a fault in matchbook, not in your data; please report it with the command you ran.\n',
+  );
+  return EXIT_INTERNAL;
+}

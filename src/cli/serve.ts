@@ -1,0 +1,34 @@
+/** `matchbook serve`: Eleventy's dev server; editing a YAML file or a template rebuilds and reloads. */
+import { resolve } from 'node:path';
+import Eleventy from '@11ty/eleventy';
+import { checkOutputFolder } from '../build/atomicDir.ts';
+import { configureEleventy, TEMPLATES_DIR, type EleventyConfigApi } from '../build/eleventySetup.ts';
+import { InvalidDataError, liveSiteData } from '../build/liveSite.ts';
+import type { ParsedArgs } from './args.ts';
+import type { CliIo } from './io.ts';
+
+/** Serves until Ctrl+C; resolves to the exit status. */
+export async function runServe(args: ParsedArgs, io: CliIo): Promise<number> {
+  checkOutputFolder({ outDir: args.outDir, dataDir: args.dataDir });
+  const dataDir = resolve(args.dataDir);
+  const outDir = resolve(args.outDir);
+  const eleventy = new Eleventy(TEMPLATES_DIR, outDir, {
+    runMode: 'serve',
+    quietMode: true,
+    configPath: false,
+    config: (config: EleventyConfigApi) =>
+      configureEleventy(config, { site: liveSiteData({ dataDir, outDir, report: io.err }), watch: [dataDir] }),
+  });
+  eleventy.disableLogger();
+  try {
+    await eleventy.watch();
+  } catch (error) {
+    if (error instanceof InvalidDataError) return 1;
+    throw error;
+  }
+  await eleventy.serve(args.port);
+  io.out(`serving ${args.outDir} at http://localhost:${args.port}/ ; watching ${args.dataDir} and the templates. Ctrl+C stops.\n`);
+  await new Promise<void>((done) => process.once('SIGINT', () => done()));
+  await eleventy.stopWatch();
+  return 0;
+}

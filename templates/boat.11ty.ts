@@ -1,0 +1,12 @@
+// One page per boat (paginated over the site's boats).
+import { boatPage } from '../src/build/pages/pages.ts';
+import type { BoatView, SiteData } from '../src/build/siteView.ts';
+
+export const data = {
+  pagination: { data: 'site.boats', size: 1, alias: 'boat' },
+  permalink: (d: { boat: BoatView }) => d.boat.href,
+};
+
+export function render(d: { site: SiteData; boat: BoatView }): string {
+  return boatPage(d.site.view, d.boat);
+}

@@ -1,0 +1,12 @@
+// One page per chart book (paginated over the site's books).
+import { bookPage } from '../src/build/pages/pages.ts';
+import type { BookView, SiteData } from '../src/build/siteView.ts';
+
+export const data = {
+  pagination: { data: 'site.books', size: 1, alias: 'book' },
+  permalink: (d: { book: BookView }) => d.book.href,
+};
+
+export function render(d: { site: SiteData; book: BookView }): string {
+  return bookPage(d.site.view, d.book);
+}

@@ -1,0 +1,9 @@
+// The data-format page with links to the JSON Schemas.
+import { dataFormatPage } from '../src/build/pages/dataFormatPage.ts';
+import type { SiteData } from '../src/build/siteView.ts';
+
+export const data = { permalink: 'data-format/index.html' };
+
+export function render(d: { site: SiteData }): string {
+  return dataFormatPage(d.site.view);
+}

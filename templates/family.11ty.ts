@@ -1,0 +1,12 @@
+// One page per engine family (paginated over the site's families).
+import { familyPage } from '../src/build/pages/pages.ts';
+import type { FamilyView, SiteData } from '../src/build/siteView.ts';
+
+export const data = {
+  pagination: { data: 'site.families', size: 1, alias: 'family' },
+  permalink: (d: { family: FamilyView }) => d.family.href,
+};
+
+export function render(d: { site: SiteData; family: FamilyView }): string {
+  return familyPage(d.site.view, d.family);
+}
