@@ -33,6 +33,9 @@ export interface EngineFamily {
 export interface EngineVariant extends EngineSpec {
   readonly familyId: string;
   readonly variantId: string;
+  /** The variant's own label ("380 hp tune"); EngineSpec.label is family label + variant label. */
+  readonly variantLabel: string;
+  readonly notes?: string;
 }
 
 export interface JetUnit {
@@ -188,8 +191,10 @@ export interface DataError {
   readonly field: string;
   /** What was found, shown to the user (already shortened). */
   readonly found: string;
-  /** What was expected, and how to fix it. */
+  /** What was expected ("must be a positive number"). */
   readonly expected: string;
+  /** How to fix it, when there is more to say than the expectation. */
+  readonly fix?: string;
   /** The whole sentence, as printed: "data/jets/x.yaml:14:17 rating_kw must be ..., found -3.4". */
   readonly message: string;
 }

@@ -1,0 +1,72 @@
+/**
+ * Located data errors: one sentence a technician can act on, naming file, line, column, field,
+ * the value found, what was expected and, where it helps, the fix.
+ */
+import type { DataError } from './types.ts';
+
+/** What a check reports before it is given its place in a file. */
+export interface Problem {
+  readonly field: string;
+  readonly found: string;
+  readonly expected: string;
+  readonly fix?: string;
+}
+
+/** A place in a file, 1-based line and column. */
+export interface Place {
+  readonly file: string;
+  readonly line: number;
+  readonly column: number;
+}
+
+/** Build the DataError and its printed sentence: "file:line:col field expected, found X — fix". */
+export function dataError(place: Place, problem: Problem): DataError {
+  const subject = problem.field === '' ? 'the file' : problem.field;
+  const fix = problem.fix ? ` — ${problem.fix}` : '';
+  return {
+    file: place.file,
+    line: place.line,
+    column: place.column,
+    field: problem.field,
+    found: problem.found,
+    expected: problem.expected,
+    ...(problem.fix ? { fix: problem.fix } : {}),
+    message: `${place.file}:${place.line}:${place.column} ${subject} ${problem.expected}, found ${problem.found}${fix}`,
+  };
+}
+
+/** Sort by file, line, column, then message, and drop exact repeats (one variant's fault reported per file once). */
+export function sortErrors(errors: readonly DataError[]): DataError[] {
+  const seen = new Set<string>();
+  const unique = errors.filter((e) => (seen.has(e.message) ? false : (seen.add(e.message), true)));
+  return unique.sort(
+    (a, b) =>
+      compareText(a.file, b.file) || a.line - b.line || a.column - b.column || compareText(a.message, b.message),
+  );
+}
+
+/** Code-point order, independent of the machine's locale (deterministic output). */
+export function compareText(a: string, b: string): number {
+  return a < b ? -1 : a > b ? 1 : 0;
+}
+
+/** Shorten a found value for a one-line message. */
+export function shorten(text: string, maxChars = 48): string {
+  const oneLine = text.replace(/\s+/g, ' ').trim();
+  return oneLine.length > maxChars ? `${oneLine.slice(0, maxChars - 1)}…` : oneLine;
+}
+
+/** Render a JavaScript value the way a technician would recognise it from the file. */
+export function describeValue(value: unknown): string {
+  if (value === undefined) return 'nothing';
+  if (value === null) return 'nothing (an empty value)';
+  if (typeof value === 'string') return shorten(JSON.stringify(value));
+  if (typeof value === 'number') {
+    if (Number.isNaN(value)) return '.nan (not a number)';
+    if (!Number.isFinite(value)) return value > 0 ? '.inf (infinity)' : '-.inf (minus infinity)';
+    return String(value);
+  }
+  if (Array.isArray(value)) return `a list of ${value.length} ${value.length === 1 ? 'entry' : 'entries'}`;
+  if (typeof value === 'object') return 'a mapping (key: value lines)';
+  return shorten(String(value));
+}

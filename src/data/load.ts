@@ -1,0 +1,164 @@
+/**
+ * The loader: YAML files → a validated, unit-normalised Project, or every located error at once.
+ * Nothing half-built ever leaves: one error anywhere and the result is the error list.
+ */
+import { readdir, readFile, stat } from 'node:fs/promises';
+import { posix } from 'node:path';
+import { compareText, dataError, sortErrors } from './errors.ts';
+import { classify, KIND_DIRS, type FileKind, type SourceFile } from './files.ts';
+import { normaliseBoat } from './normalise/boat.ts';
+import { normaliseBook } from './normalise/book.ts';
+import { normaliseEngine } from './normalise/engine.ts';
+import { normaliseJet } from './normalise/jet.ts';
+import type { Normalised } from './normalise/shared.ts';
+import { normaliseSite } from './normalise/site.ts';
+import { boatFile, bookFile, engineFile, jetFile, siteFile } from './schema/index.ts';
+import type { Boat, Book, DataError, EngineFamily, JetUnit, LoadResult, SiteConfig } from './types.ts';
+import { at, validate } from './validate.ts';
+import { MAX_FILE_BYTES, parseYaml, type YamlSource } from './yamlSource.ts';
+
+export type { SourceFile } from './files.ts';
+
+const SCHEMAS = { engine: engineFile(), jet: jetFile(), boat: boatFile(), book: bookFile(), site: siteFile() } as const;
+
+/** A file that parsed and passed its schema (raw still in file units). */
+interface Checked {
+  readonly kind: FileKind;
+  readonly stem: string;
+  readonly source?: YamlSource;
+  readonly raw: unknown;
+}
+
+/** Load every definition under dataDir (engines/, jets/, boats/, books/, site.yaml). Never throws. */
+export async function loadProject(dataDir: string): Promise<LoadResult> {
+  const root = dataDir.replace(/\\/g, '/').replace(/\/+$/, '') || '.';
+  try {
+    if (!(await stat(root)).isDirectory()) return folderError(root, 'a file');
+  } catch {
+    return folderError(root, 'nothing there');
+  }
+  const paths = [posix.join(root, 'site.yaml')];
+  for (const dir of Object.keys(KIND_DIRS)) {
+    const names = await readdir(posix.join(root, dir)).catch(() => [] as string[]);
+    paths.push(...names.sort().map((n) => posix.join(root, dir, n)));
+  }
+  const rootNames = await readdir(root).catch(() => [] as string[]);
+  paths.push(...rootNames.filter((n) => /\.ya?ml$/.test(n) && n !== 'site.yaml').sort().map((n) => posix.join(root, n)));
+  const files = (await Promise.all(paths.map(readSource))).filter((f): f is SourceFile => f !== null);
+  return loadProjectFromFiles(files, { dataDir: root });
+}
+
+function folderError(root: string, found: string): LoadResult {
+  const e = dataError({ file: root, line: 1, column: 1 }, { field: '', expected: 'must be the data folder (holding site.yaml, engines/, jets/, boats/, books/)', found, fix: 'pass --data with the right folder' });
+  return { ok: false, errors: [{ ...e, message: e.message.replace(' the file ', ' the folder ') }], warnings: [] };
+}
+
+async function readSource(path: string): Promise<SourceFile | null> {
+  try {
+    const info = await stat(path);
+    if (!info.isFile()) return null;
+    if (info.size > MAX_FILE_BYTES) {
+      return { path, text: '', unreadable: { expected: `must be at most ${MAX_FILE_BYTES / 1024 / 1024} MB`, found: `${(info.size / 1024 / 1024).toFixed(1)} MB`, fix: 'definitions are small; split or trim the file' } };
+    }
+    return { path, text: await readFile(path, 'utf8') };
+  } catch (err) {
+    const code = (err as { code?: string }).code;
+    if (code === 'ENOENT') return null;
+    return { path, text: '', unreadable: { expected: 'must be readable', found: code ?? 'an error', fix: 'check the file permissions' } };
+  }
+}
+
+/** Pure core of the loader: the same answer for the same files, in any order. */
+export function loadProjectFromFiles(files: readonly SourceFile[], opts: { dataDir?: string } = {}): LoadResult {
+  const errors: DataError[] = [];
+  const warnings: DataError[] = [];
+  const checked: Checked[] = [];
+  const seen = new Map<string, string>();
+  let root = opts.dataDir;
+  for (const f of [...files].sort((a, b) => compareText(a.path, b.path))) {
+    const c = classify(f.path);
+    const place = { file: f.path, line: 1, column: 1 };
+    if (c.kind === 'ignored') {
+      if (c.reason) warnings.push(dataError(place, { field: '', ...c.reason }));
+      continue;
+    }
+    root ??= c.root;
+    const key = `${c.kind}:${c.stem}`;
+    if (seen.has(key)) {
+      errors.push(dataError(place, { field: 'id', expected: `must be unique among ${c.kind} files`, found: `"${c.stem}" again (also ${seen.get(key)})`, fix: 'remove one copy' }));
+      continue;
+    }
+    seen.set(key, f.path);
+    if (f.unreadable) {
+      errors.push(dataError(place, { field: '', ...f.unreadable }));
+      checked.push({ kind: c.kind, stem: c.stem, raw: undefined });
+      continue;
+    }
+    const one = checkFile({ path: f.path, text: f.text, kind: c.kind, stem: c.stem });
+    errors.push(...one.errors);
+    checked.push({ kind: c.kind, stem: c.stem, source: one.source, raw: one.raw });
+  }
+  const built = buildProject(checked);
+  errors.push(...built.errors);
+  warnings.push(...built.warnings);
+  if (!checked.some((c) => c.kind === 'site')) {
+    errors.push(dataError({ file: posix.join(root ?? '.', 'site.yaml'), line: 1, column: 1 }, { field: '', expected: 'must exist (shop name, contact line, data revision, issue date)', found: 'no such file', fix: 'create it; see docs/data-format.md' }));
+  }
+  if (errors.length > 0 || !built.site) return { ok: false, errors: sortErrors(errors), warnings: sortErrors(warnings) };
+  return { ok: true, project: { site: built.site, engines: built.engines, jets: built.jets, boats: built.boats, books: built.books }, warnings: sortErrors(warnings) };
+}
+
+/** Parse, validate and check the id of one file; raw is undefined unless it passed. */
+function checkFile(args: { path: string; text: string; kind: FileKind; stem: string }): { errors: DataError[]; source?: YamlSource; raw?: unknown } {
+  const parsed = parseYaml({ file: args.path, text: args.text });
+  if (!parsed.ok) return { errors: parsed.errors };
+  const source = parsed.source;
+  const idErrors = args.kind === 'site' ? [] : idCheck(source, args.stem);
+  const v = validate(source, SCHEMAS[args.kind]);
+  if (!v.ok) return { errors: [...v.errors, ...idErrors], source };
+  return { errors: idErrors, source, raw: idErrors.length === 0 ? v.value : undefined };
+}
+
+/** The id must equal the file name, so references and file names never disagree. */
+function idCheck(source: YamlSource, stem: string): DataError[] {
+  const value = source.value as { id?: unknown } | null;
+  const id = typeof value === 'object' && value !== null ? value.id : undefined;
+  if (typeof id !== 'string' || id === stem) return [];
+  return [at(source, ['id'], { expected: `must match the file name (${stem}.yaml)`, fix: `change id to ${stem}, or rename the file to ${id}.yaml` })];
+}
+
+interface Built {
+  errors: DataError[];
+  warnings: DataError[];
+  site?: SiteConfig;
+  engines: EngineFamily[];
+  jets: JetUnit[];
+  boats: Boat[];
+  books: Book[];
+}
+
+/** Normalise in dependency order: engines and jets, then boats, then books. */
+function buildProject(checked: readonly Checked[]): Built {
+  const errors: DataError[] = [];
+  const warnings: DataError[] = [];
+  const of = (kind: FileKind) => checked.filter((c) => c.kind === kind);
+  // Each kind's registry: every file's stem, null where the file did not load.
+  const registry = <T>(kind: FileKind, run: (c: Checked & { source: YamlSource }) => Normalised<T>): Map<string, T | null> =>
+    new Map(
+      of(kind).map((c) => {
+        if (c.raw === undefined || !c.source) return [c.stem, null];
+        const r = run({ ...c, source: c.source });
+        warnings.push(...r.warnings);
+        if (!r.ok) errors.push(...r.errors);
+        return [c.stem, r.ok ? r.value : null];
+      }),
+    );
+  const engines = registry('engine', (c) => normaliseEngine(c.source, c.raw as never));
+  const jets = registry('jet', (c) => normaliseJet(c.source, c.raw as never));
+  const boats = registry('boat', (c) => normaliseBoat(c.source, c.raw as never, { engines, jets }));
+  const books = registry('book', (c) => normaliseBook(c.source, c.raw as never, { engines, jets, boats }));
+  const siteFileChecked = of('site')[0];
+  const site = siteFileChecked?.raw !== undefined ? normaliseSite(siteFileChecked.raw as never) : undefined;
+  const sorted = <T extends { id: string }>(m: Map<string, T | null>) => [...m.values()].filter((x): x is T => x !== null).sort((a, b) => compareText(a.id, b.id));
+  return { errors, warnings, site, engines: sorted(engines), jets: sorted(jets), boats: sorted(boats), books: sorted(books) };
+}

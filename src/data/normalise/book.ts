@@ -1,0 +1,63 @@
+/** Book file → Book: each sheet's references checked, paper resolved (sheet's own or the book's). */
+import { hpToKw } from '../../units.ts';
+import { resolve, type Registry } from '../references.ts';
+import type { RawBookFile, RawPaper, RawSheet } from '../schema/book.ts';
+import type { Boat, Book, DataError, EngineFamily, JetUnit, Paper, SheetRequest } from '../types.ts';
+import type { YamlSource } from '../yamlSource.ts';
+import { toSite, toWater } from './conditions.ts';
+import type { Normalised } from './shared.ts';
+
+export interface BookRegistries {
+  readonly engines: Registry<EngineFamily>;
+  readonly jets: Registry<JetUnit>;
+  readonly boats: Registry<Boat>;
+}
+
+/** Normalise a validated book file against the loaded engines, jets and boats. */
+export function normaliseBook(source: YamlSource, raw: RawBookFile, reg: BookRegistries): Normalised<Book> {
+  const errors: DataError[] = [];
+  const check = <T>(args: { path: (string | number)[]; id: string; registry: Registry<T>; what: string; where: string }): void => {
+    const r = resolve({ source, ...args });
+    if (r.status === 'unknown') errors.push(r.error);
+  };
+  raw.sheets.forEach((s, i) => {
+    if (s.kind === 'wallChart') {
+      check({ path: ['sheets', i, 'engine'], id: s.engine, registry: reg.engines, what: 'engine families', where: 'data/engines/' });
+      check({ path: ['sheets', i, 'jet'], id: s.jet, registry: reg.jets, what: 'jet units', where: 'data/jets/' });
+    } else {
+      check({ path: ['sheets', i, 'boat'], id: s.boat, registry: reg.boats, what: 'boats', where: 'data/boats/' });
+    }
+  });
+  if (errors.length > 0) return { ok: false, errors, warnings: [] };
+  const book: Book = {
+    id: raw.id,
+    title: raw.title,
+    audience: raw.audience,
+    sheets: raw.sheets.map((s) => toSheet(s, toPaper(s.paper ?? raw.paper))),
+    source: { file: source.file },
+  };
+  return { ok: true, value: book, warnings: [] };
+}
+
+/** File paper → Paper; "4x6" is the 4 × 6 in card. */
+export function toPaper(p: RawPaper): Paper {
+  return { size: p.size === '4x6' ? 'Card4x6' : p.size, orientation: p.orientation, bleedMm: p.bleed_mm };
+}
+
+function toSheet(s: RawSheet, paper: Paper): SheetRequest {
+  if (s.kind !== 'wallChart') return { kind: s.kind, boatId: s.boat, paper };
+  const c = s.conditions;
+  const cruisePowersKw = c.cruise_powers_kw ?? (c.cruise_powers_hp ?? []).map(hpToKw);
+  return {
+    kind: 'wallChart',
+    engineFamilyId: s.engine,
+    jetId: s.jet,
+    conditions: {
+      driveLine: { ratio: c.drive_line.ratio, efficiency: c.drive_line.efficiency },
+      water: toWater(c.water),
+      site: toSite(c.site),
+      cruisePowersKw: [...cruisePowersKw].sort((a, b) => a - b),
+    },
+    paper,
+  };
+}

@@ -1,0 +1,74 @@
+/** Schema of data/boats/<id>.yaml: one boat with its engine, jet, impeller, water, site and trials. */
+import * as z from 'zod';
+import { between, conditions, driveLine, isoDate, positive, rpm, slug, text, unitChoices, water } from './common.ts';
+
+export const HULL_TYPES = ['runabout', 'cruiser', 'high-speed-runabout', 'workboat', 'race'] as const;
+const SPEED_KEYS = ['speed_kn', 'speed_mph', 'speed_kmh'] as const;
+const speedFields = { speed_kn: between(0, 120, 'kn').optional(), speed_mph: between(0, 140, 'mph').optional(), speed_kmh: between(0, 220, 'km/h').optional() };
+
+const hull = () =>
+  unitChoices(
+    z.strictObject({
+      description: text(),
+      type: z.enum(HULL_TYPES, { error: `must be one of ${HULL_TYPES.join(', ')}` }),
+      displacement_kg: between(50, 100000, 'kg').optional(),
+      displacement_lb: between(110, 220000, 'lb').optional(),
+      /** Crouch's hull constant C in V = C / sqrt(lb/shp). */
+      crouch_constant: between(50, 300).optional(),
+    }),
+    [{ keys: ['displacement_kg', 'displacement_lb'], required: true }],
+  );
+
+export const CRUISE_KEYS = ['power_kw', 'power_hp', 'rpm', ...SPEED_KEYS] as const;
+
+const cruise = () =>
+  unitChoices(
+    z.strictObject({ label: text(), power_kw: positive().optional(), power_hp: positive().optional(), rpm: rpm().optional(), ...speedFields }),
+    [{ keys: CRUISE_KEYS, required: true }],
+  );
+
+const trial = () =>
+  unitChoices(
+    z.strictObject({
+      date: isoDate(),
+      impeller: slug(),
+      wot_rpm: rpm(),
+      ...speedFields,
+      load_kg: between(0, 50000, 'kg').optional(),
+      load_lb: between(0, 110000, 'lb').optional(),
+      conditions: conditions().optional(),
+      water: water().optional(),
+      notes: text().optional(),
+    }),
+    [
+      { keys: SPEED_KEYS, required: false },
+      { keys: ['load_kg', 'load_lb'], required: false },
+    ],
+  );
+
+export const boatFile = () =>
+  unitChoices(
+    z.strictObject({
+      id: slug(),
+      name: text(),
+      notes: text().optional(),
+      hull: hull(),
+      /** Engine family id (data/engines/<id>.yaml) and, when it has several, the variant id. */
+      engine: slug(),
+      engine_variant: slug().optional(),
+      jet: slug(),
+      impeller: slug(),
+      drive_line: driveLine().default({ ratio: 1, efficiency: 0.97 }),
+      water: water(),
+      site: conditions().default({}),
+      cruise: z.array(cruise(), { error: 'must be a list of cruise settings' }).default([]),
+      fuel_tank_l: between(1, 100000, 'L').optional(),
+      fuel_tank_us_gal: between(0.3, 26000, 'US gal').optional(),
+      trials: z.array(trial(), { error: 'must be a list of sea-trial records' }).default([]),
+    }),
+    [{ keys: ['fuel_tank_l', 'fuel_tank_us_gal'], required: false }],
+  ).meta({ title: 'matchbook boat', description: 'One boat and its installation: data/boats/<id>.yaml' });
+
+export type RawBoatFile = z.infer<ReturnType<typeof boatFile>>;
+export type RawCruise = RawBoatFile['cruise'][number];
+export type RawTrial = RawBoatFile['trials'][number];

@@ -1,0 +1,55 @@
+/** Schema of data/books/<id>.yaml: a chart book for one audience, its sheets and paper. */
+import * as z from 'zod';
+import { conditions, driveLine, positive, slug, text, unitChoices, water } from './common.ts';
+
+export const PAPER_SIZES = ['A3', 'A4', 'A5', 'A6', 'Letter', 'Legal', 'Tabloid', '4x6'] as const;
+
+export const paper = () =>
+  z.strictObject({
+    size: z.enum(PAPER_SIZES, { error: `must be one of ${PAPER_SIZES.join(', ')}` }),
+    orientation: z.enum(['portrait', 'landscape'], { error: 'must be portrait or landscape' }).default('portrait'),
+    bleed_mm: z.union([z.literal(0), z.literal(3)], { error: 'must be 0 or 3 (mm)' }).default(0),
+  });
+
+const chartConditions = () =>
+  unitChoices(
+    z.strictObject({
+      drive_line: driveLine().default({ ratio: 1, efficiency: 0.97 }),
+      water: water().default('fresh'),
+      site: conditions().default({}),
+      cruise_powers_kw: z.array(positive()).optional(),
+      cruise_powers_hp: z.array(positive()).optional(),
+    }),
+    [{ keys: ['cruise_powers_kw', 'cruise_powers_hp'], required: false }],
+  );
+
+const boatSheet = <K extends string>(kind: K) => z.strictObject({ kind: z.literal(kind), boat: slug(), paper: paper().optional() });
+
+export const SHEET_KINDS = ['wallChart', 'specSheet', 'consoleCard', 'upgradeSheet'] as const;
+
+const sheet = () =>
+  z.discriminatedUnion(
+    'kind',
+    [
+      z.strictObject({ kind: z.literal('wallChart'), engine: slug(), jet: slug(), conditions: chartConditions().default({ drive_line: { ratio: 1, efficiency: 0.97 }, water: 'fresh', site: {} }), paper: paper().optional() }),
+      boatSheet('specSheet'),
+      boatSheet('consoleCard'),
+      boatSheet('upgradeSheet'),
+    ],
+    { error: `must be a sheet whose kind is one of ${SHEET_KINDS.join(', ')}` },
+  );
+
+export const bookFile = () =>
+  z
+    .strictObject({
+      id: slug(),
+      title: text(),
+      audience: z.enum(['shop', 'dealer', 'owner'], { error: 'must be shop, dealer or owner' }),
+      paper: paper(),
+      sheets: z.array(sheet(), { error: 'must be a list of sheets' }).min(1, { error: 'must list at least one sheet' }),
+    })
+    .meta({ title: 'matchbook chart book', description: 'A chart book for one audience: data/books/<id>.yaml' });
+
+export type RawBookFile = z.infer<ReturnType<typeof bookFile>>;
+export type RawPaper = z.infer<ReturnType<typeof paper>>;
+export type RawSheet = RawBookFile['sheets'][number];

@@ -1,0 +1,116 @@
+/**
+ * Building blocks shared by the file schemas. Every message here is our own wording; the same zod
+ * schemas generate the JSON Schemas for editors (scripts/gen-schemas.ts), so ranges live here once.
+ */
+import * as z from 'zod';
+
+export const SLUG_PATTERN = /^[a-z0-9]+(-[a-z0-9]+)*$/;
+export const ISO_DATE_PATTERN = /^\d{4}-\d{2}-\d{2}$/;
+
+/** Lower-case slug: ids of files, variants, impellers, and references to them. */
+export const slug = () =>
+  z.string().regex(SLUG_PATTERN, { error: 'must be a lower-case id like "river-180" (letters a–z, digits, single hyphens)' });
+
+/** Non-empty text. */
+export const text = () => z.string().min(1, { error: 'must not be empty' });
+
+/** A calendar date written YYYY-MM-DD (checked to exist: no 2026-02-30). */
+export const isoDate = () =>
+  z
+    .string()
+    .regex(ISO_DATE_PATTERN, { error: 'must be a date written YYYY-MM-DD, e.g. 2026-05-14' })
+    .refine(isRealDate, { error: 'must be a real calendar date (YYYY-MM-DD)' });
+
+function isRealDate(s: string): boolean {
+  const d = new Date(`${s}T00:00:00Z`);
+  return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === s;
+}
+
+/** A number > 0. */
+export const positive = () => z.number().positive({ error: 'must be a positive number' });
+
+/** A number in [min, max] with the unit named in the message. */
+export const between = (min: number, max: number, unit = '') => {
+  const error = `must be between ${min} and ${max}${unit ? ` ${unit}` : ''}`;
+  return z.number().min(min, { error }).max(max, { error });
+};
+
+/** Engine or impeller shaft speed, rpm. */
+export const rpm = () => between(1, 30000, 'rpm');
+
+/** A ± percentage tolerance, 0–25 %. */
+export const tolerancePct = () => between(0, 25, '%');
+
+/** Water density range the model accepts: brackish lakes to dense brine, kg/m³. */
+export const waterDensity = () => between(950, 1100, 'kg/m³');
+
+/** fresh, salt, or a measured density. */
+export const water = () =>
+  z.union([z.enum(['fresh', 'salt']), z.strictObject({ density_kg_m3: waterDensity() })], {
+    error: 'must be fresh, salt, or a mapping with density_kg_m3 (950–1100)',
+  });
+
+export const driveLine = () =>
+  z.strictObject({
+    ratio: z.number().positive({ error: 'must be a positive number (engine rpm per impeller rpm; 1 for direct drive)' }).max(10, { error: 'must be at most 10' }),
+    efficiency: z.number().gt(0, { error: 'must be greater than 0 and at most 1' }).max(1, { error: 'must be greater than 0 and at most 1' }).default(0.97),
+  });
+
+/** A set of unit-named keys of which exactly one (required) or at most one may be given. */
+export interface UnitChoice {
+  readonly keys: readonly string[];
+  readonly required: boolean;
+}
+
+/** Meta key carrying the unit choices to the JSON Schema generator, which turns them into oneOf/not. */
+export const UNIT_CHOICES_META = 'x-unit-choices';
+
+/**
+ * Enforce unit choices on an object schema ("rating_kw or rating_hp, not both").
+ * Runs even when other fields failed, so one pass reports everything.
+ */
+export function unitChoices<T extends z.ZodObject>(schema: T, choices: readonly UnitChoice[]) {
+  return schema
+    .superRefine(
+      (value, ctx) => {
+        if (typeof value !== 'object' || value === null) return;
+        for (const { keys, required } of choices) {
+          const given = keys.filter((k) => (value as Record<string, unknown>)[k] !== undefined);
+          if (given.length > 1) {
+            ctx.addIssue({ code: 'custom', path: [given[1]], message: `must not be given together with ${given[0]}: give only one of ${keys.join(', ')}` });
+          } else if (given.length === 0 && required) {
+            ctx.addIssue({ code: 'custom', path: [], message: `must give one of ${keys.join(', ')}`, params: { found: 'none of them' } });
+          }
+        }
+      },
+      { when: () => true },
+    )
+    .meta({ [UNIT_CHOICES_META]: choices.map((c) => ({ keys: [...c.keys], required: c.required })) });
+}
+
+/** Air and pressure where a boat runs or a curve was measured. Altitude or pressure, not both. */
+const conditionsShape = {
+  label: text().optional(),
+  altitude_m: between(-500, 6000, 'm'),
+  pressure_kpa: between(40, 110, 'kPa'),
+  pressure_hpa: between(400, 1100, 'hPa'),
+  pressure_inhg: between(12, 32.5, 'inHg'),
+  air_temp_c: between(-40, 60, '°C'),
+  air_temp_f: between(-40, 140, '°F'),
+  humidity_pct: between(0, 100, '%'),
+};
+
+export const PRESSURE_KEYS = ['altitude_m', 'pressure_kpa', 'pressure_hpa', 'pressure_inhg'] as const;
+export const TEMPERATURE_KEYS = ['air_temp_c', 'air_temp_f'] as const;
+
+export function optionalShape<T extends Record<string, z.ZodType>>(shape: T) {
+  return Object.fromEntries(Object.entries(shape).map(([k, v]) => [k, v.optional()])) as { [K in keyof T]: z.ZodOptional<T[K]> };
+}
+
+export const conditions = () =>
+  unitChoices(z.strictObject(optionalShape(conditionsShape)), [
+    { keys: PRESSURE_KEYS, required: false },
+    { keys: TEMPERATURE_KEYS, required: false },
+  ]);
+
+export type RawConditions = z.infer<ReturnType<typeof conditions>>;

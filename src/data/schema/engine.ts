@@ -1,0 +1,85 @@
+/** Schema of data/engines/<id>.yaml: an engine family and its variants (tunes). */
+import * as z from 'zod';
+import { between, optionalShape, positive, rpm, slug, text, tolerancePct, unitChoices } from './common.ts';
+
+export const POWER_UNITS = ['kW', 'hp', 'PS'] as const;
+export const TORQUE_UNITS = ['N·m', 'Nm', 'lbf·ft', 'lbf-ft'] as const;
+export const CURVE_UNITS = [...POWER_UNITS, ...TORQUE_UNITS] as const;
+export type CurveUnit = (typeof CURVE_UNITS)[number];
+
+/** Full-throttle table: rows of [engine rpm, power or torque in `unit`], rpm strictly increasing. */
+export const curveTable = () =>
+  z
+    .strictObject({
+      unit: z.enum(CURVE_UNITS, { error: `must be one of ${CURVE_UNITS.join(', ')}` }),
+      points: z
+        .array(z.tuple([rpm(), positive()], { error: 'must be a row [rpm, value], e.g. [4800, 350]' }), { error: 'must be a list of rows [rpm, value]' })
+        .min(2, { error: 'must have at least 2 rows [rpm, value]' })
+        .max(200, { error: 'must have at most 200 rows' }),
+    })
+    .superRefine(
+      (value, ctx) => {
+        const points = Array.isArray(value?.points) ? value.points : [];
+        for (let i = 1; i < points.length; i++) {
+          const [prev, cur] = [points[i - 1]?.[0], points[i]?.[0]];
+          if (typeof prev === 'number' && typeof cur === 'number' && !(cur > prev)) {
+            ctx.addIssue({ code: 'custom', path: ['points', i, 0], message: `must be greater than the row before (${prev} rpm): rpm must increase down the table` });
+          }
+        }
+      },
+      { when: () => true },
+    );
+
+export const KNOWN_POINT_KEYS = ['power_kw', 'power_hp', 'power_ps', 'torque_nm', 'torque_lbf_ft'] as const;
+
+/** One measured WOT point instead of a table; the model assumes constant torque through it. */
+export const knownPoint = () =>
+  unitChoices(
+    z.strictObject({ rpm: rpm(), ...optionalShape(Object.fromEntries(KNOWN_POINT_KEYS.map((k) => [k, positive()])) as Record<(typeof KNOWN_POINT_KEYS)[number], ReturnType<typeof positive>>) }),
+    [{ keys: KNOWN_POINT_KEYS, required: true }],
+  );
+
+/** Fields a family states for all its variants and a variant may override. */
+const tuneShape = {
+  curve: curveTable(),
+  known_point: knownPoint(),
+  /** Multiplies the curve (or known point) power: 1.08 = an 8 % stronger tune. */
+  curve_scale: between(0.2, 5),
+  idle_rpm: rpm(),
+  wot_window_rpm: z.tuple([rpm(), rpm()], { error: 'must be a pair [low, high] in rpm, e.g. [4600, 5000]' }),
+  max_rpm: rpm(),
+  power_tolerance_pct: tolerancePct(),
+  /** 1 = as published; 0.9 = a tired engine. */
+  condition_factor: between(0.3, 1.5),
+  bsfc_g_per_kwh: between(150, 600, 'g/kWh'),
+  reference_conditions: z.strictObject({
+    pressure_kpa: between(80, 110, 'kPa').optional(),
+    air_temp_c: between(-10, 50, '°C').optional(),
+    humidity_pct: between(0, 100, '%').optional(),
+  }),
+};
+
+const curveChoice = [{ keys: ['curve', 'known_point'], required: false }] as const;
+
+export const engineVariant = () =>
+  unitChoices(z.strictObject({ id: slug(), label: text(), notes: text().optional(), ...optionalShape(tuneShape) }), curveChoice);
+
+export const engineFile = () =>
+  unitChoices(
+    z.strictObject({
+      id: slug(),
+      label: text(),
+      maker: text(),
+      fuel: z.enum(['petrol', 'gasoline', 'diesel'], { error: 'must be petrol, gasoline or diesel' }),
+      aspiration: z.enum(['natural', 'turbocharged'], { error: 'must be natural or turbocharged' }),
+      notes: text().optional(),
+      ...optionalShape(tuneShape),
+      variants: z.array(engineVariant(), { error: 'must be a list of variants, each with id and label' }).min(1, { error: 'must list at least one variant' }),
+    }),
+    curveChoice,
+  ).meta({ title: 'matchbook engine family', description: 'An engine family with its variants (tunes): data/engines/<id>.yaml' });
+
+export type RawEngineFile = z.infer<ReturnType<typeof engineFile>>;
+export type RawVariant = z.infer<ReturnType<typeof engineVariant>>;
+export type RawCurveTable = z.infer<ReturnType<typeof curveTable>>;
+export type RawKnownPoint = z.infer<ReturnType<typeof knownPoint>>;

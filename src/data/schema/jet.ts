@@ -1,0 +1,35 @@
+/** Schema of data/jets/<id>.yaml: a jet unit (housing) and its impeller family. */
+import * as z from 'zod';
+import { between, positive, slug, text, tolerancePct, unitChoices, water } from './common.ts';
+
+export const impeller = () =>
+  unitChoices(
+    z.strictObject({
+      id: slug(),
+      label: text(),
+      /** Shaft power absorbed at the family's reference speed and water density. */
+      rating_kw: positive().optional(),
+      rating_hp: positive().optional(),
+      notes: text().optional(),
+    }),
+    [{ keys: ['rating_kw', 'rating_hp'], required: true }],
+  );
+
+export const jetFile = () =>
+  z
+    .strictObject({
+      id: slug(),
+      label: text(),
+      maker: text(),
+      notes: text().optional(),
+      /** Impeller speed at which the ratings are stated. */
+      reference_speed_rpm: between(100, 10000, 'rpm').default(1000),
+      /** k in P ∝ n^k: 3 is the ideal cube law. */
+      exponent: between(2, 4).default(3),
+      tolerance_pct: tolerancePct().default(5),
+      reference_water: water().default('fresh'),
+      impellers: z.array(impeller(), { error: 'must be a list of impellers, each with id, label and rating_kw or rating_hp' }).min(1, { error: 'must list at least one impeller' }),
+    })
+    .meta({ title: 'matchbook jet unit', description: 'A jet unit with its impeller family: data/jets/<id>.yaml' });
+
+export type RawJetFile = z.infer<ReturnType<typeof jetFile>>;

@@ -1,0 +1,22 @@
+/** Schema of data/site.yaml: the shop's name, units preference and data revision. */
+import * as z from 'zod';
+import { isoDate, text } from './common.ts';
+
+export const siteFile = () =>
+  z
+    .strictObject({
+      shop_name: text(),
+      contact_line: text(),
+      units: z
+        .strictObject({
+          power: z.enum(['kW', 'hp'], { error: 'must be kW or hp' }).default('kW'),
+          speed: z.enum(['kn', 'mph', 'km/h'], { error: 'must be kn, mph or km/h' }).default('kn'),
+        })
+        .default({ power: 'kW', speed: 'kn' }),
+      data_revision: text(),
+      issue_date: isoDate(),
+      cautions: z.array(text(), { error: 'must be a list of sentences' }).min(1, { error: 'must list at least one caution, or be left out' }).optional(),
+    })
+    .meta({ title: 'matchbook site settings', description: 'Shop name, units and data revision: data/site.yaml' });
+
+export type RawSiteFile = z.infer<ReturnType<typeof siteFile>>;

@@ -1,0 +1,187 @@
+/**
+ * YAML text → plain value plus a locator that maps a field path back to line:column in the file.
+ * Guards the parser: size cap, flow-nesting cap (a deeply nested flow collection can exhaust memory
+ * inside the parser, which no try/catch can recover), alias-expansion cap, duplicate keys.
+ */
+import { isAlias, isMap, isScalar, isSeq, LineCounter, parseDocument, type Document, type Node, type Pair } from 'yaml';
+import { dataError, describeValue, shorten } from './errors.ts';
+import type { DataError } from './types.ts';
+
+export const MAX_FILE_BYTES = 5 * 1024 * 1024;
+/** Deepest flow nesting ([ or {) accepted; our formats need at most 4. */
+export const MAX_FLOW_DEPTH = 64;
+/** Aliases (*name) resolved per file; the formats need none, so this only stops expansion bombs. */
+export const MAX_ALIAS_COUNT = 100;
+
+export type PathSegment = string | number;
+
+export interface Located {
+  readonly line: number;
+  readonly column: number;
+  /** The value there as written, for messages; "nothing" when the path does not exist. */
+  readonly found: string;
+  /** False when only an ancestor of the path exists (the position is the ancestor's). */
+  readonly exists: boolean;
+}
+
+export interface YamlSource {
+  readonly file: string;
+  readonly value: unknown;
+  /** Position of the value at path (or of its key with at: 'key'), falling back to the nearest ancestor. */
+  locate(path: readonly PathSegment[], opts?: { at?: 'key' | 'value' }): Located;
+}
+
+export type ParseResult = { ok: true; source: YamlSource } | { ok: false; errors: DataError[] };
+
+/** Parse one file; never throws. */
+export function parseYaml(args: { file: string; text: string }): ParseResult {
+  const { file, text } = args;
+  const whole = (expected: string, found: string, fix?: string): ParseResult => ({
+    ok: false,
+    errors: [dataError({ file, line: 1, column: 1 }, { field: '', expected, found, fix })],
+  });
+  const bytes = Buffer.byteLength(text, 'utf8');
+  if (bytes > MAX_FILE_BYTES) {
+    return whole(`must be at most ${MAX_FILE_BYTES / 1024 / 1024} MB`, `${(bytes / 1024 / 1024).toFixed(1)} MB`, 'definitions are small; split or trim the file');
+  }
+  const depth = flowDepth(text);
+  if (depth.max > MAX_FLOW_DEPTH) {
+    const lc = lineCounterFor(text);
+    const pos = lc.linePos(depth.offset);
+    return {
+      ok: false,
+      errors: [dataError({ file, line: pos.line, column: pos.col }, { field: '', expected: `must not nest [ ] or { } deeper than ${MAX_FLOW_DEPTH} levels`, found: `${depth.max} levels` })],
+    };
+  }
+  try {
+    const lineCounter = new LineCounter();
+    const doc = parseDocument(text, { lineCounter, uniqueKeys: true, schema: 'core', merge: false, prettyErrors: false, strict: true });
+    const problems = [...doc.errors, ...doc.warnings];
+    if (problems.length > 0) {
+      return {
+        ok: false,
+        errors: problems.map((e) => {
+          const pos = lineCounter.linePos(e.pos[0]);
+          return dataError({ file, line: pos.line, column: pos.col }, yamlProblem(e.code, e.message, text.slice(e.pos[0], e.pos[1])));
+        }),
+      };
+    }
+    const value = doc.toJS({ maxAliasCount: MAX_ALIAS_COUNT }) as unknown;
+    return { ok: true, source: { file, value, locate: (path, opts) => locate({ doc, text, lineCounter, path, at: opts?.at ?? 'value' }) } };
+  } catch (err) {
+    // Alias bombs (ReferenceError) and pathological inputs end here: report, never a stack trace.
+    const reason = err instanceof Error ? err.message : String(err);
+    return whole('must be readable YAML', shorten(reason, 80), /alias/i.test(reason) ? 'use fewer anchors/aliases (*name); write the values out' : undefined);
+  }
+}
+
+function yamlProblem(code: string, message: string, excerpt: string): { field: string; expected: string; found: string; fix?: string } {
+  // The parser's own message, cut before its " at line …" tail: our place prefix already says where.
+  const plain = message.split(/ at line \d+/)[0].replace(/\s+/g, ' ').trim();
+  switch (code) {
+    case 'DUPLICATE_KEY':
+      return { field: excerpt, expected: 'must appear only once in its mapping (duplicate key)', found: `a second "${shorten(excerpt, 40)}"`, fix: 'remove or rename one of them' };
+    case 'MULTIPLE_DOCS':
+      return { field: '', expected: 'must hold one YAML document', found: 'a second document after ---', fix: 'remove the --- line or split the file' };
+    case 'TAG_RESOLVE_FAILED':
+      return { field: '', expected: 'must use plain YAML values without custom tags', found: shorten(excerpt, 40), fix: 'remove the tag' };
+    default:
+      return { field: '', expected: 'must be valid YAML', found: `a syntax error (${plain})`, fix: 'check indentation, colons and closing brackets or quotes near here' };
+  }
+}
+
+function lineCounterFor(text: string): LineCounter {
+  const lc = new LineCounter();
+  lc.addNewLine(0);
+  for (let i = 0; i < text.length; i++) if (text.charCodeAt(i) === 10) lc.addNewLine(i + 1);
+  return lc;
+}
+
+/**
+ * Deepest nesting of flow brackets, skipping quoted strings and comments. Over-counts brackets inside
+ * plain scalars, which only makes the guard stricter on text nobody writes.
+ */
+export function flowDepth(text: string): { max: number; offset: number } {
+  let depth = 0;
+  let max = 0;
+  let offset = 0;
+  for (let i = 0; i < text.length; i++) {
+    const c = text[i];
+    if (c === '#' && (i === 0 || /\s/.test(text[i - 1]))) {
+      while (i < text.length && text[i] !== '\n') i++;
+    } else if (c === '"' || c === "'") {
+      i = skipQuoted(text, i);
+    } else if (c === '[' || c === '{') {
+      depth++;
+      if (depth > max) [max, offset] = [depth, i];
+    } else if ((c === ']' || c === '}') && depth > 0) {
+      depth--;
+    }
+  }
+  return { max, offset };
+}
+
+function skipQuoted(text: string, start: number): number {
+  const quote = text[start];
+  for (let i = start + 1; i < text.length; i++) {
+    if (quote === '"' && text[i] === '\\') i++;
+    else if (text[i] === quote) {
+      if (quote === "'" && text[i + 1] === "'") i++;
+      else return i;
+    }
+  }
+  return text.length;
+}
+
+function locate(args: { doc: Document; text: string; lineCounter: LineCounter; path: readonly PathSegment[]; at: 'key' | 'value' }): Located {
+  const { doc, text, lineCounter, path } = args;
+  let node: Node | null = (doc.contents as Node | null) ?? null;
+  let pair: Pair | null = null;
+  let reached = 0;
+  let empty = false;
+  for (const seg of path) {
+    const next = child(doc, node, seg);
+    if (!next) break;
+    [node, pair, empty] = [next.node, next.pair, next.empty];
+    reached++;
+  }
+  const exists = reached === path.length;
+  const keyNode = exists && args.at === 'key' && pair && isScalar(pair.key) ? pair.key : null;
+  const target = keyNode ?? node;
+  const offset = target?.range?.[0] ?? pairKeyOffset(pair) ?? 0;
+  const pos = lineCounter.linePos(Math.min(offset, text.length));
+  const found = !exists ? 'nothing' : keyNode ? JSON.stringify(String(keyNode.value)) : empty ? describeValue(null) : foundText(node, text);
+  return { line: pos.line, column: pos.col, found, exists };
+}
+
+function pairKeyOffset(pair: Pair | null): number | undefined {
+  return pair && isScalar(pair.key) ? pair.key.range?.[0] : undefined;
+}
+
+function child(doc: Document, node: Node | null, seg: PathSegment): { node: Node | null; pair: Pair | null; empty: boolean } | null {
+  const resolved = node && isAlias(node) ? ((node.resolve(doc) as Node | undefined) ?? null) : node;
+  if (isMap(resolved)) {
+    const p = resolved.items.find((it) => isScalar(it.key) && String(it.key.value) === String(seg));
+    if (!p) return null;
+    // An empty value (`key:`) has a zero-width node; point at the key instead.
+    const value = p.value as Node | null;
+    const empty = !value || (isScalar(value) && value.value === null && value.range?.[0] === value.range?.[1]);
+    return { node: empty ? (p.key as Node) : value, pair: p as Pair, empty };
+  }
+  if (isSeq(resolved) && typeof seg === 'number') {
+    const item = resolved.items[seg] as Node | undefined;
+    return item === undefined ? null : { node: item, pair: null, empty: false };
+  }
+  return null;
+}
+
+function foundText(node: Node | null, text: string): string {
+  if (!node) return 'nothing';
+  if (isScalar(node)) {
+    if (typeof node.value === 'number' && node.range) return shorten(text.slice(node.range[0], node.range[1]));
+    return describeValue(node.value);
+  }
+  if (isSeq(node)) return describeValue(node.items);
+  if (isMap(node)) return describeValue({});
+  return 'nothing';
+}
