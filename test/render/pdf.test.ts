@@ -1,0 +1,158 @@
+import { execFileSync } from 'node:child_process';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { PDFArray, PDFDict, PDFDocument, PDFHexString, PDFName, PDFRef } from 'pdf-lib';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { UnsupportedCharacterError } from '../../src/render/errors.ts';
+import { renderPdf } from '../../src/render/pdf.ts';
+import { renderPng } from '../../src/render/png.ts';
+import { textBox, textNode } from '../../src/scene/text.ts';
+import type { Scene } from '../../src/scene/types.ts';
+import { decodePng } from './pngPixels.ts';
+import type { Pixels } from './pngPixels.ts';
+import { everyNodeKindScene, sceneOf } from './scenes.ts';
+
+const OPTIONS = { title: 'Demo chart book', subject: 'Invented demo data', keywords: ['waterjet', 'impeller'], dateIso: '2024-05-01' };
+// 1 pt = 1/72 in, 1 in = 25.4 mm: A4 210 × 297 mm = 595.276 × 841.890 pt (ISO 216 sizes).
+const A4_PT = [(210 / 25.4) * 72, (297 / 25.4) * 72];
+const dir = mkdtempSync(join(tmpdir(), 'matchbook-pdf-'));
+
+/** Writes bytes to a temporary file and runs a poppler tool on it (pdftotext, pdffonts, pdftoppm). */
+function poppler(tool: string, bytes: Uint8Array, args: readonly string[]): string {
+  const file = join(dir, `${tool}.pdf`);
+  writeFileSync(file, bytes);
+  const output = tool === 'pdftotext' ? ['-'] : tool === 'pdftoppm' ? [join(dir, 'page')] : [];
+  return execFileSync(`/usr/bin/${tool}`, [...args, file, ...output], { encoding: 'utf8' });
+}
+
+const TEXT_SCENE: Scene = sceneOf({
+  title: 'Text page',
+  children: [
+    textNode({ text: 'Predicted WOT 5450–5700 rpm', sizePt: 20, weight: 'bold', x: 20, y: 40 }),
+    textNode({ text: 'office fluff · Ωμέγα · Crème brûlée', sizePt: 16, weight: 'regular', x: 20, y: 70 }),
+    textNode({ text: 'Engine speed (rpm)', sizePt: 12, weight: 'regular', x: 15, y: 200, rotateDeg: 90 }),
+    textNode({ text: 'Right-aligned 5600 rpm', sizePt: 14, weight: 'regular', x: 190, y: 100, anchor: 'end' }),
+    textNode({ text: 'Centred caution', sizePt: 14, weight: 'bold', x: 105, y: 130, anchor: 'middle' }),
+    textNode({ text: 'Centred upright', sizePt: 14, weight: 'bold', x: 60, y: 250, anchor: 'middle', rotateDeg: 90 }),
+  ],
+});
+
+describe('renderPdf()', () => {
+  let book: Uint8Array;
+  let doc: PDFDocument;
+  beforeAll(async () => {
+    book = await renderPdf([TEXT_SCENE, everyNodeKindScene(), TEXT_SCENE], { ...OPTIONS, author: 'Demo shop', outline: ['One', 'Two', 'Three'] });
+    doc = await PDFDocument.load(book, { updateMetadata: false });
+  });
+
+  it('writes one page per scene sized in points from the scene mm', () => {
+    expect(doc.getPageCount()).toBe(3);
+    const { width, height } = doc.getPage(0).getSize();
+    expect(width).toBeCloseTo(A4_PT[0], 2);
+    expect(height).toBeCloseTo(A4_PT[1], 2);
+    // Every-node-kind has 3 mm bleed: media 216 × 303 mm, TrimBox 3 mm (8.504 pt) in from each edge.
+    const bled = doc.getPage(1);
+    expect(bled.getMediaBox().width).toBeCloseTo((216 / 25.4) * 72, 2);
+    const trim = bled.getTrimBox();
+    expect(trim.x).toBeCloseTo((3 / 25.4) * 72, 2);
+    expect(trim.y).toBeCloseTo((3 / 25.4) * 72, 2);
+    expect(trim.width).toBeCloseTo(A4_PT[0], 2);
+    expect(bled.getBleedBox().width).toBeCloseTo((216 / 25.4) * 72, 2);
+    expect(doc.getPage(0).node.get(PDFName.of('TrimBox'))).toBeUndefined();
+  });
+
+  it('records title, subject, keywords, author, creator and both dates from the options', () => {
+    expect(doc.getTitle()).toBe('Demo chart book');
+    expect(doc.getSubject()).toBe('Invented demo data');
+    expect(doc.getKeywords()).toBe('waterjet impeller');
+    expect(doc.getAuthor()).toBe('Demo shop');
+    expect(doc.getCreator()).toBe('matchbook');
+    expect(doc.getCreationDate()?.toISOString()).toBe('2024-05-01T00:00:00.000Z');
+    expect(doc.getModificationDate()?.toISOString()).toBe('2024-05-01T00:00:00.000Z');
+  });
+
+  it('embeds both weights as subset TrueType fonts', () => {
+    const fonts = poppler('pdffonts', book, []);
+    expect(fonts).toMatch(/MBKREG\+SourceSans3-Regular\s+CID TrueType\s+Identity-H\s+yes yes yes/);
+    expect(fonts).toMatch(/MBKBLD\+SourceSans3-Bold\s+CID TrueType\s+Identity-H\s+yes yes yes/);
+  });
+
+  it('holds real text that pdftotext extracts, ligatures and Greek included', () => {
+    const text = poppler('pdftotext', book, ['-f', '1', '-l', '1']);
+    expect(text).toContain('Predicted WOT 5450–5700 rpm');
+    expect(text).toContain('office fluff · Ωμέγα · Crème brûlée');
+    expect(text).toContain('Engine speed (rpm)');
+  });
+
+  it('builds an outline with one bookmark per page, in order, each opening its page', () => {
+    const outlines = doc.catalog.lookup(PDFName.of('Outlines'), PDFDict);
+    expect(outlines.get(PDFName.of('Count'))?.toString()).toBe('3');
+    const titles: string[] = [];
+    let ref = outlines.get(PDFName.of('First'));
+    for (let page = 0; ref instanceof PDFRef; page++) {
+      const item = doc.context.lookup(ref, PDFDict);
+      titles.push(item.lookup(PDFName.of('Title'), PDFHexString).decodeText());
+      expect(item.lookup(PDFName.of('Dest'), PDFArray).get(0)).toBe(doc.getPage(page).ref);
+      ref = item.get(PDFName.of('Next'));
+    }
+    expect(titles).toEqual(['One', 'Two', 'Three']);
+  });
+
+  it('produces byte-identical files from two calls', async () => {
+    const again = await renderPdf([TEXT_SCENE, everyNodeKindScene(), TEXT_SCENE], { ...OPTIONS, author: 'Demo shop', outline: ['One', 'Two', 'Three'] });
+    expect(Buffer.from(again).equals(Buffer.from(book))).toBe(true);
+  });
+
+  it('keeps a typical one-page sheet small because fonts are subset', async () => {
+    const page = await renderPdf([everyNodeKindScene()], OPTIONS);
+    expect(poppler('pdfinfo', page, [])).toMatch(/Pages:\s+1\n/);
+    // The two full TTFs together are several hundred kB; subsets of the few glyphs used are a few kB.
+    expect(page.length).toBeLessThan(40_000);
+  });
+
+  it('refuses a character the font lacks with a typed error naming it and the text', async () => {
+    const scene = sceneOf({ children: [textNode({ text: 'Rating 中', sizePt: 10, weight: 'regular', x: 10, y: 10 })] });
+    await expect(renderPdf([scene], OPTIONS)).rejects.toThrow(UnsupportedCharacterError);
+    await expect(renderPdf([scene], OPTIONS)).rejects.toThrow(/"中" \(U\+4E2D\) in the text "Rating 中"/);
+  });
+
+  it('rejects an outline whose length differs from the page count', async () => {
+    await expect(renderPdf([TEXT_SCENE], { ...OPTIONS, outline: ['One', 'Two'] })).rejects.toThrow(/2 titles for 1 pages/);
+  });
+});
+
+/** Pixel bounds of dark ink inside a box, or undefined when there is none. */
+function inkBounds(pixels: Pixels, box: { x0: number; y0: number; x1: number; y1: number }) {
+  let bounds: { x0: number; x1: number; y0: number; y1: number } | undefined;
+  for (let y = box.y0; y < box.y1; y++) {
+    for (let x = box.x0; x < box.x1; x++) {
+      if (pixels.data[(y * pixels.width + x) * 4] >= 128) continue;
+      bounds = bounds
+        ? { x0: Math.min(bounds.x0, x), x1: Math.max(bounds.x1, x), y0: Math.min(bounds.y0, y), y1: Math.max(bounds.y1, y) }
+        : { x0: x, x1: x, y0: y, y1: y };
+    }
+  }
+  return bounds;
+}
+
+describe('renderPdf() text as drawn by a PDF viewer', () => {
+  it('puts each run where the PNG renderer puts it (poppler vs resvg, within 2 px at 150 dpi)', async () => {
+    const pdf = await renderPdf([TEXT_SCENE], OPTIONS);
+    const fromSvg = decodePng(renderPng(TEXT_SCENE, { dpi: 150 }));
+    // pdftoppm rounds the page size up where resvg rounds to nearest: ask for resvg's exact size.
+    poppler('pdftoppm', pdf, ['-scale-to-x', String(fromSvg.width), '-scale-to-y', String(fromSvg.height), '-png', '-singlefile']);
+    const fromPdf = decodePng(readFileSync(join(dir, 'page.png')));
+    expect([fromPdf.width, fromPdf.height]).toEqual([fromSvg.width, fromSvg.height]);
+    const pxPerMm = 150 / 25.4;
+    for (const node of TEXT_SCENE.root.children) {
+      if (node.type !== 'text') continue;
+      const b = textBox(node);
+      const box = { x0: Math.floor(b.x * pxPerMm), y0: Math.floor(b.y * pxPerMm), x1: Math.ceil((b.x + b.width) * pxPerMm), y1: Math.ceil((b.y + b.height) * pxPerMm) };
+      const pdfInk = inkBounds(fromPdf, box);
+      const svgInk = inkBounds(fromSvg, box);
+      expect(pdfInk, node.text).toBeDefined();
+      for (const side of ['x0', 'x1', 'y0', 'y1'] as const) expect(Math.abs(pdfInk![side] - svgInk![side]), `${node.text} ${side}`).toBeLessThanOrEqual(2);
+    }
+  });
+});
