@@ -45,6 +45,7 @@ function parseDate(dateIso: string): Date {
 /** A PDF (bytes) with one page per scene, page size in points from the scene's mm media size. */
 export async function renderPdf(scenes: readonly Scene[], opts: PdfOptions): Promise<Uint8Array> {
   const date = parseDate(opts.dateIso);
+  if (scenes.length === 0) throw new RangeError(`the PDF "${opts.title}" has no pages; give it at least one sheet`);
   const doc = await PDFDocument.create({ updateMetadata: false });
   doc.registerFontkit(fontkit);
   const used = new Set<FontWeight>();

@@ -143,11 +143,17 @@ export function fitText(args: FitTextArgs): FittedText {
     const rounded = Number(sizePt.toFixed(1));
     return { text, sizePt: rounded, weight, widthMm: measureTextMm({ text, sizePt: rounded, weight }), shortened: false };
   }
+  // Prefix width grows with prefix length (advances are non-negative): binary-search the longest fit.
   const chars = [...text];
-  for (let keep = chars.length - 1; keep > 0; keep -= 1) {
-    const candidate = chars.slice(0, keep).join('').trimEnd() + ELLIPSIS;
-    const widthMm = measureTextMm({ text: candidate, sizePt: minSizePt, weight });
-    if (widthMm <= maxWidthMm) return { text: candidate, sizePt: minSizePt, weight, widthMm, shortened: true };
+  const shortenedTo = (keep: number): string => chars.slice(0, keep).join('').trimEnd() + ELLIPSIS;
+  const widthOf = (keep: number): number => measureTextMm({ text: shortenedTo(keep), sizePt: minSizePt, weight });
+  let fits = 0;
+  let tooLong = chars.length;
+  while (tooLong - fits > 1) {
+    const mid = Math.floor((fits + tooLong) / 2);
+    if (widthOf(mid) <= maxWidthMm) fits = mid;
+    else tooLong = mid;
   }
+  if (fits > 0) return { text: shortenedTo(fits), sizePt: minSizePt, weight, widthMm: widthOf(fits), shortened: true };
   return { text: ELLIPSIS, sizePt: minSizePt, weight, widthMm: measureTextMm({ text: ELLIPSIS, sizePt: minSizePt, weight }), shortened: true };
 }

@@ -20,6 +20,12 @@ const SAMPLES = [
   '',
 ];
 
+// Printable Basic Latin, Latin-1 and Latin Extended-A (C1 controls excluded: renderers strip them).
+const LATIN_CHAR = fc
+  .integer({ min: 0x20, max: 0x17f })
+  .filter((c) => c < 0x7f || c > 0x9f)
+  .map((c) => String.fromCharCode(c));
+
 describe('fonts', () => {
   it('FONT_FILES are absolute paths of TrueType files whose family name is FONT_FAMILY', () => {
     for (const weight of ['regular', 'bold'] as const) {
@@ -53,7 +59,7 @@ describe('measureTextMm()', () => {
 
   it('equals pdf-lib widthOfTextAtSize for arbitrary printable Latin text and sizes', () => {
     fc.assert(
-      fc.property(fc.string({ unit: fc.integer({ min: 0x20, max: 0x17f }).filter((c) => c < 0x7f || c > 0x9f).map((c) => String.fromCharCode(c)) }), fc.double({ min: 4, max: 72, noNaN: true }), (text, sizePt) => {
+      fc.property(fc.string({ unit: LATIN_CHAR }), fc.double({ min: 4, max: 72, noNaN: true }), (text, sizePt) => {
         const pdfWidthMm = pdfFonts.regular.widthOfTextAtSize(text, sizePt) * MM_PER_PT;
         expect(measureTextMm({ text, sizePt, weight: 'regular' })).toBeCloseTo(pdfWidthMm, 9);
       }),
@@ -146,5 +152,25 @@ describe('fitText()', () => {
     expect(fitted.widthMm).toBeLessThanOrEqual(25);
     const oneMore = `${label.slice(0, fitted.text.length)}…`;
     expect(measureTextMm({ text: oneMore, sizePt: 8, weight: 'bold' })).toBeGreaterThan(25);
+  });
+
+  it('always fits whenever more than the ellipsis remains, and keeps a prefix of the text', () => {
+    const word = fc.string({ unit: fc.constantFrom(...'abcdefWMil ffi.-0123456789'), minLength: 1, maxLength: 60 });
+    fc.assert(
+      fc.property(word, fc.double({ min: 2, max: 80, noNaN: true }), (text, maxWidthMm) => {
+        const fitted = fitText({ text, sizePt: 12, weight: 'regular', maxWidthMm, minSizePt: 7 });
+        if (fitted.text !== '…') expect(fitted.widthMm).toBeLessThanOrEqual(maxWidthMm);
+        expect(fitted.sizePt).toBeGreaterThanOrEqual(7);
+        expect(fitted.sizePt).toBeLessThanOrEqual(12);
+        if (fitted.shortened) expect(text.startsWith(fitted.text.slice(0, -1))).toBe(true);
+        else expect(fitted.text).toBe(text);
+      }),
+      { seed: 7, numRuns: 200 },
+    );
+  });
+
+  it('falls back to the ellipsis alone when not even one character fits', () => {
+    const fitted = fitText({ text: 'Wide-open throttle', sizePt: 12, weight: 'bold', maxWidthMm: 1, minSizePt: 8 });
+    expect(fitted).toMatchObject({ text: '…', sizePt: 8, shortened: true });
   });
 });
