@@ -77,6 +77,7 @@ export async function writeSiteFiles(args: SiteFilesArgs): Promise<{ site: SiteD
 
   for (const book of project.books) {
     const scenes = (plan.byBook.get(book.id) ?? []).map((slug) => bookScenes.get(slug) as Scene);
+    if (scenes.length === 0) continue;
     const pdf = await renderPdf(scenes, {
       title: book.title,
       subject: `Impeller matching chart book for the ${book.audience}`,

@@ -1,0 +1,87 @@
+/**
+ * Build benchmarks: the demo cold, generated fleets of 10, 100 and 1,000 boats (time and peak memory,
+ * each in a child process so maxRSS belongs to that build alone), one warm rebuild after editing one
+ * boat file, and our PDF against headless Chromium's page.pdf() for the same sheets.
+ * Run all benches: npm run bench. Child mode: node --import tsx bench/build.ts child <dataDir> <outDir>.
+ */
+import { execFileSync } from 'node:child_process';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { buildSite } from '../src/build/buildSite.ts';
+import { createBuildCache } from '../src/build/renderCache.ts';
+import { generateFleet } from './fleet.ts';
+import { comparePdf } from './pdfVsChromium.ts';
+
+const ROOT = fileURLToPath(new URL('../', import.meta.url));
+const EPOCH = '1767225600';
+
+interface ChildFigures {
+  readonly ms: number;
+  readonly maxRssMb: number;
+  readonly sheets: number;
+}
+
+/** One cold build in this process; prints its figures as JSON (child mode). */
+async function childBuild(dataDir: string, outDir: string): Promise<void> {
+  const start = performance.now();
+  const outcome = await buildSite({ dataDir, outDir, sourceDateEpoch: EPOCH });
+  if (!outcome.ok) throw new Error(outcome.errorsText);
+  const figures: ChildFigures = {
+    ms: performance.now() - start,
+    maxRssMb: process.resourceUsage().maxRSS / 1024,
+    sheets: outcome.counts.sheets,
+  };
+  process.stdout.write(`${JSON.stringify(figures)}\n`);
+}
+
+function coldBuild(dataDir: string, outDir: string): ChildFigures {
+  const text = execFileSync(process.execPath, ['--import', 'tsx', join(ROOT, 'bench/build.ts'), 'child', dataDir, outDir], {
+    cwd: ROOT,
+    encoding: 'utf8',
+    maxBuffer: 1 << 24,
+  });
+  return JSON.parse(text.trim().split('\n').pop() as string) as ChildFigures;
+}
+
+/** Demo build twice in one process; the second after editing one boat file. */
+async function warmRebuild(work: string): Promise<{ coldMs: number; warmMs: number }> {
+  const dataDir = generateFleet({ demoDir: join(ROOT, 'data'), dir: join(work, 'warm-data'), boats: 6 });
+  const outDir = join(work, 'warm-out');
+  const cache = createBuildCache();
+  let start = performance.now();
+  await buildSite({ dataDir, outDir, sourceDateEpoch: EPOCH, cache });
+  const coldMs = performance.now() - start;
+  const file = join(dataDir, 'boats', 'gen-0001.yaml');
+  writeFileSync(file, readFileSync(file, 'utf8').replace(/^name: .*$/m, 'name: Edited boat (demo)'));
+  start = performance.now();
+  const outcome = await buildSite({ dataDir, outDir, sourceDateEpoch: EPOCH, cache });
+  if (!outcome.ok) throw new Error(outcome.errorsText);
+  return { coldMs, warmMs: performance.now() - start };
+}
+
+const s = (ms: number) => `${(ms / 1000).toFixed(2)} s`;
+
+/** Lines (Markdown) with every build figure and its goal. */
+export async function runBuildBench(): Promise<string[]> {
+  const work = mkdtempSync(join(tmpdir(), 'matchbook-bench-'));
+  const lines: string[] = ['| Build | Sheets | Time | Peak memory | Goal |', '| --- | ---: | ---: | ---: | --- |'];
+  const demo = coldBuild(join(ROOT, 'data'), join(work, 'demo-out'));
+  lines.push(`| demo, cold | ${demo.sheets} | ${s(demo.ms)} | ${demo.maxRssMb.toFixed(0)} MB | < 5 s |`);
+  for (const boats of [10, 100, 1000]) {
+    const dataDir = generateFleet({ demoDir: join(ROOT, 'data'), dir: join(work, `fleet-${boats}`), boats });
+    const f = coldBuild(dataDir, join(work, `fleet-${boats}-out`));
+    lines.push(`| ${boats} generated boats, cold | ${f.sheets} | ${s(f.ms)} | ${f.maxRssMb.toFixed(0)} MB | ${boats === 1000 ? '< 60 s, < 1 GB' : ''} |`);
+  }
+  const warm = await warmRebuild(work);
+  lines.push(`| demo fleet, warm rebuild after editing one boat file (in-process cache) | | ${s(warm.warmMs)} | | < 1 s |`);
+  lines.push('', ...(await comparePdf({ dataDir: join(ROOT, 'data'), sourceDateEpoch: EPOCH })));
+  return lines;
+}
+
+if (process.argv[2] === 'child') {
+  await childBuild(process.argv[3], process.argv[4]);
+} else if (import.meta.url === `file://${process.argv[1]}`) {
+  process.stdout.write(`${(await runBuildBench()).join('\n')}\n`);
+}
