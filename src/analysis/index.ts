@@ -2,5 +2,5 @@
 export { analyseWallChart, chartInstallation, type WallChartResult, type WallChartPairing, type WallChartVariant, type WallChartImpeller, type CruiseCrossing } from './wallChart.ts';
 export { analyseBoat, boatInstallation, RPM_GAINS, UPGRADE_STEPS_PCT, type BoatResult, type CruiseRow, type AlternativeRow, type UpgradeRow, type RpmGainRow } from './boat.ts';
 export { defaultWallCharts, defaultChartConditions, DEFAULT_SITE, DEFAULT_CRUISE_FRACTIONS } from './defaults.ts';
-export { STATUS_WORDS, bandVerdict, isWarning, worstStatus } from './status.ts';
+export { STATUS_WORDS, bandVerdict, isWarning, toleranceNote, worstStatus } from './status.ts';
 export type { PointResult, BandResult, ConditionsResult, CurveKeyNumbers, LimitsResult } from './results.ts';

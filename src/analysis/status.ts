@@ -29,10 +29,9 @@ export function isWarning(status: MatchStatus): boolean {
 
 /** One verdict for a band: the nominal status, plus what the tolerance corners may do when it differs. */
 export function bandVerdict(band: OperatingBand): string {
+  const note = toleranceNote({ nominal: band.nominal.status, low: band.lowRpm.status, high: band.highRpm.status });
   const nominal = STATUS_WORDS[band.nominal.status];
-  const others = [band.lowRpm.status, band.highRpm.status].filter((s, i, all) => s !== band.nominal.status && all.indexOf(s) === i);
-  if (others.length === 0) return nominal;
-  return `${nominal}; within tolerance it may ${others.map((s) => CORNER_PHRASE[s]).join(' or ')}`;
+  return note === '' ? nominal : `${nominal}; within tolerance it ${note}`;
 }
 
 /** The most serious status in a band, for colouring and sorting (over-rev first, then lugging). */
@@ -40,4 +39,10 @@ export function worstStatus(band: OperatingBand): MatchStatus {
   const order: readonly MatchStatus[] = ['revLimited', 'noCrossing', 'belowWindow', 'aboveWindow', 'matched'];
   const present = [band.nominal.status, band.lowRpm.status, band.highRpm.status];
   return order.find((s) => present.includes(s)) ?? band.nominal.status;
+}
+
+/** What the tolerance corners add to the nominal status ("may over-rev"), or "" when they agree. */
+export function toleranceNote(statuses: { nominal: MatchStatus; low: MatchStatus; high: MatchStatus }): string {
+  const others = [statuses.low, statuses.high].filter((s, i, all) => s !== statuses.nominal && all.indexOf(s) === i);
+  return others.length === 0 ? '' : `may ${others.map((s) => CORNER_PHRASE[s]).join(' or ')}`;
 }

@@ -23,7 +23,8 @@ function yLabelRoomMm(sizePt: number): number {
 export function chartArea(box: Box, sizePt: number): Box {
   const side = TICK_MM + GAP_MM + yLabelRoomMm(sizePt) + GAP_MM + linePitchMm(sizePt);
   const bottom = TICK_MM + GAP_MM + linePitchMm(sizePt) * 2 + GAP_MM;
-  const top = linePitchMm(sizePt) * 0.6;
+  // Room above the plot for annotation names (window, rev limit).
+  const top = linePitchMm(sizePt, 'bold') + 1.5;
   return { x: box.x + side, y: box.y + top, width: box.width - 2 * side, height: box.height - top - bottom };
 }
 

@@ -10,39 +10,13 @@
  *   c·k·n^(k−1) = s ⇒ n* = (s / (c·k))^(1/(k−1)); scales are affine, so that holds in mm as well.
  */
 import type { PathSegment } from '../../scene/types.ts';
+import { hermiteSlope, hermiteValue, type HermitePiece } from '../../model/index.ts';
 import type { PlotScales } from './scales.ts';
-
-/** One cubic Hermite piece (rpm, kW, kW/rpm) as the model exposes it. */
-export interface HermitePiece {
-  readonly x0: number;
-  readonly x1: number;
-  readonly y0: number;
-  readonly y1: number;
-  readonly m0: number;
-  readonly m1: number;
-}
-
-/** Value and slope of a Hermite piece at x (x0 <= x <= x1). */
-function hermiteAt(p: HermitePiece, x: number): { y: number; m: number } {
-  const h = p.x1 - p.x0;
-  const t = (x - p.x0) / h;
-  const t2 = t * t;
-  const t3 = t2 * t;
-  const y =
-    (2 * t3 - 3 * t2 + 1) * p.y0 + (t3 - 2 * t2 + t) * h * p.m0 + (-2 * t3 + 3 * t2) * p.y1 + (t3 - t2) * h * p.m1;
-  // d/dx of the basis functions (chain rule, dt/dx = 1/h).
-  const m =
-    ((6 * t2 - 6 * t) * p.y0 + (3 * t2 - 4 * t + 1) * h * p.m0 + (-6 * t2 + 6 * t) * p.y1 + (3 * t2 - 2 * t) * h * p.m1) /
-    h;
-  return { y, m };
-}
 
 /** The same cubic restricted to [a, b] ⊂ [x0, x1], still in Hermite form. */
 function restrictPiece(p: HermitePiece, a: number, b: number): HermitePiece {
   if (a === p.x0 && b === p.x1) return p;
-  const ya = hermiteAt(p, a);
-  const yb = hermiteAt(p, b);
-  return { x0: a, x1: b, y0: ya.y, y1: yb.y, m0: ya.m, m1: yb.m };
+  return { x0: a, x1: b, y0: hermiteValue(p, a), y1: hermiteValue(p, b), m0: hermiteSlope(p, a), m1: hermiteSlope(p, b) };
 }
 
 /** Path (mm) of an engine curve's Hermite pieces, exact, limited to [fromRpm, toRpm] and the x domain. */

@@ -30,6 +30,11 @@ export function rpmRangeText(lowRpm: number, highRpm: number): string {
   return `${rpmText(a)}–${rpmText(b)} rpm`;
 }
 
+/** A band that may collapse to one value (at the limiter): "5400 rpm" rather than "5400–5400 rpm". */
+export function rpmBandText(lowRpm: number, highRpm: number): string {
+  return rpmText(lowRpm) === rpmText(highRpm) ? rpmWithUnit(lowRpm) : rpmRangeText(lowRpm, highRpm);
+}
+
 /** Power in one unit, whole numbers (one decimal below 10): "210 kW". */
 export function powerText(powerKw: number, unit: PowerUnit): string {
   const v = kwToPower(finite(powerKw, 'power'), unit);

@@ -32,8 +32,9 @@ export interface PlacedLabels {
   readonly occupied: readonly Box[];
 }
 
-const RINGS_MM = [1.2, 2.6, 4.5, 7, 10.5];
-const LEADER_FROM_RING = 2;
+const RINGS_MM = [1.2, 2.6, 4.5, 7, 10.5, 15, 21];
+/** Labels whose box is further than this from their anchor get a leader line. */
+const LEADER_FROM_MM = 2.4;
 const DIRECTIONS: readonly (readonly [number, number])[] = [
   [1, -1], [1, 1], [-1, -1], [-1, 1], [1, 0], [-1, 0], [0, -1], [0, 1],
 ];
@@ -66,10 +67,10 @@ export function placeLabels(requests: readonly LabelRequest[], opts: { bounds: B
   const emit = (req: LabelRequest, text: string, spot: { box: Box; ring: number }, weight: FontWeight, role: string): void => {
     const { ascentMm } = fontExtentMm({ sizePt: req.sizePt, weight });
     const { box } = spot;
-    if (spot.ring >= LEADER_FROM_RING) {
-      // Leader from the anchor to the nearest point of the box, so a far label still points home.
-      const lx = Math.min(Math.max(req.x, box.x), box.x + box.width);
-      const ly = Math.min(Math.max(req.y, box.y), box.y + box.height);
+    // Leader from the anchor to the nearest point of the box, so a label set apart still points home.
+    const lx = Math.min(Math.max(req.x, box.x), box.x + box.width);
+    const ly = Math.min(Math.max(req.y, box.y), box.y + box.height);
+    if (Math.hypot(lx - req.x, ly - req.y) > LEADER_FROM_MM) {
       nodes.push({ type: 'path', role: 'leader', key: req.key, segments: [{ op: 'M', x: req.x, y: req.y }, { op: 'L', x: lx, y: ly }], stroke: stroke(req.colour ?? INK, STROKE.hairline) });
     }
     // A white backing keeps the text readable where it sits over grid or curves.

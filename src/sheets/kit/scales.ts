@@ -25,7 +25,7 @@ export interface PlotScales {
 /** Aim for one labelled tick every ~22 mm: dense enough to read values, sparse enough to stay legible. */
 const MM_PER_TICK = 22;
 
-/** Scales for a plot area; domains are widened to nice round values in the left unit. */
+/** Scales for a plot area; the power domain is widened to round values in the left unit, rpm kept as asked. */
 export function plotScales(args: {
   area: Box;
   rpmDomain: readonly [number, number];
@@ -37,8 +37,7 @@ export function plotScales(args: {
   const rightUnit: PowerUnit = leftUnit === 'kW' ? 'hp' : 'kW';
   const x = scaleLinear()
     .domain([args.rpmDomain[0], args.rpmDomain[1]])
-    .range([area.x, area.x + area.width])
-    .nice(xTickCount(area));
+    .range([area.x, area.x + area.width]);
   const yLeft = scaleLinear()
     .domain([kwToPower(args.powerKwDomain[0], leftUnit), kwToPower(args.powerKwDomain[1], leftUnit)])
     .range([area.y + area.height, area.y])
