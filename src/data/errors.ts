@@ -70,3 +70,8 @@ export function describeValue(value: unknown): string {
   if (typeof value === 'object') return 'a mapping (key: value lines)';
   return shorten(String(value));
 }
+
+/** impellers[2].rating_kw: a field path as a technician reads it (list positions count from 0). */
+export function fieldName(path: readonly (string | number)[]): string {
+  return path.map((seg, i) => (typeof seg === 'number' ? `[${seg}]` : i === 0 ? seg : `.${seg}`)).join('');
+}

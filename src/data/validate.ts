@@ -4,7 +4,7 @@
  */
 import type * as z from 'zod';
 import { didYouMean } from './closest.ts';
-import { dataError, type Problem } from './errors.ts';
+import { dataError, fieldName, type Problem } from './errors.ts';
 import type { DataError } from './types.ts';
 import type { PathSegment, YamlSource } from './yamlSource.ts';
 
@@ -21,10 +21,6 @@ export function validate<S extends z.ZodType>(source: YamlSource, schema: S): Va
   return { ok: false, errors };
 }
 
-/** Format a path as a technician reads it: impellers[2].rating_kw (list positions count from 0). */
-export function fieldName(path: readonly PathSegment[]): string {
-  return path.map((seg, i) => (typeof seg === 'number' ? `[${seg}]` : i === 0 ? seg : `.${seg}`)).join('');
-}
 
 /** Report a problem at a path of a file (used by the checks after the schema). */
 export function at(source: YamlSource, path: readonly PathSegment[], problem: Omit<Problem, 'field' | 'found'> & { found?: string }): DataError {
@@ -56,20 +52,14 @@ function locateIssue(source: YamlSource, issue: Issue): DataError[] {
     });
   }
   const where = source.locate(issue.path);
-  const missing = issue.input === undefined && issue.code === 'invalid_type';
-  const found = issue.params?.found ?? where.found;
-  const last = issue.path[issue.path.length - 1];
-  return [
-    dataError(
-      { file: source.file, line: where.line, column: where.column },
-      {
-        field: fieldName(issue.path),
-        expected: issue.message,
-        found: missing ? 'nothing' : found,
-        fix: missing ? `add "${String(last)}:" with its value` : hint(issue),
-      },
-    ),
-  ];
+  const place = { file: source.file, line: where.line, column: where.column };
+  const field = fieldName(issue.path);
+  if (!where.exists) {
+    // A missing field: point at the mapping that should hold it and say what it takes.
+    const what = issue.message === 'is required' ? 'its value' : `a value that ${issue.message}`;
+    return [dataError(place, { field, expected: 'is required', found: 'nothing', fix: `add ${String(issue.path[issue.path.length - 1])}: with ${what}` })];
+  }
+  return [dataError(place, { field, expected: issue.message, found: issue.params?.found ?? where.found, fix: hint(issue) })];
 }
 
 /** A fix worth saying for common slips: quoted numbers, units typed after numbers, near-miss words. */

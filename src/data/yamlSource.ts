@@ -4,7 +4,7 @@
  * inside the parser, which no try/catch can recover), alias-expansion cap, duplicate keys.
  */
 import { isAlias, isMap, isScalar, isSeq, LineCounter, parseDocument, type Document, type Node, type Pair } from 'yaml';
-import { dataError, describeValue, shorten } from './errors.ts';
+import { dataError, describeValue, fieldName, shorten } from './errors.ts';
 import type { DataError } from './types.ts';
 
 export const MAX_FILE_BYTES = 5 * 1024 * 1024;
@@ -56,13 +56,17 @@ export function parseYaml(args: { file: string; text: string }): ParseResult {
   try {
     const lineCounter = new LineCounter();
     const doc = parseDocument(text, { lineCounter, uniqueKeys: true, schema: 'core', merge: false, prettyErrors: false, strict: true });
-    const problems = [...doc.errors, ...doc.warnings];
+    // Every duplicate key is its own mistake; other syntax errors cascade, so only the first is shown.
+    const duplicates = doc.errors.filter((e) => e.code === 'DUPLICATE_KEY');
+    const firstOther = [...doc.errors, ...doc.warnings].find((e) => e.code !== 'DUPLICATE_KEY');
+    const problems = [...duplicates, ...(firstOther ? [firstOther] : [])];
     if (problems.length > 0) {
       return {
         ok: false,
         errors: problems.map((e) => {
           const pos = lineCounter.linePos(e.pos[0]);
-          return dataError({ file, line: pos.line, column: pos.col }, yamlProblem(e.code, e.message, text.slice(e.pos[0], e.pos[1])));
+          const keyPath = e.code === 'DUPLICATE_KEY' ? pathOfKeyAt(doc.contents as Node | null, e.pos[0], []) : undefined;
+          return dataError({ file, line: pos.line, column: pos.col }, yamlProblem({ code: e.code, message: e.message, excerpt: text.slice(e.pos[0], e.pos[1]), keyPath }));
         }),
       };
     }
@@ -75,12 +79,16 @@ export function parseYaml(args: { file: string; text: string }): ParseResult {
   }
 }
 
-function yamlProblem(code: string, message: string, excerpt: string): { field: string; expected: string; found: string; fix?: string } {
+function yamlProblem(args: { code: string; message: string; excerpt: string; keyPath?: PathSegment[] }): { field: string; expected: string; found: string; fix?: string } {
+  const { code, message, excerpt, keyPath } = args;
   // The parser's own message, cut before its " at line …" tail: our place prefix already says where.
   const plain = message.split(/ at line \d+/)[0].replace(/\s+/g, ' ').trim();
   switch (code) {
-    case 'DUPLICATE_KEY':
-      return { field: excerpt, expected: 'must appear only once in its mapping (duplicate key)', found: `a second "${shorten(excerpt, 40)}"`, fix: 'remove or rename one of them' };
+    case 'DUPLICATE_KEY': {
+      const key = keyPath?.length ? String(keyPath[keyPath.length - 1]) : excerpt;
+      const field = keyPath?.length ? fieldName(keyPath) : excerpt;
+      return { field, expected: 'must appear only once in its mapping (duplicate key)', found: `a second "${shorten(key, 40)}"`, fix: 'remove or merge one of them' };
+    }
     case 'MULTIPLE_DOCS':
       return { field: '', expected: 'must hold one YAML document', found: 'a second document after ---', fix: 'remove the --- line or split the file' };
     case 'TAG_RESOLVE_FAILED':
@@ -88,6 +96,25 @@ function yamlProblem(code: string, message: string, excerpt: string): { field: s
     default:
       return { field: '', expected: 'must be valid YAML', found: `a syntax error (${plain})`, fix: 'check indentation, colons and closing brackets or quotes near here' };
   }
+}
+
+/** Path (keys and list positions) of the map key starting at offset, for naming a duplicate key. */
+function pathOfKeyAt(node: Node | null, offset: number, path: PathSegment[]): PathSegment[] | undefined {
+  if (isMap(node)) {
+    for (const pair of node.items) {
+      const key = pair.key as Node | null;
+      const here = isScalar(key) ? [...path, String(key.value)] : path;
+      if (key?.range?.[0] === offset) return here;
+      const inner = pathOfKeyAt(pair.value as Node | null, offset, here);
+      if (inner) return inner;
+    }
+  } else if (isSeq(node)) {
+    for (const [i, item] of node.items.entries()) {
+      const inner = pathOfKeyAt(item as Node | null, offset, [...path, i]);
+      if (inner) return inner;
+    }
+  }
+  return undefined;
 }
 
 function lineCounterFor(text: string): LineCounter {

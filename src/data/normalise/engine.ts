@@ -1,7 +1,4 @@
-/**
- * Engine family file → EngineFamily: variants merged over the family's fields, curves converted to kW,
- * limits checked (idle < window low <= window high <= max).
- */
+/** Engine family file → EngineFamily: variants merged over the family's fields, curves converted to kW. */
 import type { CurvePoint, CurveSource, EngineLimits } from '../../model/types.ts';
 import { powerKwFromTorque, powerToKw, torqueToNm, type TorqueUnit } from '../../units.ts';
 import type { DataError, EngineFamily, EngineVariant } from '../types.ts';
@@ -32,11 +29,10 @@ export function normaliseEngine(source: YamlSource, raw: RawEngineFile): Normali
     const ownCurve = v.curve !== undefined || v.known_point !== undefined;
     const curve = ownCurve ? pickOwn(v, i, 'curve') : pick('curve');
     const known = ownCurve ? pickOwn(v, i, 'known_point') : pick('known_point');
-    const limits = checkLimits({ source, errors, variantPath: ['variants', i], idle: pick('idle_rpm'), window: pick('wot_window_rpm'), max: pick('max_rpm') });
-    if (!curve && !known) {
-      errors.push(at(source, ['variants', i], { expected: 'needs a curve or a known_point (on the variant or the family)', found: 'neither', fix: 'add curve: {unit, points} or known_point: {rpm, power_kw}' }));
-    }
-    if (!limits || (!curve && !known)) return;
+    // The schema (engineLimits.ts) has already checked that all of these exist and are in order.
+    const [idle, window, max] = [pick('idle_rpm'), pick('wot_window_rpm'), pick('max_rpm')];
+    if (!idle || !window || !max || (!curve && !known)) return;
+    const limits: EngineLimits = { idleRpm: idle.value, windowLowRpm: window.value[0], windowHighRpm: window.value[1], maxRpm: max.value };
     const scale = pick('curve_scale')?.value ?? 1;
     const source_ = curve ? tableSource(curve.value, scale) : knownSource(known!.value, scale);
     if (curve) warnShortTable({ source, warnings, curve, limits });
@@ -86,41 +82,6 @@ function pickTune<K extends TuneKey>(args: { family: Tune; variant: RawVariant; 
 function pickOwn<K extends 'curve' | 'known_point'>(v: RawVariant, i: number, key: K): Sourced<NonNullable<RawVariant[K]>> {
   const own = v[key];
   return own !== undefined ? { value: own as NonNullable<RawVariant[K]>, path: ['variants', i, key] } : undefined;
-}
-
-function checkLimits(args: {
-  source: YamlSource;
-  errors: DataError[];
-  variantPath: PathSegment[];
-  idle: Sourced<number>;
-  window: Sourced<[number, number]>;
-  max: Sourced<number>;
-}): EngineLimits | undefined {
-  const { source, errors, idle, window, max } = args;
-  const missing = (
-    [
-      ['idle_rpm', idle],
-      ['wot_window_rpm', window],
-      ['max_rpm', max],
-    ] as const
-  ).filter(([, v]) => v === undefined);
-  for (const [key] of missing) {
-    errors.push(at(source, args.variantPath, { expected: `needs ${key} (on the variant or the family)`, found: 'none', fix: `add ${key}` }));
-  }
-  if (!idle || !window || !max) return undefined;
-  const [low, high] = window.value;
-  const before = errors.length;
-  if (!(low <= high)) {
-    errors.push(at(source, [...window.path, 1], { expected: `must be at least the window's low end (${low} rpm): write [low, high]` }));
-  }
-  if (!(idle.value < low)) {
-    errors.push(at(source, [...window.path, 0], { expected: `must be above idle_rpm (${idle.value} rpm): the WOT window lies inside [idle, max]` }));
-  }
-  if (!(high <= max.value)) {
-    errors.push(at(source, [...window.path, 1], { expected: `must be at most max_rpm (${max.value} rpm): the WOT window lies inside [idle, max]` }));
-  }
-  if (errors.length > before) return undefined;
-  return { idleRpm: idle.value, windowLowRpm: low, windowHighRpm: high, maxRpm: max.value };
 }
 
 /** Power in kW from a table value: a power directly, a torque through P = T·ω. */

@@ -1,5 +1,6 @@
 /** Schema of data/engines/<id>.yaml: an engine family and its variants (tunes). */
 import * as z from 'zod';
+import { checkEngineLimits } from './engineLimits.ts';
 import { between, optionalShape, positive, rpm, slug, text, tolerancePct, unitChoices } from './common.ts';
 
 export const POWER_UNITS = ['kW', 'hp', 'PS'] as const;
@@ -77,7 +78,9 @@ export const engineFile = () =>
       variants: z.array(engineVariant(), { error: 'must be a list of variants, each with id and label' }).min(1, { error: 'must list at least one variant' }),
     }),
     curveChoice,
-  ).meta({ title: 'matchbook engine family', description: 'An engine family with its variants (tunes): data/engines/<id>.yaml' });
+  )
+    .superRefine(checkEngineLimits, { when: () => true })
+    .meta({ title: 'matchbook engine family', description: 'An engine family with its variants (tunes): data/engines/<id>.yaml' });
 
 export type RawEngineFile = z.infer<ReturnType<typeof engineFile>>;
 export type RawVariant = z.infer<ReturnType<typeof engineVariant>>;
