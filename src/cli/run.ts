@@ -5,9 +5,6 @@
 import { parseArgs, UsageError } from './args.ts';
 import { helpText } from './help.ts';
 import type { CliIo } from './io.ts';
-import { runBuild } from './build.ts';
-import { runCheck } from './check.ts';
-import { runServe } from './serve.ts';
 import { OutputFolderError } from '../build/atomicDir.ts';
 import { BuildDateError } from '../build/dateIso.ts';
 
@@ -24,12 +21,13 @@ export async function runCli(argv: readonly string[], io: CliIo): Promise<number
       case 'help':
         io.out(helpText(args.helpFor));
         return EXIT_OK;
+      // Commands load lazily: help answers at once, and check never loads the renderers or Eleventy.
       case 'build':
-        return await runBuild(args, io);
+        return await (await import('./build.ts')).runBuild(args, io);
       case 'check':
-        return await runCheck(args, io);
+        return await (await import('./check.ts')).runCheck(args, io);
       case 'serve':
-        return await runServe(args, io);
+        return await (await import('./serve.ts')).runServe(args, io);
     }
   } catch (error) {
     return reportFailure(error, io);
