@@ -19,3 +19,6 @@ export { operatingBand, type OperatingBand } from './toleranceBand.ts';
 export { cruiseAtRpm, cruiseRpmAtPower } from './cruise.ts';
 export { swapFromKnownPoint } from './swap.ts';
 export { powerChangeForRpm, upgradeOperatingPoint } from './upgrade.ts';
+export { ratingFromPower, trialEffectiveRating, type TrialInput, type TrialRating, type TrialRatingStatus } from './trialRating.ts';
+export { fitLogLinear, type LogFit, type LogPoint } from './logFit.ts';
+export { calibrate, calibratedInstallation, MAX_EXPONENT_SE, MIN_RPM_SPAN, type Calibration, type CalibrationMode, type TrialResidual } from './calibration.ts';
