@@ -3,12 +3,12 @@
  * PDF user space has y up in points; the scene has y down in mm. `toPt` is the one place y flips.
  */
 import {
-  LineCapStyle, LineJoinStyle, PDFName, appendBezierCurve, beginText, clip, closePath, endPath, endText, fill,
+  LineCapStyle, LineJoinStyle, PDFNumber, PDFOperator, PDFOperatorNames, appendBezierCurve, beginText, clip, closePath, endPath, endText, fill,
   fillAndStroke, lineTo, moveTo, popGraphicsState, pushGraphicsState, rectangle, rotateAndSkewTextDegreesAndTranslate,
   setDashPattern, setFillingRgbColor, setFontAndSize, setGraphicsState, setLineCap, setLineJoin, setLineWidth,
   setStrokingRgbColor, showText, stroke,
 } from 'pdf-lib';
-import type { PDFFont, PDFOperator, PDFPage } from 'pdf-lib';
+import type { PDFFont, PDFPage } from 'pdf-lib';
 import { printableText } from '../scene/text.ts';
 import type { CircleNode, Colour, FontWeight, PathSegment, Scene, SceneNode, Stroke, Fill, TextNode } from '../scene/types.ts';
 import { assertDrawable } from './errors.ts';
@@ -69,6 +69,8 @@ function segmentOps(ctx: PageContext, segments: readonly PathSegment[]): PDFOper
   });
 }
 
+// SVG's default miter limit is 4, PDF's is 10: use SVG's so sharp corners look the same in both.
+const MITER_LIMIT = 4;
 const CAPS = { butt: LineCapStyle.Butt, round: LineCapStyle.Round, square: LineCapStyle.Projecting } as const;
 const JOINS = { miter: LineJoinStyle.Miter, round: LineJoinStyle.Round, bevel: LineJoinStyle.Bevel } as const;
 
@@ -85,6 +87,7 @@ function paintOps(ctx: PageContext, strokeSpec: Stroke | undefined, fillSpec: Fi
     ops.push(setStrokingRgbColor(...rgb01(strokeSpec.colour)), setLineWidth(pt(strokeSpec.widthMm)));
     ops.push(setDashPattern((strokeSpec.dashMm ?? []).map(pt), 0));
     ops.push(setLineCap(CAPS[strokeSpec.cap ?? 'butt']), setLineJoin(JOINS[strokeSpec.join ?? 'miter']));
+    ops.push(PDFOperator.of(PDFOperatorNames.SetLineMiterLimit, [PDFNumber.of(MITER_LIMIT)]));
   }
   return ops;
 }
