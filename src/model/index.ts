@@ -22,3 +22,16 @@ export { powerChangeForRpm, upgradeOperatingPoint } from './upgrade.ts';
 export { ratingFromPower, trialEffectiveRating, type TrialInput, type TrialRating, type TrialRatingStatus } from './trialRating.ts';
 export { fitLogLinear, type LogFit, type LogPoint } from './logFit.ts';
 export { calibrate, calibratedInstallation, MAX_EXPONENT_SE, MIN_RPM_SPAN, type Calibration, type CalibrationMode, type TrialResidual } from './calibration.ts';
+export {
+  crouchConstantFromSpeed,
+  crouchConstantsFromTrials,
+  crouchSpeedKn,
+  hullConstant,
+  loadedDisplacementKg,
+  shaftPowerForSpeedKw,
+  TYPICAL_CROUCH_CONSTANTS,
+  type CrouchHullType,
+  type HullConstant,
+  type HullConstantSource,
+} from './speed.ts';
+export { DEFAULT_RESERVE_FRACTION, fuelFlow, fuelRange, TYPICAL_BSFC_G_PER_KWH, TYPICAL_FUEL_KG_PER_L, type FuelFlow, type FuelRange } from './fuel.ts';
