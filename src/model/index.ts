@@ -35,3 +35,15 @@ export {
   type HullConstantSource,
 } from './speed.ts';
 export { DEFAULT_RESERVE_FRACTION, fuelFlow, fuelRange, TYPICAL_BSFC_G_PER_KWH, TYPICAL_FUEL_KG_PER_L, type FuelFlow, type FuelRange } from './fuel.ts';
+export {
+  bestImpeller,
+  DEFAULT_CHANGES_PCT,
+  impellerTopSpeeds,
+  powerChangeForSpeedGain,
+  upgradeWhatIf,
+  whatIfPoint,
+  type SpeedBasis,
+  type SpeedGainNeed,
+  type UpgradeStep,
+  type WhatIfPoint,
+} from './upgradeWhatIf.ts';
