@@ -125,7 +125,7 @@ function lineCounterFor(text: string): LineCounter {
 }
 
 /**
- * Deepest nesting of flow brackets, skipping quoted strings and comments. Over-counts brackets inside
+ * Deepest nesting of flow brackets, and where it first passes MAX_FLOW_DEPTH, skipping quoted strings and comments. Over-counts brackets inside
  * plain scalars, which only makes the guard stricter on text nobody writes.
  */
 export function flowDepth(text: string): { max: number; offset: number } {
@@ -140,7 +140,9 @@ export function flowDepth(text: string): { max: number; offset: number } {
       i = skipQuoted(text, i);
     } else if (c === '[' || c === '{') {
       depth++;
-      if (depth > max) [max, offset] = [depth, i];
+      if (depth > max) max = depth;
+      // Point at the first bracket past the limit: where the reader should look.
+      if (depth === MAX_FLOW_DEPTH + 1 && offset === 0) offset = i;
     } else if ((c === ']' || c === '}') && depth > 0) {
       depth--;
     }
@@ -177,7 +179,7 @@ function locate(args: { doc: Document; text: string; lineCounter: LineCounter; p
   const target = keyNode ?? node;
   const offset = target?.range?.[0] ?? pairKeyOffset(pair) ?? 0;
   const pos = lineCounter.linePos(Math.min(offset, text.length));
-  const found = !exists ? 'nothing' : keyNode ? JSON.stringify(String(keyNode.value)) : empty ? describeValue(null) : foundText(node, text);
+  const found = !exists ? 'nothing' : path.length === 0 && !node ? 'nothing (an empty file)' : keyNode ? JSON.stringify(String(keyNode.value)) : empty ? describeValue(null) : foundText(node, text);
   return { line: pos.line, column: pos.col, found, exists };
 }
 
