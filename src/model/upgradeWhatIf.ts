@@ -78,7 +78,8 @@ const FACTOR_RANGE = [0.25, 4] as const;
 
 /** Smallest factor in the range where a condition that stays true once true holds; null if never. */
 function smallestFactor(holds: (f: number) => boolean): number | null {
-  let [lo, hi] = FACTOR_RANGE;
+  let lo: number = FACTOR_RANGE[0];
+  let hi: number = FACTOR_RANGE[1];
   if (!holds(hi)) return null;
   if (holds(lo)) return lo;
   for (let i = 0; i < 80 && hi - lo > 1e-10 * hi; i++) {
