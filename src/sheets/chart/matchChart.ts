@@ -111,14 +111,19 @@ export function matchChart(args: MatchChartArgs): MatchChart {
   for (const eng of args.engines) {
     if (eng.reference) {
       data.push({ type: 'path', role: 'engine-curve-reference', key: `engine:${eng.id}`, segments: hermitePath(eng.reference.pieces, scales), stroke: stroke(INK_SOFT, STROKE.rule, [3, 1.2]) });
+      const [rLo, rHi] = scales.x.domain();
+      const rAt = Math.min(Math.max(rLo + 0.06 * (rHi - rLo), eng.reference.minRpm), eng.reference.maxRpm);
+      const rY = scales.y(eng.reference.powerKwUnchecked(rAt));
+      if (eng.referenceLabel && rY >= top && rY <= bottom) labels.push({ key: `engine-reference-label:${eng.id}`, x: scales.x(rAt), y: rY, text: eng.referenceLabel, sizePt, prefer: [[1, -1], [0, -1], [1, 1]] });
     }
     const segs = hermitePath(eng.site.pieces, scales);
     data.push({ type: 'path', role: 'engine-curve', key: `engine:${eng.id}`, segments: segs, stroke: { ...stroke(INK, eng.widthMm, eng.dashMm), join: 'round' } });
-    // Named near the left of the plot, where variants' curves are furthest from the crowd of WOT points.
-    const [xLo, xHi] = scales.x.domain();
-    const at = Math.min(Math.max(xLo + 0.2 * (xHi - xLo), eng.site.minRpm), eng.site.maxRpm);
+    // Named where the curve enters the plot at the left: variants' curves are furthest from the crowd of
+    // WOT points there, and the label sits just above its own curve.
+    const [xLo] = scales.x.domain();
+    const at = Math.min(Math.max(xLo, eng.site.minRpm), eng.site.maxRpm);
     const y = scales.y(eng.site.powerKwUnchecked(at));
-    if (segs.length > 0 && y >= top && y <= bottom) labels.push({ key: `engine-label:${eng.id}`, x: scales.x(at), y, text: eng.label, sizePt, weight: 'bold', prefer: [[-1, -1], [0, -1], [1, 1]] });
+    if (segs.length > 0 && y >= top && y <= bottom) labels.push({ key: `engine-label:${eng.id}`, x: scales.x(at) + 1, y, text: eng.label, sizePt, weight: 'bold', prefer: [[1, -1], [1, 1]] });
   }
 
   const maxX = scales.x(args.maxRpm);

@@ -29,20 +29,19 @@ export function variantShortLabels(variants: readonly EngineVariant[]): string[]
 }
 
 /** Engine series of a family's variants: site-corrected curve, plus the published one where they differ. */
-export function engineSeries(args: { family: EngineFamily; ambient: Ambient; only?: string }): EngineSeries[] {
+export function engineSeries(args: { family: EngineFamily; ambient: Ambient }): EngineSeries[] {
   const shorts = variantShortLabels(args.family.variants);
-  return args.family.variants.flatMap((v, i) => {
-    if (args.only !== undefined && v.variantId !== args.only) return [];
+  return args.family.variants.map((v, i) => {
     const site = engineCurve(v, { ambient: args.ambient });
     const reference = engineCurve(v);
     const differs = Math.abs(site.appliedFactor / reference.appliedFactor - 1) > 1e-3;
-    return [{
+    return {
       id: v.variantId,
       label: differs ? `${shorts[i]} at site` : shorts[i],
       site,
       ...(differs ? { reference, referenceLabel: `${shorts[i]} as published` } : {}),
       widthMm: STROKE.engine,
       dashMm: ENGINE_DASHES[i % ENGINE_DASHES.length],
-    }];
+    };
   });
 }

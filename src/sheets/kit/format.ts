@@ -35,10 +35,10 @@ export function rpmBandText(lowRpm: number, highRpm: number): string {
   return rpmText(lowRpm) === rpmText(highRpm) ? rpmWithUnit(lowRpm) : rpmRangeText(lowRpm, highRpm);
 }
 
-/** Power in one unit, whole numbers (one decimal below 10): "210 kW". */
+/** Power in one unit, whole numbers (two decimals below 10, so small impeller ratings keep their digits): "210 kW". */
 export function powerText(powerKw: number, unit: PowerUnit): string {
   const v = kwToPower(finite(powerKw, 'power'), unit);
-  const digits = Math.abs(v) < 10 ? 1 : 0;
+  const digits = Math.abs(v) < 10 ? 2 : 0;
   return `${v.toFixed(digits)} ${unit}`;
 }
 

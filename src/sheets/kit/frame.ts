@@ -6,7 +6,7 @@
 import type { Paper, SiteConfig } from '../../data/types.ts';
 import type { Box, SceneNode } from '../../scene/types.ts';
 import { cropMarks, pageFrame, type PageFrame } from '../../scene/paper.ts';
-import { fitText } from '../../scene/text.ts';
+import { fitText, measureTextMm } from '../../scene/text.ts';
 import { ascentMm, label, linePitchMm } from './block.ts';
 import { LayoutError } from './errors.ts';
 import { INK, INK_SOFT, STROKE, stroke, type TypeScale } from './style.ts';
@@ -30,51 +30,66 @@ export function sheetFrame(args: {
   subtitle: string;
   dateIso: string;
   type: TypeScale;
+  /** Safe margin inside the trim (mm); the paper's default when absent. */
+  marginMm?: number;
   where: string;
 }): SheetFrame {
-  const page = pageFrame({ paper: args.paper });
+  const page = pageFrame({ paper: args.paper, ...(args.marginMm !== undefined ? { marginMm: args.marginMm } : {}) });
   const safe = page.safeBox;
   const { type } = args;
   const right = safe.x + safe.width;
   const nodes: SceneNode[] = [];
 
-  // Shop block at the top right: name (bold) over contact line.
-  const shop = label({ x: right, y: safe.y + ascentMm(type.heading, 'bold'), text: args.site.shopName, sizePt: type.heading, weight: 'bold', anchor: 'end', role: 'shop-name', where: args.where });
-  const contact = label({ x: right, y: safe.y + linePitchMm(type.heading, 'bold') + ascentMm(type.small), text: args.site.contactLine, sizePt: type.small, anchor: 'end', colour: INK_SOFT, role: 'shop-contact', where: args.where });
-  const shopWidth = Math.max(shop.widthMm, contact.widthMm);
-
-  // Title takes what the shop block leaves; it may shrink to the heading size but is never shortened.
-  const titleRoom = safe.width - shopWidth - 6;
+  // Shop block at the top right (name over contact); on narrow sheets it goes under the title instead.
+  const shopName = { text: args.site.shopName, sizePt: type.heading, weight: 'bold' as const };
+  const shopWidth = Math.max(measureTextMm(shopName), measureTextMm({ text: args.site.contactLine, sizePt: type.small, weight: 'regular' }));
+  const titleWidth = measureTextMm({ text: args.title, sizePt: type.title, weight: 'bold' });
+  const sideBySide = titleWidth + shopWidth + 6 <= safe.width;
+  const titleRoom = sideBySide ? safe.width - shopWidth - 6 : safe.width;
   const fitted = fitText({ text: args.title, sizePt: type.title, weight: 'bold', maxWidthMm: titleRoom, minSizePt: type.heading });
   if (fitted.shortened) {
-    throw new LayoutError(args.where, `the title "${args.title}" does not fit in ${titleRoom.toFixed(0)} mm beside the shop name; shorten the name or use wider paper`);
+    throw new LayoutError(args.where, `the title "${args.title}" does not fit in ${titleRoom.toFixed(0)} mm; shorten the name or use wider paper`);
   }
-  const title = label({ x: safe.x, y: safe.y + ascentMm(fitted.sizePt, 'bold'), text: args.title, sizePt: fitted.sizePt, weight: 'bold', role: 'sheet-title', where: args.where });
-  const subtitleTop = safe.y + linePitchMm(fitted.sizePt, 'bold');
-  const subFit = fitText({ text: args.subtitle, sizePt: type.body, weight: 'regular', maxWidthMm: titleRoom, minSizePt: type.min });
-  if (subFit.shortened) {
-    throw new LayoutError(args.where, `the subtitle "${args.subtitle}" does not fit in ${titleRoom.toFixed(0)} mm; shorten it`);
+  nodes.push(label({ x: safe.x, y: safe.y + ascentMm(fitted.sizePt, 'bold'), text: args.title, sizePt: fitted.sizePt, weight: 'bold', role: 'sheet-title', where: args.where }));
+  let cursor = safe.y + linePitchMm(fitted.sizePt, 'bold');
+  const line = (text: string, sizePt: number, weight: 'regular' | 'bold', role: string, colour: string): void => {
+    const fit = fitText({ text, sizePt, weight, maxWidthMm: titleRoom, minSizePt: type.min });
+    if (fit.shortened) throw new LayoutError(args.where, `"${text}" does not fit in ${titleRoom.toFixed(0)} mm; shorten it`);
+    nodes.push(label({ x: safe.x, y: cursor + ascentMm(fit.sizePt, weight), text, sizePt: fit.sizePt, weight, colour, role, where: args.where }));
+    cursor += linePitchMm(fit.sizePt, weight);
+  };
+  line(args.subtitle, type.body, 'regular', 'sheet-subtitle', INK_SOFT);
+  if (sideBySide) {
+    nodes.push(label({ x: right, y: safe.y + ascentMm(type.heading, 'bold'), ...shopName, anchor: 'end', role: 'shop-name', where: args.where }));
+    nodes.push(label({ x: right, y: safe.y + linePitchMm(type.heading, 'bold') + ascentMm(type.small), text: args.site.contactLine, sizePt: type.small, anchor: 'end', colour: INK_SOFT, role: 'shop-contact', where: args.where }));
+    cursor = Math.max(cursor, safe.y + linePitchMm(type.heading, 'bold') + linePitchMm(type.small));
+  } else {
+    line(`${args.site.shopName} · ${args.site.contactLine}`, type.small, 'regular', 'shop-name', INK_SOFT);
   }
-  const subtitle = label({ x: safe.x, y: subtitleTop + ascentMm(subFit.sizePt), text: args.subtitle, sizePt: subFit.sizePt, colour: INK_SOFT, role: 'sheet-subtitle', where: args.where });
-  const headerBottom = Math.max(subtitleTop + linePitchMm(subFit.sizePt), safe.y + linePitchMm(type.heading, 'bold') + linePitchMm(type.small)) + 1.5;
-  nodes.push(title, subtitle, shop, contact, rule(safe.x, right, headerBottom, 'header-rule'));
+  const headerBottom = cursor + 1.5;
+  nodes.push(rule(safe.x, right, headerBottom, 'header-rule'));
 
   // Footer: one line at the bottom of the safe box.
   const footerPitch = linePitchMm(type.small);
   const footerTop = safe.y + safe.height - footerPitch;
   const footerBaseline = footerTop + ascentMm(type.small);
-  const footerText = `Issued ${args.dateIso} · Data revision ${args.site.dataRevision} · Estimates only: confirm by sea trial`;
+  const slotMm = Math.min(PAGE_SLOT_WIDTH_MM, safe.width * 0.2);
+  // The long form where it fits; the cautions block carries the sea-trial advice anyway.
+  const footerText = [
+    `Issued ${args.dateIso} · Data revision ${args.site.dataRevision} · Estimates only: confirm by sea trial`,
+    `Issued ${args.dateIso} · Data revision ${args.site.dataRevision}`,
+  ].find((t) => measureTextMm({ text: t, sizePt: type.small, weight: 'regular' }) <= safe.width - slotMm - 2) ?? `Issued ${args.dateIso} · Data revision ${args.site.dataRevision}`;
   const footer = label({ x: safe.x, y: footerBaseline, text: footerText, sizePt: type.small, colour: INK_SOFT, role: 'revision-line', where: args.where });
-  if (footer.widthMm > safe.width - PAGE_SLOT_WIDTH_MM - 2) {
-    throw new LayoutError(args.where, `the footer line is ${footer.widthMm.toFixed(0)} mm, wider than the ${(safe.width - PAGE_SLOT_WIDTH_MM).toFixed(0)} mm it has; shorten the data revision`);
+  if (footer.widthMm > safe.width - slotMm - 2) {
+    throw new LayoutError(args.where, `the footer line is ${footer.widthMm.toFixed(0)} mm, wider than the ${(safe.width - slotMm).toFixed(0)} mm it has; shorten the data revision`);
   }
   const footerRuleY = footerTop - 1.5;
   nodes.push(rule(safe.x, right, footerRuleY, 'footer-rule'), footer, {
     type: 'rect',
     role: 'page-number-slot',
-    x: right - PAGE_SLOT_WIDTH_MM,
+    x: right - slotMm,
     y: footerTop,
-    width: PAGE_SLOT_WIDTH_MM,
+    width: slotMm,
     height: footerPitch,
   });
   nodes.push(...cropMarks(page));

@@ -24,9 +24,9 @@ function cellText(cell: Cell): { text: string; weight: FontWeight; colour: Colou
 }
 
 /** Column widths (mm) at a size: widest cell (header bold) plus padding on both sides. */
-function columnWidths(columns: readonly Column[], rows: readonly (readonly Cell[])[], sizePt: number): number[] {
+function columnWidths(columns: readonly Column[], rows: readonly (readonly Cell[])[], sizePt: number, withHeader: boolean): number[] {
   return columns.map((col, c) => {
-    let w = measureTextMm({ text: col.header, sizePt, weight: 'bold' });
+    let w = withHeader ? measureTextMm({ text: col.header, sizePt, weight: 'bold' }) : 0;
     for (const row of rows) {
       const cell = cellText(row[c]);
       w = Math.max(w, measureTextMm({ text: cell.text, sizePt, weight: cell.weight }));
@@ -46,6 +46,8 @@ export function table(args: {
   minSizePt: number;
   /** Spread spare width over the columns so the table spans maxWidthMm. */
   fullWidth?: boolean;
+  /** Default true; false for item/value lists whose first column says what each row is. */
+  header?: boolean;
   role?: string;
   where: string;
 }): Block & { widthMm: number; sizePt: number } {
@@ -55,7 +57,7 @@ export function table(args: {
     }
   }
   let sizePt = args.sizePt;
-  let widths = columnWidths(args.columns, args.rows, sizePt);
+  let widths = columnWidths(args.columns, args.rows, sizePt, args.header ?? true);
   let total = widths.reduce((a, b) => a + b, 0);
   if (total > args.maxWidthMm) {
     // Width is proportional to size, so one step lands on the size that fits (rounded down to 0.1 pt).
@@ -63,7 +65,7 @@ export function table(args: {
     if (sizePt < args.minSizePt) {
       throw new LayoutError(args.where, `the table needs ${total.toFixed(0)} mm at ${args.sizePt} pt but has ${args.maxWidthMm.toFixed(0)} mm, and would need type under ${args.minSizePt} pt; use wider paper or fewer columns`);
     }
-    widths = columnWidths(args.columns, args.rows, sizePt);
+    widths = columnWidths(args.columns, args.rows, sizePt, args.header ?? true);
     total = widths.reduce((a, b) => a + b, 0);
   }
   if (args.fullWidth && total < args.maxWidthMm) {
@@ -94,15 +96,16 @@ export function table(args: {
       );
     });
   };
-  emitRow(args.columns.map((c) => c.header), args.y, true);
-  const bodyTop = args.y + rowPitch;
+  const withHeader = args.header ?? true;
+  if (withHeader) emitRow(args.columns.map((c) => c.header), args.y, true);
+  const bodyTop = withHeader ? args.y + rowPitch : args.y;
   args.rows.forEach((row, r) => {
     const top = bodyTop + r * rowPitch;
     if (r % 2 === 1) nodes.push({ type: 'rect', role: 'table-zebra', x: args.x, y: top, width: total, height: rowPitch, fill: { colour: ZEBRA } });
     emitRow(row, top, false);
   });
-  const heightMm = rowPitch * (args.rows.length + 1);
+  const heightMm = rowPitch * (args.rows.length + (withHeader ? 1 : 0));
   const line = (y: number, w: number): SceneNode => ({ type: 'path', role: 'table-rule', segments: [{ op: 'M', x: args.x, y }, { op: 'L', x: args.x + total, y }], stroke: stroke(INK, w) });
-  nodes.push(line(args.y, STROKE.rule), line(bodyTop, STROKE.rule), line(args.y + heightMm, STROKE.rule));
+  nodes.push(line(args.y, STROKE.rule), ...(withHeader ? [line(bodyTop, STROKE.rule)] : []), line(args.y + heightMm, STROKE.rule));
   return { nodes: [{ type: 'group', role: args.role ?? 'table', children: nodes }], heightMm, widthMm: total, sizePt };
 }

@@ -1,0 +1,60 @@
+/**
+ * The smaller match chart on boat sheets: the boat's engine variant at its site, every impeller of its
+ * jet (same styles as on the wall chart), the WOT point of each, the fitted one in bold.
+ */
+import type { Boat, PowerUnit } from '../../data/types.ts';
+import type { Box } from '../../scene/types.ts';
+import type { BoatResult } from '../../analysis/index.ts';
+import { isWarning } from '../../analysis/index.ts';
+import { rpmText } from '../kit/format.ts';
+import { matchChart, type EngineSeries, type MatchChart } from './matchChart.ts';
+import { engineSeries, impellerSeries } from './series.ts';
+import { pointSuffix } from '../words.ts';
+
+/** Rpm and power ranges around a boat's WOT points and cruise settings. */
+export function boatDomains(result: BoatResult, extraPeakKw = 0): { rpm: [number, number]; powerKw: [number, number] } {
+  const rpms = result.alternatives.flatMap((a) => [a.band.low.speedRpm, a.band.high.speedRpm]);
+  const cruiseRpms = result.cruise.flatMap((c) => (c.speedRpm !== undefined ? [c.speedRpm] : []));
+  const lo = Math.min(result.limits.windowLowRpm * 0.8, ...rpms, ...cruiseRpms) * 0.95;
+  const powers = result.alternatives.flatMap((a) => [a.band.low.powerKw, a.band.high.powerKw]);
+  const peak = Math.max(...powers, extraPeakKw);
+  return { rpm: [Math.floor(lo / 100) * 100, result.limits.maxRpm * 1.04], powerKw: [peak * 0.4, peak * 1.08] };
+}
+
+/** Match chart for one boat in a box. `engines` overrides the site curve (upgrade sheets). */
+export function boatChart(args: { boat: Boat; result: BoatResult; box: Box; sizePt: number; powerUnitFirst: PowerUnit; engines?: readonly EngineSeries[]; points?: 'all' | 'fitted'; where: string }): MatchChart {
+  const { boat, result } = args;
+  const engines = args.engines ?? engineSeries({ family: boatFamily(boat), ambient: boat.site.ambient });
+  const impellers = impellerSeries({ jet: boat.jet, driveLine: boat.driveLine, waterDensityKgM3: boat.water.densityKgM3 });
+  const shown = args.points === 'fitted' ? result.alternatives.filter((a) => a.fitted === 'yes') : result.alternatives;
+  const peakKw = Math.max(...engines.map((e) => Math.max(...e.site.pieces.map((p) => Math.max(p.y0, p.y1)))));
+  const d = boatDomains(result, peakKw);
+  return matchChart({
+    box: args.box,
+    sizePt: args.sizePt,
+    powerUnitFirst: args.powerUnitFirst,
+    rpmDomain: d.rpm,
+    powerKwDomain: d.powerKw,
+    impellers,
+    engines,
+    points: shown.map((a) => ({
+      key: `impeller:${a.impellerId}|engine:${result.engineVariantId}`,
+      impellerId: a.impellerId,
+      filled: true,
+      speedRpm: a.band.nominal.speedRpm,
+      powerKw: a.band.nominal.powerKw,
+      text: `${a.fitted === 'yes' ? 'Fitted: ' : ''}${rpmText(a.band.nominal.speedRpm)} rpm${pointSuffix(a.band.nominal.status)}`,
+      warn: isWarning(a.band.nominal.status),
+    })),
+    window: { lowRpm: result.limits.windowLowRpm, highRpm: result.limits.windowHighRpm },
+    maxRpm: result.limits.maxRpm,
+    cruise: [],
+    markerMm: 2.4,
+    where: args.where,
+  });
+}
+
+/** A one-variant family view of the boat's engine, so the chart draws only what is fitted. */
+function boatFamily(boat: Boat) {
+  return { id: boat.engineFamilyId, label: boat.engine.label, maker: '', fuel: boat.engine.fuel, variants: [boat.engine], source: boat.source };
+}

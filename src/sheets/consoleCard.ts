@@ -1,0 +1,87 @@
+/**
+ * Console card (A6 or 4×6 in), for owners: the expected WOT rpm range in large high-contrast figures,
+ * cruise rpm for the usual settings, what to check when WOT rpm is outside the range, and the cautions.
+ */
+import type { SheetRequest } from '../data/types.ts';
+import type { Scene } from '../scene/types.ts';
+import { analyseBoat } from '../analysis/index.ts';
+import { assembleScene, assertFits } from './kit/assemble.ts';
+import { ascentMm, label, linePitchMm, paragraph, type Block } from './kit/block.ts';
+import { cautionsBlock } from './kit/cautions.ts';
+import { rpmBandText, rpmText } from './kit/format.ts';
+import { sheetFrame } from './kit/frame.ts';
+import { stack, type Part } from './kit/stack.ts';
+import { INK, typeScale } from './kit/style.ts';
+import { table } from './kit/table.ts';
+import { findBoat, type SheetContext } from './context.ts';
+import { LayoutError } from './kit/errors.ts';
+
+type BoatRequest = Extract<SheetRequest, { kind: 'consoleCard' }>;
+
+/** Cards are trimmed cleanly and held in the hand: 6 mm keeps text clear of the cut (common practice, no source). */
+const CARD_MARGIN_MM = 6;
+
+/** What to look at, in order of how often it is the cause (common practice, no source). */
+export const OFF_RANGE_CHECKS: readonly string[] = [
+  'Intake grate fouled or blocked (weed, bags, debris).',
+  'More load aboard than usual (people, fuel, water, gear).',
+  'Impeller damaged or worn, or wear ring clearance grown.',
+  'Engine fault: have it checked before running hard again.',
+];
+
+/** Builds the console-card scene. */
+export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene {
+  const where = `console card ${request.boatId}`;
+  const boat = findBoat(ctx, request.boatId, where);
+  const site = ctx.project.site;
+  const result = analyseBoat({ boat, project: ctx.project });
+  const type = typeScale(request.paper);
+  const frame = sheetFrame({ paper: request.paper, site, title: boat.name, subtitle: `Console card · impeller ${result.impellerLabel}`, dateIso: ctx.dateIso, type, marginMm: CARD_MARGIN_MM, where });
+  const box = frame.contentBox;
+  const b = result.wot;
+  const rangeText = rpmBandText(b.low.speedRpm, b.high.speedRpm);
+  const cruiseRows = result.cruise.filter((c) => c.speedRpm !== undefined && c.status === 'ok').map((c) => [c.label, { text: `${rpmText(c.speedRpm as number)} rpm`, weight: 'bold' as const }]);
+  const parts: Part[] = [
+    ({ x, y, widthMm }): Block => {
+      const head = label({ x, y: y + ascentMm(type.heading, 'bold'), text: 'Expected WOT rpm', sizePt: type.heading, weight: 'bold', role: 'heading', where });
+      // The big figure shrinks only as far as it must to fit the card; below the heading size is an error.
+      let sizePt = type.display;
+      const big = () => label({ x, y: y + linePitchMm(type.heading, 'bold') + ascentMm(sizePt, 'bold'), text: rangeText, sizePt, weight: 'bold', colour: INK, role: 'wot-range', where });
+      let node = big();
+      if (node.widthMm > widthMm) {
+        sizePt = Math.floor(((sizePt * widthMm) / node.widthMm) * 10) / 10;
+        if (sizePt < type.heading) throw new LayoutError(where, `the WOT range "${rangeText}" does not fit the card; use a larger card`);
+        node = big();
+      }
+      const sub = paragraph({ x, y: y + linePitchMm(type.heading, 'bold') + linePitchMm(sizePt, 'bold'), widthMm, text: `Most likely ${rpmText(b.nominal.speedRpm)} rpm. Never above ${rpmText(result.limits.maxRpm)} rpm.`, sizePt: type.body, weight: 'bold', role: 'wot-note', where });
+      return { nodes: [head, node, ...sub.nodes], heightMm: linePitchMm(type.heading, 'bold') + linePitchMm(sizePt, 'bold') + sub.heightMm };
+    },
+    ...(cruiseRows.length > 0
+      ? [({ x, y, widthMm }: { x: number; y: number; widthMm: number }): Block => table({ x, y, maxWidthMm: widthMm, columns: [{ header: 'Cruise', align: 'left' }, { header: 'Engine', align: 'right' }], rows: cruiseRows, sizePt: type.body + 1, minSizePt: type.min, fullWidth: true, role: 'cruise-table', where })]
+      : []),
+    ({ x, y, widthMm }): Block => {
+      const head = paragraph({ x, y, widthMm, text: 'WOT rpm outside the range? Check:', sizePt: type.body, weight: 'bold', role: 'heading', where });
+      let cursor = y + head.heightMm;
+      const nodes = [...head.nodes];
+      for (const item of OFF_RANGE_CHECKS) {
+        const p = paragraph({ x: x + 3, y: cursor, widthMm: widthMm - 3, text: item, sizePt: type.small, role: 'check-item', where });
+        nodes.push(label({ x, y: cursor + ascentMm(type.small), text: '•', sizePt: type.small, role: 'bullet', where }), ...p.nodes);
+        cursor += p.heightMm;
+      }
+      return { nodes, heightMm: cursor - y };
+    },
+    ({ x, y, widthMm }) => cautionsBlock({ site, x, y, widthMm, sizePt: type.small, headingPt: type.body, where }),
+  ];
+  const laid = stack({ x: box.x, y: box.y, widthMm: box.width, gapMm: 2.5, parts });
+  assertFits(box, laid.bottomMm, where);
+  return assembleScene({
+    frame,
+    content: laid.nodes,
+    title: `${boat.name}: console card`,
+    description: `Console card for ${boat.name}: expected WOT ${rangeText}, most likely ${rpmText(b.nominal.speedRpm)} rpm; cruise rpm; checks when WOT rpm is outside the range; cautions.`,
+    subject: 'Console card',
+    keywords: ['console card', boat.id],
+    dateIso: ctx.dateIso,
+    role: 'console-card',
+  });
+}

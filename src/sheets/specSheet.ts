@@ -1,0 +1,74 @@
+/**
+ * Boat spec sheet (A4 portrait by default), for dealers: fitted combination and conditions, the predicted
+ * WOT band and power, a small match chart, the cruise table, every alternative impeller, and the cautions.
+ */
+import type { SheetRequest } from '../data/types.ts';
+import type { Scene } from '../scene/types.ts';
+import { analyseBoat, isWarning } from '../analysis/index.ts';
+import { boatChart } from './chart/boatChart.ts';
+import { alternativeRows, cruiseRows, fittedRows, wotHeadline } from './boatTables.ts';
+import { assembleScene, assertFits } from './kit/assemble.ts';
+import { paragraph, type Block } from './kit/block.ts';
+import { cautionsBlock } from './kit/cautions.ts';
+import { sheetFrame } from './kit/frame.ts';
+import { stack, type Part } from './kit/stack.ts';
+import { INK, WARN, typeScale } from './kit/style.ts';
+import { table, type Cell, type Column } from './kit/table.ts';
+import { findBoat, type SheetContext } from './context.ts';
+
+type BoatRequest = Extract<SheetRequest, { kind: 'specSheet' | 'consoleCard' | 'upgradeSheet' }>;
+
+/** A heading followed by a table, as one part. */
+export function tablePart(args: { heading: string; columns: Column[]; rows: Cell[][]; header?: boolean; sizePt: number; minSizePt: number; headingPt: number; role: string; where: string }): Part {
+  return ({ x, y, widthMm }): Block => {
+    const h = paragraph({ x, y, widthMm, text: args.heading, sizePt: args.headingPt, weight: 'bold', role: 'heading', where: args.where });
+    const t = table({ x, y: y + h.heightMm + 0.5, maxWidthMm: widthMm, columns: args.columns, rows: args.rows, sizePt: args.sizePt, minSizePt: args.minSizePt, fullWidth: true, header: args.header, role: args.role, where: `${args.where}: ${args.heading}` });
+    return { nodes: [...h.nodes, ...t.nodes], heightMm: h.heightMm + 0.5 + t.heightMm };
+  };
+}
+
+/** Builds the spec-sheet scene. */
+export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
+  const where = `spec sheet ${request.boatId}`;
+  const boat = findBoat(ctx, request.boatId, where);
+  const site = ctx.project.site;
+  const unit = site.powerUnitFirst;
+  const result = analyseBoat({ boat, project: ctx.project });
+  const type = typeScale(request.paper);
+  const frame = sheetFrame({ paper: request.paper, site, title: `${boat.name}: spec sheet`, subtitle: `${boat.engine.label} · ${boat.jet.label} · impeller ${result.impellerLabel}`, dateIso: ctx.dateIso, type, where });
+  const box = frame.contentBox;
+  const warn = isWarning(result.wot.nominal.status);
+  const common = { sizePt: type.body, minSizePt: type.min, headingPt: type.heading, where };
+  const fitted = fittedRows(boat, result, unit);
+  const cruise = cruiseRows(boat, result, unit);
+  const alts = alternativeRows(result, unit);
+  const parts: Part[] = [
+    tablePart({ heading: 'Fitted combination', ...fitted, header: false, ...common, role: 'fitted-table' }),
+    ({ x, y, widthMm }) => {
+      const head = paragraph({ x, y, widthMm, text: wotHeadline(result, unit), sizePt: type.heading, weight: 'bold', colour: warn ? WARN : INK, role: 'wot-headline', where });
+      const why = paragraph({ x, y: y + head.heightMm + 0.5, widthMm, text: `${result.wot.verdict}. The band covers impeller rating ± ${boat.jet.family.tolerancePct} % and engine power ± ${boat.engine.powerTolerancePct} %.`, sizePt: type.body, role: 'wot-verdict', where });
+      return { nodes: [...head.nodes, ...why.nodes], heightMm: head.heightMm + 0.5 + why.heightMm };
+    },
+    ({ x, y, widthMm }) => {
+      const chart = boatChart({ boat, result, box: { x, y, width: widthMm, height: 82 }, sizePt: type.small, powerUnitFirst: unit, where });
+      const notes = chart.notes.map((n) => `(${n.number}) ${n.text}`).join('  ');
+      const note = notes ? paragraph({ x, y: y + 83, widthMm, text: notes, sizePt: type.small, where }) : { nodes: [], heightMm: 0 };
+      return { nodes: [chart.node, ...note.nodes], heightMm: 83 + note.heightMm };
+    },
+    tablePart({ heading: 'Cruise settings', ...cruise, ...common, role: 'cruise-table' }),
+    tablePart({ heading: 'Every impeller of this jet on this boat', ...alts, ...common, role: 'alternatives-table' }),
+    ({ x, y, widthMm }) => cautionsBlock({ site, x, y, widthMm, sizePt: type.body, headingPt: type.heading, where }),
+  ];
+  const laid = stack({ x: box.x, y: box.y, widthMm: box.width, gapMm: 4, parts });
+  assertFits(box, laid.bottomMm, where);
+  return assembleScene({
+    frame,
+    content: laid.nodes,
+    title: `${boat.name}: spec sheet`,
+    description: `Spec sheet for ${boat.name}: ${wotHeadline(result, unit)}; cruise table, every impeller of ${boat.jet.label}, and cautions.`,
+    subject: 'Boat spec sheet',
+    keywords: ['spec sheet', boat.id, boat.engineFamilyId, boat.jetId],
+    dateIso: ctx.dateIso,
+    role: 'spec-sheet',
+  });
+}

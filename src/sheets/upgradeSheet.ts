@@ -1,0 +1,85 @@
+/**
+ * Upgrade sheet (A4 portrait by default): what an engine power change of +5…+50 % does to WOT rpm and
+ * power with the fitted impeller, and the power change needed for a given WOT rpm gain, with a chart of
+ * the scaled engine curves against the fitted impeller.
+ */
+import type { SheetRequest } from '../data/types.ts';
+import type { Scene } from '../scene/types.ts';
+import { analyseBoat, isWarning } from '../analysis/index.ts';
+import { engineCurve } from '../model/index.ts';
+import { boatChart } from './chart/boatChart.ts';
+import type { EngineSeries } from './chart/matchChart.ts';
+import { assembleScene, assertFits } from './kit/assemble.ts';
+import { paragraph } from './kit/block.ts';
+import { cautionsBlock } from './kit/cautions.ts';
+import { percentText, powerText, rpmText } from './kit/format.ts';
+import { sheetFrame } from './kit/frame.ts';
+import { stack, type Part } from './kit/stack.ts';
+import { INK, STROKE, WARN, typeScale } from './kit/style.ts';
+import { findBoat, type SheetContext } from './context.ts';
+import { tablePart } from './specSheet.ts';
+
+type BoatRequest = Extract<SheetRequest, { kind: 'upgradeSheet' }>;
+
+/** Power changes drawn on the chart (a subset of the table, so the curves stay apart). */
+const CHART_STEPS_PCT: readonly number[] = [0, 10, 20, 30, 50];
+const CHART_DASHES: readonly (readonly number[])[] = [[], [6, 1.6], [3, 1.2], [6, 1.4, 1.2, 1.4], [1.2, 1.2]];
+
+/** Builds the upgrade-sheet scene. */
+export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
+  const where = `upgrade sheet ${request.boatId}`;
+  const boat = findBoat(ctx, request.boatId, where);
+  const site = ctx.project.site;
+  const unit = site.powerUnitFirst;
+  const result = analyseBoat({ boat, project: ctx.project });
+  const type = typeScale(request.paper);
+  const frame = sheetFrame({ paper: request.paper, site, title: `${boat.name}: engine upgrade`, subtitle: `${boat.engine.label} · ${boat.jet.label} · impeller ${result.impellerLabel} kept`, dateIso: ctx.dateIso, type, where });
+  const box = frame.contentBox;
+  const common = { sizePt: type.body, minSizePt: type.min, headingPt: type.heading, where };
+  const engines: EngineSeries[] = CHART_STEPS_PCT.map((pct, i) => ({
+    id: `plus-${pct}`,
+    label: pct === 0 ? 'As now' : `${percentText(pct)} power`,
+    site: engineCurve(boat.engine, { ambient: boat.site.ambient, powerFactor: 1 + pct / 100 }),
+    widthMm: pct === 0 ? STROKE.emphasis : STROKE.series,
+    dashMm: CHART_DASHES[i],
+  }));
+  const upgradeRows = [
+    ['As now', rpmText(result.wot.nominal.speedRpm), powerText(result.wot.nominal.powerKw, unit), result.wot.nominal.statusText],
+    ...result.upgrade.map((u) => [
+      percentText(u.changePct),
+      rpmText(u.wot.speedRpm),
+      powerText(u.wot.powerKw, unit),
+      { text: u.wot.statusText, weight: isWarning(u.wot.status) ? ('bold' as const) : ('regular' as const), colour: isWarning(u.wot.status) ? WARN : INK },
+    ]),
+  ];
+  const gainRows = result.rpmGains.map((g) => [
+    `+${g.gainRpm} rpm`,
+    `${rpmText(g.targetRpm)} rpm`,
+    g.status === 'ok' && g.powerChangePct !== undefined ? percentText(g.powerChangePct, { digits: 0 }) : { text: 'not reachable below max rpm', weight: 'bold' as const, colour: WARN },
+  ]);
+  const parts: Part[] = [
+    ({ x, y, widthMm }) =>
+      paragraph({ x, y, widthMm, text: `With the same impeller, more engine power raises WOT rpm only a little: the impeller takes power as rpm to the power ${boat.jet.family.exponent}, so x % more power gives roughly x/${boat.jet.family.exponent} % more rpm, less where the engine curve is flat. Check the new WOT rpm against the maximum (${rpmText(result.limits.maxRpm)} rpm).`, sizePt: type.body, where }),
+    ({ x, y, widthMm }) => {
+      const chart = boatChart({ boat, result, box: { x, y, width: widthMm, height: 88 }, sizePt: type.small, powerUnitFirst: unit, engines, points: 'fitted', where });
+      const notes = chart.notes.map((n) => `(${n.number}) ${n.text}`).join('  ');
+      const note = notes ? paragraph({ x, y: y + 89, widthMm, text: notes, sizePt: type.small, where }) : { nodes: [], heightMm: 0 };
+      return { nodes: [chart.node, ...note.nodes], heightMm: 89 + note.heightMm };
+    },
+    tablePart({ heading: `Engine power change with impeller ${result.impellerLabel}`, columns: [{ header: 'Power change', align: 'left' }, { header: 'WOT rpm', align: 'right' }, { header: `Power at WOT`, align: 'right' }, { header: 'Status', align: 'left' }], rows: upgradeRows, ...common, role: 'upgrade-table' }),
+    tablePart({ heading: 'Power needed for more WOT rpm', columns: [{ header: 'Gain', align: 'left' }, { header: 'Target WOT', align: 'right' }, { header: 'Power change needed', align: 'right' }], rows: gainRows, ...common, role: 'rpm-gain-table' }),
+    ({ x, y, widthMm }) => cautionsBlock({ site, x, y, widthMm, sizePt: type.body, headingPt: type.heading, where }),
+  ];
+  const laid = stack({ x: box.x, y: box.y, widthMm: box.width, gapMm: 4, parts });
+  assertFits(box, laid.bottomMm, where);
+  return assembleScene({
+    frame,
+    content: laid.nodes,
+    title: `${boat.name}: engine upgrade`,
+    description: `Engine upgrade sheet for ${boat.name}: WOT rpm and power for engine power changes of +5 to +50 % with impeller ${result.impellerLabel}, and the power change needed for WOT rpm gains.`,
+    subject: 'Engine upgrade sheet',
+    keywords: ['upgrade', boat.id],
+    dateIso: ctx.dateIso,
+    role: 'upgrade-sheet',
+  });
+}
