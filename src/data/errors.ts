@@ -66,6 +66,9 @@ export function describeValue(value: unknown): string {
     if (!Number.isFinite(value)) return value > 0 ? '.inf (infinity)' : '-.inf (minus infinity)';
     return String(value);
   }
+  if (value instanceof Uint8Array) return 'binary data (!!binary)';
+  if (value instanceof Set) return `a set of ${value.size} ${value.size === 1 ? 'entry' : 'entries'} (!!set)`;
+  if (value instanceof Date) return `a timestamp (${Number.isNaN(value.getTime()) ? 'invalid' : value.toISOString()})`;
   if (Array.isArray(value)) return `a list of ${value.length} ${value.length === 1 ? 'entry' : 'entries'}`;
   if (typeof value === 'object') return 'a mapping (key: value lines)';
   return shorten(String(value));

@@ -3,11 +3,14 @@ import type { Problem } from './errors.ts';
 
 export type FileKind = 'engine' | 'jet' | 'boat' | 'book' | 'site';
 
-/** One file handed to the loader. unreadable says why the text could not be had (too large, no permission). */
+/**
+ * One file handed to the loader. unreadable says why the text could not be had (too large, no
+ * permission, not UTF-8) and, when known, where in the file (1-based; 1:1 otherwise).
+ */
 export interface SourceFile {
   readonly path: string;
   readonly text: string;
-  readonly unreadable?: Omit<Problem, 'field'>;
+  readonly unreadable?: Omit<Problem, 'field'> & { readonly line?: number; readonly column?: number };
 }
 
 export const KIND_DIRS: Readonly<Record<string, FileKind>> = Object.freeze({ engines: 'engine', jets: 'jet', boats: 'boat', books: 'book' });

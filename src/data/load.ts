@@ -15,6 +15,7 @@ import { normaliseSite } from './normalise/site.ts';
 import { boatFile, bookFile, engineFile, jetFile, siteFile } from './schema/index.ts';
 import type { Boat, Book, DataError, EngineFamily, JetUnit, LoadResult, SiteConfig } from './types.ts';
 import { at, validate } from './validate.ts';
+import { decodeUtf8 } from './utf8.ts';
 import { MAX_FILE_BYTES, parseYaml, type YamlSource } from './yamlSource.ts';
 
 export type { SourceFile } from './files.ts';
@@ -60,7 +61,14 @@ async function readSource(path: string): Promise<SourceFile | null> {
     if (info.size > MAX_FILE_BYTES) {
       return { path, text: '', unreadable: { expected: `must be at most ${MAX_FILE_BYTES / 1024 / 1024} MB`, found: `${(info.size / 1024 / 1024).toFixed(1)} MB`, fix: 'definitions are small; split or trim the file' } };
     }
-    return { path, text: await readFile(path, 'utf8') };
+    const decoded = decodeUtf8(await readFile(path));
+    if (decoded.ok) return { path, text: decoded.text };
+    const byte = `0x${decoded.byte.toString(16).toUpperCase().padStart(2, '0')}`;
+    return {
+      path,
+      text: '',
+      unreadable: { line: decoded.line, column: decoded.column, expected: 'must be UTF-8 text', found: `the byte ${byte}, which is not UTF-8`, fix: 'save the file as UTF-8 in your editor (it may have been saved as Latin-1 or Windows-1252)' },
+    };
   } catch (err) {
     const code = (err as { code?: string }).code;
     if (code === 'ENOENT') return null;
@@ -90,7 +98,8 @@ export function loadProjectFromFiles(files: readonly SourceFile[], opts: { dataD
     }
     seen.set(key, f.path);
     if (f.unreadable) {
-      errors.push(dataError(place, { field: '', ...f.unreadable }));
+      const { line = 1, column = 1, ...problem } = f.unreadable;
+      errors.push(dataError({ file: f.path, line, column }, { field: '', ...problem }));
       checked.push({ kind: c.kind, stem: c.stem, raw: undefined });
       continue;
     }

@@ -47,7 +47,10 @@ function validPrefixLength(bytes: Uint8Array): number {
 function lastCharStart(bytes: Uint8Array, n: number): number {
   for (let i = n - 1; i >= Math.max(0, n - 3); i--) {
     const b = bytes[i];
-    if ((b & 0xc0) !== 0x80) return b >= 0xc0 ? i : n;
+    if ((b & 0xc0) !== 0x80) {
+      const length = b >= 0xf0 ? 4 : b >= 0xe0 ? 3 : b >= 0xc0 ? 2 : 1;
+      return i + length > n ? i : n;
+    }
   }
   return n;
 }

@@ -4,6 +4,7 @@
  * inside the parser, which no try/catch can recover), alias-expansion cap, duplicate keys.
  */
 import { isAlias, isMap, isScalar, isSeq, LineCounter, parseDocument, type Document, type Node, type Pair } from 'yaml';
+import { deepestBlockLine, MAX_CONTENT_COLUMN } from './blockDepth.ts';
 import { dataError, describeValue, fieldName, shorten } from './errors.ts';
 import type { DataError } from './types.ts';
 
@@ -53,12 +54,20 @@ export function parseYaml(args: { file: string; text: string }): ParseResult {
       errors: [dataError({ file, line: pos.line, column: pos.col }, { field: '', expected: `must not nest [ ] or { } deeper than ${MAX_FLOW_DEPTH} levels`, found: `${depth.max} levels` })],
     };
   }
+  const deep = deepestBlockLine(text);
+  if (deep) {
+    return {
+      ok: false,
+      errors: [dataError({ file, line: deep.line, column: deep.column }, { field: '', expected: `must not nest or indent values deeper than column ${MAX_CONTENT_COLUMN}`, found: `a value starting at column ${deep.column}`, fix: 'our formats need a few levels; remove the extra indentation or "- " markers' })],
+    };
+  }
   try {
     const lineCounter = new LineCounter();
     const doc = parseDocument(text, { lineCounter, uniqueKeys: true, schema: 'core', merge: false, prettyErrors: false, strict: true });
     // Every duplicate key is its own mistake; other syntax errors cascade, so only the first is shown.
-    const duplicates = doc.errors.filter((e) => e.code === 'DUPLICATE_KEY');
     const firstOther = [...doc.errors, ...doc.warnings].find((e) => e.code !== 'DUPLICATE_KEY');
+    // A "duplicate" after a syntax error is usually the parser's recovery misreading the lines (a tab, a lost indent).
+    const duplicates = doc.errors.filter((e) => e.code === 'DUPLICATE_KEY' && (!firstOther || e.pos[0] < firstOther.pos[0]));
     const problems = [...duplicates, ...(firstOther ? [firstOther] : [])];
     if (problems.length > 0) {
       return {

@@ -54,10 +54,10 @@ export const boatFile = () =>
       notes: text().optional(),
       hull: hull(),
       /** Engine family id (data/engines/<id>.yaml) and, when it has several, the variant id. */
-      engine: slug(),
+      engine: slug().describe('Engine family id: the file name in data/engines/ without .yaml'),
       engine_variant: slug().optional(),
-      jet: slug(),
-      impeller: slug(),
+      jet: slug().describe('Jet unit id: the file name in data/jets/ without .yaml'),
+      impeller: slug().describe('Id of the fitted impeller in that jet unit'),
       drive_line: driveLine().default({ ratio: 1, efficiency: 0.97 }),
       water: water(),
       site: conditions().default({}),

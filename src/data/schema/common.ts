@@ -91,13 +91,13 @@ export function unitChoices<T extends z.ZodObject>(schema: T, choices: readonly 
 /** Air and pressure where a boat runs or a curve was measured. Altitude or pressure, not both. */
 const conditionsShape = {
   label: text().optional(),
-  altitude_m: between(-500, 6000, 'm'),
+  altitude_m: between(-500, 6000, 'm').describe('Altitude above sea level, m (pressure from the standard atmosphere)'),
   pressure_kpa: between(40, 110, 'kPa'),
   pressure_hpa: between(400, 1100, 'hPa'),
   pressure_inhg: between(12, 32.5, 'inHg'),
   air_temp_c: between(-40, 60, '°C'),
   air_temp_f: between(-40, 140, '°F'),
-  humidity_pct: between(0, 100, '%'),
+  humidity_pct: between(0, 100, '%').describe('Relative humidity, % (default 30)'),
 };
 
 export const PRESSURE_KEYS = ['altitude_m', 'pressure_kpa', 'pressure_hpa', 'pressure_inhg'] as const;

@@ -45,11 +45,11 @@ const tuneShape = {
   curve: curveTable(),
   known_point: knownPoint(),
   /** Multiplies the curve (or known point) power: 1.08 = an 8 % stronger tune. */
-  curve_scale: between(0.2, 5),
-  idle_rpm: rpm(),
-  wot_window_rpm: z.tuple([rpm(), rpm()], { error: 'must be a pair [low, high] in rpm, e.g. [4600, 5000]' }),
-  max_rpm: rpm(),
-  power_tolerance_pct: tolerancePct(),
+  curve_scale: between(0.2, 5).describe('Multiplies the curve power: 0.915 turns 350 hp into 320 hp'),
+  idle_rpm: rpm().describe('Idle speed, rpm'),
+  wot_window_rpm: z.tuple([rpm(), rpm()], { error: 'must be a pair [low, high] in rpm, e.g. [4600, 5000]' }).describe('Recommended wide-open-throttle window [low, high], rpm'),
+  max_rpm: rpm().describe('Maximum (rev-limit) speed, rpm'),
+  power_tolerance_pct: tolerancePct().describe('± % spread of real power about the curve (default 5)'),
   /** 1 = as published; 0.9 = a tired engine. */
   condition_factor: between(0.3, 1.5),
   bsfc_g_per_kwh: between(150, 600, 'g/kWh'),

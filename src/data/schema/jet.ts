@@ -8,8 +8,8 @@ export const impeller = () =>
       id: slug(),
       label: text(),
       /** Shaft power absorbed at the family's reference speed and water density. */
-      rating_kw: positive().optional(),
-      rating_hp: positive().optional(),
+      rating_kw: positive().describe('Power absorbed at the reference speed and water, kW').optional(),
+      rating_hp: positive().describe('Power absorbed at the reference speed and water, hp (550 ft·lbf/s)').optional(),
       notes: text().optional(),
     }),
     [{ keys: ['rating_kw', 'rating_hp'], required: true }],
@@ -23,10 +23,10 @@ export const jetFile = () =>
       maker: text(),
       notes: text().optional(),
       /** Impeller speed at which the ratings are stated. */
-      reference_speed_rpm: between(100, 10000, 'rpm').default(1000),
+      reference_speed_rpm: between(100, 10000, 'rpm').describe('Impeller speed at which ratings are stated, rpm').default(1000),
       /** k in P ∝ n^k: 3 is the ideal cube law. */
-      exponent: between(2, 4).default(3),
-      tolerance_pct: tolerancePct().default(5),
+      exponent: between(2, 4).describe('Absorption exponent k in P ∝ n^k (3 = cube law)').default(3),
+      tolerance_pct: tolerancePct().describe('± % manufacturing tolerance on every rating').default(5),
       reference_water: water().default('fresh'),
       impellers: z.array(impeller(), { error: 'must be a list of impellers, each with id, label and rating_kw or rating_hp' }).min(1, { error: 'must list at least one impeller' }),
     })
