@@ -22,8 +22,8 @@ import { tablePart } from './specSheet.ts';
 type BoatRequest = Extract<SheetRequest, { kind: 'upgradeSheet' }>;
 
 /** Power changes drawn on the chart (a subset of the table, so the curves stay apart). */
-const CHART_STEPS_PCT: readonly number[] = [0, 10, 20, 30, 50];
-const CHART_DASHES: readonly (readonly number[])[] = [[], [6, 1.6], [3, 1.2], [6, 1.4, 1.2, 1.4], [1.2, 1.2]];
+const CHART_STEPS_PCT: readonly number[] = [0, 25, 50];
+const CHART_DASHES: readonly (readonly number[])[] = [[], [6, 1.6], [1.2, 1.2]];
 
 /** Builds the upgrade-sheet scene. */
 export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scene {

@@ -50,11 +50,12 @@ export function chartAxes(scales: PlotScales, args: { sizePt: number; where: str
   const nodes: SceneNode[] = [{ type: 'rect', role: 'plot-frame', x: area.x, y: area.y, width: area.width, height: area.height, stroke: stroke(INK, STROKE.axis) }];
   const bottom = area.y + area.height;
   const right = area.x + area.width;
-  const tick = (x0: number, y0: number, x1: number, y1: number): SceneNode => ({ type: 'path', role: 'tick', segments: [{ op: 'M', x: x0, y: y0 }, { op: 'L', x: x1, y: y1 }], stroke: stroke(INK, STROKE.axis) });
+  // Each tick carries its value in its key ("x:4000", "left:150") so tests can rebuild the scales from the page.
+  const tick = (key: string, x0: number, y0: number, x1: number, y1: number): SceneNode => ({ type: 'path', role: 'tick', key, segments: [{ op: 'M', x: x0, y: y0 }, { op: 'L', x: x1, y: y1 }], stroke: stroke(INK, STROKE.axis) });
   const asc = ascentMm(sizePt);
   for (const t of scales.x.ticks(xTickCount(area))) {
     const x = scales.x(t);
-    nodes.push(tick(x, bottom, x, bottom + TICK_MM));
+    nodes.push(tick(`x:${t}`, x, bottom, x, bottom + TICK_MM));
     nodes.push(label({ x, y: bottom + TICK_MM + GAP_MM + asc, text: String(t), sizePt, anchor: 'middle', role: 'tick-label-x', where }));
   }
   const room = yLabelRoomMm(sizePt);
@@ -64,7 +65,7 @@ export function chartAxes(scales: PlotScales, args: { sizePt: number; where: str
       if (y < area.y - 0.01 || y > bottom + 0.01) continue;
       const x = side === 'left' ? area.x : right;
       const dir = side === 'left' ? -1 : 1;
-      nodes.push(tick(x, y, x + dir * TICK_MM, y));
+      nodes.push(tick(`${side}:${t}`, x, y, x + dir * TICK_MM, y));
       const node = label({ x: x + dir * (TICK_MM + GAP_MM), y: y + asc * 0.35, text: String(t), sizePt, anchor: side === 'left' ? 'end' : 'start', role: `tick-label-${side}`, where });
       if (node.widthMm > room) throw new LayoutError(where, `the power tick label "${t}" is wider than the axis margin`);
       nodes.push(node);

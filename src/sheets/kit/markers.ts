@@ -1,4 +1,4 @@
-/** Marker shapes (one per series) as scene nodes centred on a point; sizes in mm. */
+/** Marker shapes (one per series) as scene nodes whose bounding box is centred on the point; sizes in mm. */
 import type { Box, Colour, PathSegment, SceneNode } from '../../scene/types.ts';
 import type { MarkerShape } from './style.ts';
 import { STROKE, stroke } from './style.ts';
@@ -15,22 +15,16 @@ export function marker(args: { shape: MarkerShape; cx: number; cy: number; sizeM
   const paint = { stroke: stroke(args.colour, STROKE.rule), fill: { colour: args.fill } };
   if (shape === 'circle') return { type: 'circle', cx, cy, r, ...paint, ...tags };
   const s = r * 0.88;
-  const star = (): [number, number][] =>
-    Array.from({ length: 10 }, (_, i) => {
-      const a = -Math.PI / 2 + (i * Math.PI) / 5;
-      const rr = i % 2 === 0 ? r * 1.1 : r * 0.5;
-      return [cx + rr * Math.cos(a), cy + rr * Math.sin(a)];
-    });
   const shapes: Record<Exclude<MarkerShape, 'circle'>, () => PathSegment[]> = {
     square: () => polygon([[cx - s, cy - s], [cx + s, cy - s], [cx + s, cy + s], [cx - s, cy + s]]),
-    triangle: () => polygon([[cx, cy - r * 1.1], [cx + r, cy + r * 0.75], [cx - r, cy + r * 0.75]]),
-    triangleDown: () => polygon([[cx, cy + r * 1.1], [cx + r, cy - r * 0.75], [cx - r, cy - r * 0.75]]),
+    triangle: () => polygon([[cx, cy - r], [cx + r, cy + r], [cx - r, cy + r]]),
+    triangleDown: () => polygon([[cx, cy + r], [cx + r, cy - r], [cx - r, cy - r]]),
     diamond: () => polygon([[cx, cy - r * 1.15], [cx + r, cy], [cx, cy + r * 1.15], [cx - r, cy]]),
     cross: () => {
       const t = r * 0.38;
       return polygon([[cx - t, cy - r], [cx + t, cy - r], [cx + t, cy - t], [cx + r, cy - t], [cx + r, cy + t], [cx + t, cy + t], [cx + t, cy + r], [cx - t, cy + r], [cx - t, cy + t], [cx - r, cy + t], [cx - r, cy - t], [cx - t, cy - t]]);
     },
-    star: () => polygon(star()),
+    hexagon: () => polygon(Array.from({ length: 6 }, (_, i): [number, number] => [cx + r * Math.cos((i * Math.PI) / 3), cy + r * Math.sin((i * Math.PI) / 3)])),
   };
   return { type: 'path', segments: shapes[shape](), ...paint, ...tags };
 }

@@ -46,7 +46,7 @@ export const SERIES_DASHES: readonly (readonly number[])[] = [
   [0.6, 0.9],
 ];
 
-export type MarkerShape = 'circle' | 'square' | 'triangle' | 'diamond' | 'triangleDown' | 'cross' | 'star';
+export type MarkerShape = 'circle' | 'square' | 'triangle' | 'diamond' | 'triangleDown' | 'cross' | 'hexagon';
 export const SERIES_MARKERS: readonly MarkerShape[] = [
   'circle',
   'square',
@@ -54,7 +54,7 @@ export const SERIES_MARKERS: readonly MarkerShape[] = [
   'diamond',
   'triangleDown',
   'cross',
-  'star',
+  'hexagon',
 ];
 
 /** Everything that identifies one series on paper. */

@@ -1,0 +1,134 @@
+import { describe, expect, it } from 'vitest';
+import type { Paper, SheetRequest } from '../../src/data/types.ts';
+import { chartInstallation, defaultWallCharts, boatInstallation } from '../../src/analysis/index.ts';
+import { solveInstallation } from '../../src/model/index.ts';
+import { renderSvg } from '../../src/render/index.ts';
+import { LayoutError, sheetScene, sheetSlug } from '../../src/sheets/index.ts';
+import { boxesOverlap, boxInside } from '../../src/sheets/kit/boxes.ts';
+import { MIN_STROKE_MM } from '../../src/sheets/kit/style.ts';
+import { kwToPower } from '../../src/sheets/kit/units.ts';
+import { boat, family, jet, project } from './fixtures/demoProject.ts';
+import { leaves, markBox, scaleFromTicks, texts } from './sceneWalk.ts';
+
+const ctx = { project, dateIso: '2026-11-02' };
+const A4: Paper = { size: 'A4', orientation: 'portrait', bleedMm: 0 };
+const requests: SheetRequest[] = [
+  ...defaultWallCharts(project),
+  { kind: 'wallChart', engineFamilyId: family.id, jetId: jet.id, conditions: (defaultWallCharts(project)[0] as Extract<SheetRequest, { kind: 'wallChart' }>).conditions, paper: { size: 'Tabloid', orientation: 'landscape', bleedMm: 3 } },
+  { kind: 'specSheet', boatId: boat.id, paper: A4 },
+  { kind: 'specSheet', boatId: boat.id, paper: { size: 'Letter', orientation: 'portrait', bleedMm: 3 } },
+  { kind: 'consoleCard', boatId: boat.id, paper: { size: 'A6', orientation: 'portrait', bleedMm: 3 } },
+  { kind: 'consoleCard', boatId: boat.id, paper: { size: 'Card4x6', orientation: 'portrait', bleedMm: 0 } },
+  { kind: 'upgradeSheet', boatId: boat.id, paper: A4 },
+];
+const name = (r: SheetRequest) => `${sheetSlug(r)}-${r.paper.size}-${r.paper.orientation}${r.paper.bleedMm ? '-bleed' : ''}`;
+
+describe.each(requests.map((r) => [name(r), r] as const))('sheetScene() for %s', (_label, request) => {
+  const scene = sheetScene(request, ctx);
+
+  it('keeps every mark except crop marks inside the safe area', () => {
+    for (const n of leaves(scene)) {
+      if (n.role === 'crop-mark') continue;
+      const box = markBox(n);
+      if (box) expect(boxInside(box, scene.safeBox, 0.01), `${n.role} ${n.type === 'text' ? n.text : ''}`).toBe(true);
+    }
+  });
+
+  it('lets no two text boxes overlap', () => {
+    const boxes = texts(scene).map((t) => ({ t, box: markBox(t)! }));
+    for (let i = 0; i < boxes.length; i++) {
+      for (let j = i + 1; j < boxes.length; j++) {
+        expect(boxesOverlap(boxes[i].box, boxes[j].box, -0.01), `"${boxes[i].t.text}" / "${boxes[j].t.text}"`).toBe(false);
+      }
+    }
+  });
+
+  it('uses no type under the paper minimum (8 pt; 10 pt on A3/Tabloid) and no stroke under 0.5 pt', () => {
+    const minPt = request.paper.size === 'A3' || request.paper.size === 'Tabloid' ? 10 : 8;
+    for (const t of texts(scene)) expect(t.sizePt, t.text).toBeGreaterThanOrEqual(minPt);
+    for (const n of leaves(scene)) if (n.type !== 'text' && n.stroke) expect(n.stroke.widthMm).toBeGreaterThanOrEqual(MIN_STROKE_MM);
+  });
+
+  it('prints no NaN, Infinity or undefined, dates from the context, and the cautions', () => {
+    const all = texts(scene).map((t) => t.text).join('\n');
+    expect(all).not.toMatch(/NaN|Infinity|undefined|null/);
+    expect(all).toContain('Issued 2026-11-02');
+    expect(all).toContain('Data revision 2026-11 rev 3');
+    expect(texts(scene).filter((t) => t.role === 'caution').map((t) => t.text).join(' ')).toContain("maker's maximum rpm");
+  });
+
+  it('matches the SVG file snapshot', async () => {
+    await expect(renderSvg(scene)).toMatchFileSnapshot(`../output/${name(request)}.svg`);
+  });
+});
+
+describe('wall chart', () => {
+  const request = defaultWallCharts(project)[0] as Extract<SheetRequest, { kind: 'wallChart' }>;
+  const scene = sheetScene(request, ctx);
+
+  it('has one absorption series and one tolerance band per impeller', () => {
+    const curves = new Set(leaves(scene).filter((n) => n.role === 'absorption-curve').map((n) => n.key));
+    const bands = new Set(leaves(scene).filter((n) => n.role === 'tolerance-band').map((n) => n.key));
+    expect([...curves].sort()).toEqual(jet.impellers.map((i) => `impeller:${i.id}`));
+    expect(bands.size).toBe(jet.impellers.length);
+  });
+
+  it('draws every operating point within 0.1 mm of where the model and the printed axes put it', () => {
+    const x = scaleFromTicks(scene, 'x');
+    const y = scaleFromTicks(scene, 'left');
+    const points = leaves(scene).filter((n) => n.role === 'operating-point');
+    expect(points).toHaveLength(family.variants.length * jet.impellers.length);
+    for (const variant of family.variants) {
+      for (const impeller of jet.impellers) {
+        const p = solveInstallation(chartInstallation({ variant, jet, impeller, conditions: request.conditions }));
+        const node = points.find((n) => n.key === `impeller:${impeller.id}|engine:${variant.variantId}`)!;
+        const box = markBox(node)!;
+        expect(Math.abs(box.x + box.width / 2 - x(p.speedRpm))).toBeLessThan(0.1);
+        expect(Math.abs(box.y + box.height / 2 - y(kwToPower(p.powerKw, 'kW')))).toBeLessThan(0.1);
+      }
+    }
+  });
+
+  it('names the over-revving and lugging pairings in words', () => {
+    const table = texts(scene).filter((t) => t.role === 'table-cell').map((t) => t.text);
+    // In the invented data S250 with the lightest impeller reaches the 5400 rpm limiter.
+    expect(table).toContain('Too light: over-revs');
+    expect(table).toContain('Too heavy: lugs');
+  });
+});
+
+describe('boat sheets', () => {
+  it('marks the fitted WOT point where the model puts it on the spec sheet', () => {
+    const scene = sheetScene({ kind: 'specSheet', boatId: boat.id, paper: A4 }, ctx);
+    const p = solveInstallation(boatInstallation(boat));
+    const node = leaves(scene).find((n) => n.role === 'operating-point' && n.key === `impeller:${boat.impellerId}|engine:${boat.engineVariantId}`)!;
+    const box = markBox(node)!;
+    expect(Math.abs(box.x + box.width / 2 - scaleFromTicks(scene, 'x')(p.speedRpm))).toBeLessThan(0.1);
+    expect(Math.abs(box.y + box.height / 2 - scaleFromTicks(scene, 'left')(p.powerKw))).toBeLessThan(0.1);
+  });
+
+  it('refuses a spec sheet on an A6 card with a LayoutError instead of clipping', () => {
+    expect(() => sheetScene({ kind: 'specSheet', boatId: boat.id, paper: { size: 'A6', orientation: 'portrait', bleedMm: 0 } }, ctx)).toThrow(LayoutError);
+  });
+
+  it('puts crop marks outside the trim only when the sheet has bleed', () => {
+    const withBleed = sheetScene({ kind: 'consoleCard', boatId: boat.id, paper: { size: 'A6', orientation: 'portrait', bleedMm: 3 } }, ctx);
+    const without = sheetScene({ kind: 'consoleCard', boatId: boat.id, paper: { size: 'A6', orientation: 'portrait', bleedMm: 0 } }, ctx);
+    const marks = leaves(withBleed).filter((n) => n.role === 'crop-mark');
+    expect(marks).toHaveLength(4);
+    for (const m of marks) expect(boxesOverlap(markBox(m)!, withBleed.trimBox, -0.01)).toBe(false);
+    expect(leaves(without).filter((n) => n.role === 'crop-mark')).toHaveLength(0);
+  });
+
+  it('names sheets with stable slugs', () => {
+    expect(requests.map(sheetSlug)).toEqual([
+      'wall-chart-harbour-30-tern-200',
+      'wall-chart-harbour-30-tern-200',
+      'spec-gannet',
+      'spec-gannet',
+      'card-gannet',
+      'card-gannet',
+      'upgrade-gannet',
+    ]);
+  });
+});
