@@ -1,0 +1,190 @@
+/**
+ * Speed and fuel estimates of one boat, on the sea-trial-calibrated model when the boat has trials:
+ * the Crouch hull constant and where it came from, top speed of the fitted and every alternative impeller,
+ * speed and fuel for each cruise setting, and the engine-upgrade what-ifs with speed. All are estimates.
+ */
+import type { Boat, CruiseSetting } from '../data/types.ts';
+import {
+  absorbedPowerKw,
+  crouchConstantsFromTrials,
+  crouchSpeedKn,
+  fuelFlow,
+  fuelRange,
+  hullConstant,
+  impellerTopSpeeds,
+  installationAbsorber,
+  powerChangeForSpeedGain,
+  shaftPowerForSpeedKw,
+  speedAtAbsorbedPowerRpm,
+  upgradeWhatIf,
+  type Calibration,
+  type HullConstantSource,
+  type Installation,
+  type SpeedBasis,
+  type WhatIfPoint,
+} from '../model/index.ts';
+import { boatTrials, calibratedBoatInstallation } from './boatCalibration.ts';
+import { STATUS_WORDS } from './status.ts';
+
+export const SPEED_NOTE =
+  'Speeds are estimates from Crouch’s planing formula (power into the jet shaft, loaded displacement); they hold for planing speeds only and are best calibrated by a logged sea-trial speed.';
+export const FUEL_NOTE = 'Fuel figures are estimates: brake power × BSFC / fuel density, with typical figures where the engine data give none.';
+
+export interface HullResult {
+  readonly crouchConstant: number;
+  readonly source: HullConstantSource;
+  readonly trialDates: readonly string[];
+  readonly note: string;
+  readonly displacementKg: number;
+}
+
+export interface CruiseEstimate {
+  readonly label: string;
+  readonly kind: CruiseSetting['kind'];
+  readonly status: 'ok' | 'aboveWot';
+  readonly speedRpm: number;
+  readonly powerKw: number;
+  readonly speedKn: number;
+  readonly fuelLPerH: number;
+  readonly fuelUsGalPerH: number;
+  /** With a tank: hours and nautical miles keeping a third in reserve (rule of thirds). */
+  readonly hoursWithReserve?: number;
+  readonly rangeWithReserveNm?: number;
+}
+
+export interface TopSpeedRow {
+  readonly impellerId: string;
+  readonly label: string;
+  readonly fitted: 'yes' | 'no';
+  readonly wotRpm: number;
+  readonly powerKw: number;
+  readonly status: string;
+  readonly statusText: string;
+  readonly speedKn: number;
+}
+
+export interface UpgradeEstimate {
+  readonly changePct: number;
+  readonly wotRpm: number;
+  readonly powerKw: number;
+  readonly status: string;
+  readonly speedKn: number;
+  readonly speedGainPct: number;
+  /** The impeller of the jet that would best use the new power, when one is matched. */
+  readonly best?: { readonly impellerId: string; readonly wotRpm: number; readonly powerKw: number; readonly speedKn: number; readonly speedGainPct: number };
+}
+
+export interface SpeedGainRow {
+  readonly gainPct: number;
+  readonly fittedChangePct?: number;
+  readonly rematchedChangePct?: number;
+  readonly rematchedImpellerId?: string;
+}
+
+export interface BoatEstimates {
+  /** 'calibrated' when the figures rest on sea trials (trialDates), else 'nominal'. */
+  readonly basis: 'calibrated' | 'nominal';
+  readonly trialDates: readonly string[];
+  readonly hull: HullResult;
+  readonly wotSpeedKn: number;
+  readonly wotFuelLPerH: number;
+  readonly bsfcGPerKwh: number;
+  readonly bsfcSource: 'engine' | 'typical';
+  readonly fuelKgPerL: number;
+  readonly cruise: readonly CruiseEstimate[];
+  readonly topSpeeds: readonly TopSpeedRow[];
+  readonly upgrade: readonly UpgradeEstimate[];
+  readonly speedGains: readonly SpeedGainRow[];
+  readonly notes: readonly string[];
+}
+
+/** Speed gains tabulated on upgrade sheets, %. */
+export const SPEED_GAINS_PCT: readonly number[] = [5, 10, 15];
+
+function cruiseEstimate(boat: Boat, setting: CruiseSetting, inst: Installation, speed: SpeedBasis, wotRpm: number): CruiseEstimate {
+  const absorber = installationAbsorber(inst);
+  const eff = inst.driveLine.efficiency;
+  // Engine-side power for each kind of setting; the impeller's absorption law gives the rpm.
+  const powerKw =
+    setting.kind === 'power' ? setting.powerKw
+    : setting.kind === 'rpm' ? absorbedPowerKw(absorber, setting.speedRpm)
+    : shaftPowerForSpeedKw({ ...speed, speedKn: setting.speedKn }) / eff;
+  const speedRpm = setting.kind === 'rpm' ? setting.speedRpm : speedAtAbsorbedPowerRpm(absorber, powerKw);
+  const speedKn = setting.kind === 'speed' ? setting.speedKn : crouchSpeedKn({ ...speed, shaftPowerKw: powerKw * eff });
+  const fuel = fuelFlow({ powerKw, fuel: inst.engine.fuel, bsfcGPerKwh: inst.engine.bsfcGPerKwh });
+  const range = boat.fuelTankL === undefined ? undefined : fuelRange({ tankL: boat.fuelTankL, litresPerHour: fuel.litresPerHour, speedKn });
+  return {
+    label: setting.label,
+    kind: setting.kind,
+    status: speedRpm > wotRpm ? 'aboveWot' : 'ok',
+    speedRpm,
+    powerKw,
+    speedKn,
+    fuelLPerH: fuel.litresPerHour,
+    fuelUsGalPerH: fuel.usGalPerHour,
+    ...(range ? { hoursWithReserve: range.hoursWithReserve, rangeWithReserveNm: range.rangeWithReserveNm! } : {}),
+  };
+}
+
+function topSpeedRow(boat: Boat, p: WhatIfPoint): TopSpeedRow {
+  const impeller = boat.jet.impellers.find((i) => i.id === p.impellerId)!;
+  return {
+    impellerId: p.impellerId,
+    label: impeller.label,
+    fitted: p.impellerId === boat.impellerId ? 'yes' : 'no',
+    wotRpm: p.point.speedRpm,
+    powerKw: p.point.powerKw,
+    status: p.point.status,
+    statusText: STATUS_WORDS[p.point.status],
+    speedKn: p.speedKn,
+  };
+}
+
+/** Speed, fuel and upgrade estimates of one boat on its calibrated (or nominal) model. */
+export function boatEstimates(args: { boat: Boat; inst: Installation; calibration: Calibration }): BoatEstimates {
+  const { boat, calibration } = args;
+  const inst = calibratedBoatInstallation(args.inst, calibration);
+  const measured = crouchConstantsFromTrials({ inst: args.inst, calibration, trials: boatTrials(boat), displacementKg: boat.hull.displacementKg });
+  const hc = hullConstant({ hullType: boat.hull.type, statedConstant: boat.hull.crouchConstant, measured });
+  const speed: SpeedBasis = { crouchConstant: hc.value, displacementKg: boat.hull.displacementKg };
+  const topSpeeds = impellerTopSpeeds({ inst, impellers: boat.jet.impellers, speed }).map((p) => topSpeedRow(boat, p));
+  const fitted = topSpeeds.find((r) => r.fitted === 'yes')!;
+  const what = upgradeWhatIf({ inst, impellers: boat.jet.impellers, speed });
+  const gain = (v: number) => (v / what.base.speedKn - 1) * 100;
+  const upgrade = what.steps.map((s): UpgradeEstimate => ({
+    changePct: s.changePct,
+    wotRpm: s.fitted.point.speedRpm,
+    powerKw: s.fitted.point.powerKw,
+    status: s.fitted.point.status,
+    speedKn: s.fitted.speedKn,
+    speedGainPct: gain(s.fitted.speedKn),
+    ...(s.best
+      ? { best: { impellerId: s.best.impellerId, wotRpm: s.best.point.speedRpm, powerKw: s.best.point.powerKw, speedKn: s.best.speedKn, speedGainPct: gain(s.best.speedKn) } }
+      : {}),
+  }));
+  const speedGains = SPEED_GAINS_PCT.map((gainPct): SpeedGainRow => {
+    const need = powerChangeForSpeedGain({ inst, impellers: boat.jet.impellers, gainPct });
+    return {
+      gainPct,
+      ...(need.fittedChangePct !== null ? { fittedChangePct: need.fittedChangePct } : {}),
+      ...(need.rematchedChangePct !== null ? { rematchedChangePct: need.rematchedChangePct, rematchedImpellerId: need.rematchedImpellerId! } : {}),
+    };
+  });
+  const wotFuel = fuelFlow({ powerKw: fitted.powerKw, fuel: inst.engine.fuel, bsfcGPerKwh: inst.engine.bsfcGPerKwh });
+  const trialDates = calibration.residuals.filter((r) => r.usedInFit).map((r) => r.date);
+  return {
+    basis: calibration.mode === 'none' ? 'nominal' : 'calibrated',
+    trialDates,
+    hull: { crouchConstant: hc.value, source: hc.source, trialDates: hc.trialDates, note: hc.note, displacementKg: boat.hull.displacementKg },
+    wotSpeedKn: fitted.speedKn,
+    wotFuelLPerH: wotFuel.litresPerHour,
+    bsfcGPerKwh: wotFuel.bsfcGPerKwh,
+    bsfcSource: wotFuel.bsfcSource,
+    fuelKgPerL: wotFuel.fuelKgPerL,
+    cruise: boat.cruise.map((c) => cruiseEstimate(boat, c, inst, speed, fitted.wotRpm)),
+    topSpeeds,
+    upgrade,
+    speedGains,
+    notes: [SPEED_NOTE, FUEL_NOTE, hc.note],
+  };
+}

@@ -1,0 +1,92 @@
+import { describe, expect, it } from 'vitest';
+import { boatInstallation } from '../../src/analysis/boat.ts';
+import { boatCalibration, calibrationResult } from '../../src/analysis/boatCalibration.ts';
+import { boatEstimates } from '../../src/analysis/boatEstimates.ts';
+import type { Boat } from '../../src/data/types.ts';
+import { crouchSpeedKn, solveInstallation } from '../../src/model/index.ts';
+import { boat } from '../sheets/fixtures/demoProject.ts';
+
+/** The demo boat with trials made by the nominal model itself, its engine 6 % down, speeds from C = 170. */
+function boatWithTrials(): Boat {
+  const runs = ['b', 'd', 'c'].map((impellerId, i) => {
+    const inst = boatInstallation(boat, boat.jet.impellers.find((x) => x.id === impellerId));
+    const p = solveInstallation({ ...inst, engine: { ...inst.engine, conditionFactor: 0.94 } });
+    const speedKn = crouchSpeedKn({ crouchConstant: 170, displacementKg: boat.hull.displacementKg + 150, shaftPowerKw: p.powerKw * 0.97 });
+    return { date: `2026-04-0${i + 1}`, impellerId, wotRpm: p.speedRpm, speedKn, loadKg: 150, ambient: boat.site.ambient, water: boat.water };
+  });
+  return { ...boat, trials: runs, fuelTankL: 120 };
+}
+
+function estimatesOf(b: Boat) {
+  const inst = boatInstallation(b);
+  const calibration = boatCalibration(b, inst);
+  return { calibration, est: boatEstimates({ boat: b, inst, calibration }) };
+}
+
+describe('boatEstimates()', () => {
+  it('uses the typical hull constant and the nominal model for a boat without trials', () => {
+    const { est } = estimatesOf(boat);
+    expect(est.basis).toBe('nominal');
+    expect(est.hull).toMatchObject({ crouchConstant: 150, source: 'typical' });
+    expect(est.topSpeeds.map((r) => r.impellerId)).toEqual(['a', 'b', 'c', 'd', 'e']);
+    expect(est.topSpeeds.filter((r) => r.fitted === 'yes').map((r) => r.impellerId)).toEqual(['b']);
+  });
+
+  it('turns a speed setting into the power and rpm that give it, and back', () => {
+    const { est } = estimatesOf(boat);
+    const towing = est.cruise.find((c) => c.kind === 'speed')!;
+    expect(towing.speedKn).toBe(22);
+    expect(crouchSpeedKn({ crouchConstant: 150, displacementKg: 1250, shaftPowerKw: towing.powerKw * 0.97 })).toBeCloseTo(22, 9);
+    const economy = est.cruise.find((c) => c.kind === 'power')!;
+    // Typical petrol 350 g/kWh and 0.74 kg/L (common practice, no source): 50 kW → 23.65 L/h.
+    expect(economy.fuelLPerH).toBeCloseTo((50 * 0.35) / 0.74, 9);
+  });
+
+  it('calibrates the engine factor and the hull constant from logged trials and names their dates', () => {
+    const b = boatWithTrials();
+    const { calibration, est } = estimatesOf(b);
+    // Three impellers spanning more than 3 % in rpm: exponent and engine factor are both fitted.
+    expect(calibration.mode).toBe('exponentAndCondition');
+    expect(calibration.exponent).toBeCloseTo(3, 6);
+    expect(calibration.powerFactor).toBeCloseTo(0.94, 6);
+    expect(est.basis).toBe('calibrated');
+    expect(est.trialDates).toEqual(['2026-04-01', '2026-04-02', '2026-04-03']);
+    expect(est.hull.source).toBe('trial');
+    expect(est.hull.crouchConstant).toBeCloseTo(170, 6);
+    expect(est.cruise.every((c) => c.rangeWithReserveNm! > 0)).toBe(true);
+  });
+
+  it('gives upgrade rows with speed gains that grow with power, and a best impeller when one is matched', () => {
+    const { est } = estimatesOf(boat);
+    for (let i = 1; i < est.upgrade.length; i++) expect(est.upgrade[i].speedKn).toBeGreaterThanOrEqual(est.upgrade[i - 1].speedKn);
+    expect(est.upgrade.some((u) => u.best !== undefined)).toBe(true);
+    expect(est.speedGains.map((g) => g.gainPct)).toEqual([5, 10, 15]);
+  });
+
+  it('is plain JSON with finite numbers only', () => {
+    const b = boatWithTrials();
+    const { calibration, est } = estimatesOf(b);
+    for (const record of [est, calibrationResult(b, calibration)]) {
+      const text = JSON.stringify(record);
+      expect(JSON.parse(text)).toEqual(record);
+      expect(text).not.toMatch(/null|NaN|Infinity/);
+    }
+  });
+});
+
+describe('calibrationResult()', () => {
+  it('lists each trial with its effective rating, tolerance verdict and residual', () => {
+    const b = boatWithTrials();
+    const r = calibrationResult(b, boatCalibration(b, boatInstallation(b)));
+    expect(r.trials).toHaveLength(3);
+    // An engine 6 % down pulls rpm down as a heavier impeller would: read against the published engine,
+    // every rating comes out 1/0.94 − 1 = +6.38 % heavy, outside ±5 %.
+    for (const t of r.trials) {
+      expect(t.deviationPct).toBeCloseTo((1 / 0.94 - 1) * 100, 6);
+      expect(t.insideTolerance).toBe('no');
+      expect(Math.abs(t.residualRpm)).toBeLessThan(1e-6);
+    }
+    expect(r.exponentSource).toBe('fitted');
+    expect(r.trialDates).toEqual(['2026-04-01', '2026-04-02', '2026-04-03']);
+  });
+});
