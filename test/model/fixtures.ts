@@ -2,6 +2,7 @@
  * Invented test engines, impellers and random generators for the model tests (no real products).
  */
 import fc from 'fast-check';
+import { engineCurve } from '../../src/model/engineCurve.ts';
 import type { Installation } from '../../src/model/installation.ts';
 import type { Ambient, CurvePoint, EngineLimits, EngineSpec, ImpellerFamilySpec } from '../../src/model/types.ts';
 
@@ -69,12 +70,18 @@ export const arbTable: fc.Arbitrary<CurvePoint[]> = fc
 /** Random impeller and drive line whose absorption meets a random table near a chosen speed. */
 export const arbMatch = fc.record({
   points: arbTable,
-  at: fc.double({ min: 0, max: 1, noNaN: true }),
-  load: fc.double({ min: 0.3, max: 3, noNaN: true }),
+  at: fc.double({ min: 0.1, max: 1, noNaN: true }),
+  load: fc.oneof(
+    { weight: 2, arbitrary: fc.double({ min: 0.97, max: 1, noNaN: true }) },
+    { weight: 2, arbitrary: fc.double({ min: 0.5, max: 1.05, noNaN: true }) },
+    { weight: 1, arbitrary: fc.double({ min: 0.3, max: 3, noNaN: true }) },
+  ),
   exponent: fc.double({ min: 2, max: 4, noNaN: true }),
   ratio: fc.double({ min: 0.5, max: 2.5, noNaN: true }),
   efficiency: fc.double({ min: 0.6, max: 1, noNaN: true }),
   maxShare: fc.double({ min: 0.3, max: 1.3, noNaN: true }),
+  /** Aim exactly at a row, where a surplus just above zero can dip negative inside the next piece. */
+  snapToRow: fc.boolean(),
 });
 export type RandomMatch = typeof arbMatch extends fc.Arbitrary<infer T> ? T : never;
 
@@ -90,19 +97,49 @@ export function installationFrom(m: RandomMatch): Installation {
     windowHighRpm: first.speedRpm + 0.85 * (maxRpm - first.speedRpm),
     maxRpm,
   };
-  const i = Math.min(m.points.length - 1, Math.floor(m.at * m.points.length));
-  const p = m.points[i];
+  const engine = testEngine({ points: m.points, limits });
+  // Aim anywhere along the curve, between rows too, so crossings inside pieces are common.
+  const row = m.points[Math.min(m.points.length - 1, Math.floor(m.at * m.points.length))];
+  const aimRpm = m.snapToRow ? row.speedRpm : first.speedRpm + m.at * span;
+  const aimKw = Math.max(1, engineCurve(engine).powerKwUnchecked(aimRpm));
   const family: ImpellerFamilySpec = { ...FAMILY, exponent: m.exponent };
-  // Engine-side absorption = rating · ((n/ratio)/1000)^k / efficiency; solve for the rating at row i.
-  const ratingKw = Math.max(1e-3, (m.load * Math.max(p.powerKw, 1) * m.efficiency) / Math.pow(p.speedRpm / m.ratio / 1000, m.exponent));
+  // Engine-side absorption = rating · ((n/ratio)/1000)^k / efficiency; solve for the rating at the aim.
+  const ratingKw = Math.max(1e-3, (m.load * aimKw * m.efficiency) / Math.pow(aimRpm / m.ratio / 1000, m.exponent));
   return testInstallation({
-    engine: testEngine({ points: m.points, limits }),
+    engine,
     family,
     impeller: { id: 'rnd', label: 'Random', ratingKw },
     driveLine: { ratio: m.ratio, efficiency: m.efficiency },
     waterDensityKgM3: 1025,
   });
 }
+
+/**
+ * The hard case for a solver: every row up to a random row j shows a hair (ε) of surplus, the rows after
+ * j climb at least as fast as the impeller's n^k, yet between rows the surplus often dips below zero
+ * (the interpolant leaves row j slower than the absorption curve does).
+ */
+export const arbGrazing = fc
+  .record({
+    m: arbMatch,
+    rowShare: fc.double({ min: 0, max: 1, noNaN: true }),
+    eps: fc.double({ min: 1e-4, max: 0.05, noNaN: true }),
+    climb: fc.double({ min: 0, max: 0.3, noNaN: true }),
+  })
+  .map(({ m, rowShare, eps, climb }) => {
+    const k = m.exponent;
+    const j = Math.min(m.points.length - 2, Math.floor(rowShare * (m.points.length - 1)));
+    const pj = Math.max(m.points[j].powerKw, 1);
+    const points = m.points.map((p, i) =>
+      i <= j ? p : { ...p, powerKw: Math.max(p.powerKw, pj * (p.speedRpm / m.points[j].speedRpm) ** k * (1 + climb)) },
+    );
+    const inst = installationFrom({ ...m, points });
+    let c = Number.POSITIVE_INFINITY;
+    for (let i = 0; i <= j; i++) c = Math.min(c, Math.max(points[i].powerKw, 1e-3) / points[i].speedRpm ** k);
+    // Engine-side c = rating / (efficiency · (1000 · ratio)^k) at reference density.
+    const ratingKw = c * (1 - eps) * inst.driveLine.efficiency * (1000 * inst.driveLine.ratio) ** k;
+    return { ...inst, impeller: { ...inst.impeller, ratingKw } };
+  });
 
 /** fast-check settings: seeded so failures reproduce. */
 export const PROPERTY_RUNS = { seed: 20240611, numRuns: 300 } as const;
