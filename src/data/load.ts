@@ -76,8 +76,19 @@ async function readSource(path: string): Promise<SourceFile | null> {
   }
 }
 
-/** Pure core of the loader: the same answer for the same files, in any order. */
+/** Pure core of the loader: the same answer for the same files, in any order. Never throws. */
 export function loadProjectFromFiles(files: readonly SourceFile[], opts: { dataDir?: string } = {}): LoadResult {
+  try {
+    return loadFiles(files, opts);
+  } catch (err) {
+    // A bug of ours must still reach the technician as one located sentence, not a stack trace.
+    const reason = err instanceof Error ? err.message : String(err);
+    const place = { file: opts.dataDir ?? files[0]?.path ?? '.', line: 1, column: 1 };
+    return { ok: false, errors: [dataError(place, { field: '', expected: 'could not be loaded because of an internal error', found: reason.split('\n')[0], fix: 'please report this with the file attached' })], warnings: [] };
+  }
+}
+
+function loadFiles(files: readonly SourceFile[], opts: { dataDir?: string }): LoadResult {
   const errors: DataError[] = [];
   const warnings: DataError[] = [];
   const checked: Checked[] = [];

@@ -63,6 +63,16 @@ describe('loadProjectFromFiles() stays robust on hostile input', () => {
     if (!noSite.ok) expect(noSite.errors.map((e) => e.message)).toContain('data/site.yaml:1:1 the file must exist (shop name, contact line, data revision, issue date), found no such file — create it; see docs/data-format.md');
   });
 
+  it('turns an unexpected failure into one located sentence instead of a stack trace', () => {
+    const exploding = { path: JET, get text(): string { throw new Error('disk vanished'); } };
+    const result = loadProjectFromFiles([exploding], { dataDir: 'data' });
+    expect(result).toEqual({
+      ok: false,
+      errors: [expect.objectContaining({ message: 'data:1:1 the file could not be loaded because of an internal error, found disk vanished — please report this with the file attached' })],
+      warnings: [],
+    });
+  });
+
   it('never throws and always answers with sorted, located errors, whatever the text (seeded fuzz)', () => {
     // Fragments of our format glued at random: reaches the parser, the schema and the cross-file checks.
     const fragment = fc.constantFrom('id: tarnwell-212\n', 'impellers:\n', '  - id: k1\n', '    rating_kw: ', '-1', '.nan', '"2"', '[', ']', '{', '}', '&a ', '*a', ': ', '\n', '  ', '\t', '#', '---\n', 'exponent: 9\n', '\u0000', '\uFEFF', 'label: x\n', 'maker: y\n');
