@@ -60,9 +60,11 @@ export function table(args: {
   let widths = columnWidths(args.columns, args.rows, sizePt, args.header ?? true);
   let total = widths.reduce((a, b) => a + b, 0);
   if (total > args.maxWidthMm) {
-    // Width is proportional to size, so one step lands on the size that fits (rounded down to 0.1 pt).
-    sizePt = Math.floor(((sizePt * args.maxWidthMm) / total) * 10) / 10;
-    if (sizePt < args.minSizePt) {
+    // Text width is proportional to size and padding is fixed, so one step lands on the size that fits
+    // (rounded down to 0.1 pt).
+    const padTotal = 2 * PAD_MM * widths.length;
+    sizePt = Math.floor(((sizePt * (args.maxWidthMm - padTotal)) / (total - padTotal)) * 10) / 10;
+    if (!(sizePt >= args.minSizePt)) {
       throw new LayoutError(args.where, `the table needs ${total.toFixed(0)} mm at ${args.sizePt} pt but has ${args.maxWidthMm.toFixed(0)} mm, and would need type under ${args.minSizePt} pt; use wider paper or fewer columns`);
     }
     widths = columnWidths(args.columns, args.rows, sizePt, args.header ?? true);
