@@ -18,15 +18,15 @@ import { LayoutError } from './kit/errors.ts';
 
 type BoatRequest = Extract<SheetRequest, { kind: 'consoleCard' }>;
 
-/** Cards are trimmed cleanly and held in the hand: 6 mm keeps text clear of the cut (common practice, no source). */
-const CARD_MARGIN_MM = 6;
+/** Cards are trimmed cleanly and held in the hand: 5 mm keeps text clear of the cut (common practice, no source). */
+const CARD_MARGIN_MM = 5;
 
 /** What to look at, in order of how often it is the cause (common practice, no source). */
 export const OFF_RANGE_CHECKS: readonly string[] = [
-  'Intake grate fouled or blocked (weed, bags, debris).',
-  'More load aboard than usual (people, fuel, water, gear).',
-  'Impeller damaged or worn, or wear ring clearance grown.',
-  'Engine fault: have it checked before running hard again.',
+  'Intake grate fouled or blocked.',
+  'More load aboard than usual.',
+  'Impeller damaged or worn.',
+  'Engine fault: have it checked.',
 ];
 
 /** Builds the console-card scene. */
@@ -41,7 +41,7 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
   const b = result.wot;
   const rangeText = rpmBandText(b.low.speedRpm, b.high.speedRpm);
   const cruiseRows = result.cruise.filter((c) => c.speedRpm !== undefined && c.status === 'ok').map((c) => [c.label, { text: `${rpmText(c.speedRpm as number)} rpm`, weight: 'bold' as const }]);
-  const parts: Part[] = [
+  const figures: Part[] = [
     ({ x, y, widthMm }): Block => {
       const head = label({ x, y: y + ascentMm(type.heading, 'bold'), text: 'Expected WOT rpm', sizePt: type.heading, weight: 'bold', role: 'heading', where });
       // The big figure shrinks only as far as it must to fit the card; below the heading size is an error.
@@ -59,6 +59,8 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
     ...(cruiseRows.length > 0
       ? [({ x, y, widthMm }: { x: number; y: number; widthMm: number }): Block => table({ x, y, maxWidthMm: widthMm, columns: [{ header: 'Cruise', align: 'left' }, { header: 'Engine', align: 'right' }], rows: cruiseRows, sizePt: type.body + 1, minSizePt: type.min, fullWidth: true, role: 'cruise-table', where })]
       : []),
+  ];
+  const advice: Part[] = [
     ({ x, y, widthMm }): Block => {
       const head = paragraph({ x, y, widthMm, text: 'WOT rpm outside the range? Check:', sizePt: type.body, weight: 'bold', role: 'heading', where });
       let cursor = y + head.heightMm;
@@ -72,8 +74,16 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
     },
     ({ x, y, widthMm }) => cautionsBlock({ site, x, y, widthMm, sizePt: type.small, headingPt: type.body, where }),
   ];
-  const laid = stack({ x: box.x, y: box.y, widthMm: box.width, gapMm: 2.5, parts });
-  assertFits(box, laid.bottomMm, where);
+  // Landscape cards read as two columns (figures | advice); portrait cards as one.
+  const gapMm = 2.5;
+  const columns = box.width > box.height
+    ? [
+        stack({ x: box.x, y: box.y, widthMm: (box.width - 5) / 2, gapMm, parts: figures }),
+        stack({ x: box.x + (box.width + 5) / 2, y: box.y, widthMm: (box.width - 5) / 2, gapMm, parts: advice }),
+      ]
+    : [stack({ x: box.x, y: box.y, widthMm: box.width, gapMm, parts: [...figures, ...advice] })];
+  for (const c of columns) assertFits(box, c.bottomMm, where);
+  const laid = { nodes: columns.flatMap((c) => c.nodes) };
   return assembleScene({
     frame,
     content: laid.nodes,

@@ -78,13 +78,11 @@ describe('analyseBoat()', () => {
     expect(result.alternatives.filter((a) => a.fitted === 'yes').map((a) => a.impellerId)).toEqual([boat.impellerId]);
   });
 
-  it('turns cruise settings into rpm and power, leaving speed settings for the speed model', () => {
-    const [economy, fast, towing] = result.cruise;
+  it('turns power and rpm cruise settings into rpm and power through the affinity law', () => {
+    const [economy, fast] = result.cruise;
     // 50 kW with impeller B (1.15 kW at 1000 rpm, η 0.97): n = 1000·(50·0.97/1.15)^(1/3) ≈ 3480.6 rpm (hand calculation).
     expect(economy.speedRpm).toBeCloseTo(1000 * ((50 * 0.97) / 1.15) ** (1 / 3), 6);
     expect(fast.powerKw).toBeCloseTo((1.15 * 4 ** 3) / 0.97, 9);
-    expect(towing.status).toBe('needsSpeedModel');
-    expect(towing.speedRpm).toBeUndefined();
   });
 
   it('moves WOT rpm by the square root of the power ratio for a constant-torque engine (cube law)', () => {
