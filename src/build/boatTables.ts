@@ -1,7 +1,8 @@
 /** The numbers of one boat as real HTML tables: WOT band, alternative impellers, cruise, upgrades. */
 import type { BoatResult } from '../analysis/boat.ts';
 import type { PowerUnit } from '../data/types.ts';
-import { percentText, powerText, rpmText } from '../sheets/kit/format.ts';
+import { percentText, rpmText } from '../sheets/kit/format.ts';
+import { powerCell, ratingCell } from './cells.ts';
 import type { TableView } from './siteView.ts';
 
 const CRUISE_STATUS: Readonly<Record<BoatResult['cruise'][number]['status'], string>> = {
@@ -9,10 +10,6 @@ const CRUISE_STATUS: Readonly<Record<BoatResult['cruise'][number]['status'], str
   aboveWot: 'Above WOT: not reachable',
   needsSpeedModel: 'Needs a speed estimate',
 };
-
-function bare(powerKw: number, unit: PowerUnit): string {
-  return powerText(powerKw, unit).replace(` ${unit}`, '');
-}
 
 /** The tables of a boat page. */
 export function boatTables(r: BoatResult, unit: PowerUnit): TableView[] {
@@ -22,7 +19,7 @@ export function boatTables(r: BoatResult, unit: PowerUnit): TableView[] {
     numeric: [1, 2, 3, 4],
     rows: r.alternatives.map((a) => [
       a.fitted === 'yes' ? `${a.label} (fitted)` : a.label,
-      bare(a.ratingKw, unit),
+      ratingCell(a.ratingKw, unit),
       rpmText(a.band.nominal.speedRpm),
       rpmText(a.band.low.speedRpm),
       rpmText(a.band.high.speedRpm),
@@ -37,7 +34,7 @@ export function boatTables(r: BoatResult, unit: PowerUnit): TableView[] {
     rows: r.cruise.map((c) => [
       c.label,
       c.speedRpm === undefined ? '–' : rpmText(c.speedRpm),
-      c.powerKw === undefined ? '–' : bare(c.powerKw, unit),
+      c.powerKw === undefined ? '–' : powerCell(c.powerKw, unit),
       CRUISE_STATUS[c.status],
     ]),
   };
@@ -45,7 +42,7 @@ export function boatTables(r: BoatResult, unit: PowerUnit): TableView[] {
     caption: 'WOT speed after an engine power change, same impeller',
     head: ['Power change', 'WOT rpm', `Power (${unit})`, 'Status'],
     numeric: [1, 2],
-    rows: r.upgrade.map((u) => [percentText(u.changePct), rpmText(u.wot.speedRpm), bare(u.wot.powerKw, unit), u.wot.statusText]),
+    rows: r.upgrade.map((u) => [percentText(u.changePct), rpmText(u.wot.speedRpm), powerCell(u.wot.powerKw, unit), u.wot.statusText]),
     note: 'An engine upgrade moves WOT speed by only about a third of the power change (cube law).',
   };
   return r.cruise.length > 0 ? [alternatives, cruise, upgrade] : [alternatives, upgrade];

@@ -8,6 +8,7 @@ import type { DataError } from '../data/types.ts';
 import { checkOutputFolder, createStaging, discardStaging, swapIn } from './atomicDir.ts';
 import { buildDateIso } from './dateIso.ts';
 import type { BuildCache } from './renderCache.ts';
+import { createRenderPool } from './renderPool.ts';
 import { writePages } from './runEleventy.ts';
 import { writeSiteFiles, type SiteCounts } from './siteFiles.ts';
 
@@ -40,12 +41,14 @@ export async function buildSite(opts: BuildOptions): Promise<BuildOutcome> {
   if (!loaded.ok) return { ok: false, errorsText: formatDataErrors(loaded.errors, 'problem'), warningsText };
   const dateIso = buildDateIso({ sourceDateEpoch: opts.sourceDateEpoch, issueDate: loaded.project.site.issueDate });
   const staging = createStaging(opts.outDir);
+  const renderer = createRenderPool();
   try {
     const { site, counts } = await writeSiteFiles({
       project: loaded.project,
       dateIso,
       dir: staging,
       cache: opts.cache,
+      renderer,
       onProgress: opts.onProgress,
     });
     const pages = await writePages({ site, outDir: staging });
@@ -54,5 +57,7 @@ export async function buildSite(opts: BuildOptions): Promise<BuildOutcome> {
   } catch (error) {
     discardStaging(staging);
     throw error;
+  } finally {
+    await renderer.close();
   }
 }

@@ -6,6 +6,7 @@
 import { loadProject } from '../data/load.ts';
 import { formatDataErrors } from './buildSite.ts';
 import { buildDateIso } from './dateIso.ts';
+import { SheetDrawError } from './errors.ts';
 import { createBuildCache } from './renderCache.ts';
 import { writeSiteFiles } from './siteFiles.ts';
 import type { SiteData } from './siteView.ts';
@@ -32,7 +33,12 @@ export function liveSiteData(opts: LiveSiteOptions): () => Promise<SiteData> {
       throw new InvalidDataError('the data has problems; fix them and save again');
     }
     const dateIso = buildDateIso({ sourceDateEpoch: process.env.SOURCE_DATE_EPOCH, issueDate: loaded.project.site.issueDate });
-    const { site, counts } = await writeSiteFiles({ project: loaded.project, dateIso, dir: opts.outDir, cache });
+    const written = await writeSiteFiles({ project: loaded.project, dateIso, dir: opts.outDir, cache }).catch((error: unknown) => {
+      if (!(error instanceof SheetDrawError)) throw error;
+      report(`${error.message}\n`);
+      throw new InvalidDataError('a sheet cannot be drawn; fix the data and save again');
+    });
+    const { site, counts } = written;
     report(`rebuilt ${counts.sheets} sheets in ${((performance.now() - startMs) / 1000).toFixed(1)} s\n`);
     return site;
   };

@@ -2,16 +2,14 @@
 import { rasteriseSvg, renderPdf, renderSvg } from '../render/index.ts';
 import type { Scene } from '../scene/types.ts';
 import { sceneHash, type BuildCache, type RenderedSheet } from './renderCache.ts';
+import type { SheetRenderer } from './renderPool.ts';
 
 /** Resolution of the PNG downloads, dots per inch. */
 export const PNG_DPI = 150;
 const MM_PER_IN = 25.4;
 
-/** Renders the scene to SVG, PDF and PNG, or takes them from the cache when the scene is unchanged. */
-export async function renderSheetFiles(scene: Scene, opts: { cache?: BuildCache }): Promise<RenderedSheet> {
-  const key = opts.cache ? sceneHash(scene) : '';
-  const cached = opts.cache?.rendered.get(key);
-  if (cached) return cached;
+/** Renders the scene to SVG, PDF and PNG in this thread. */
+export async function renderSheetNow(scene: Scene): Promise<RenderedSheet> {
   const svg = renderSvg(scene);
   const pdf = await renderPdf([scene], {
     title: scene.title,
@@ -21,7 +19,18 @@ export async function renderSheetFiles(scene: Scene, opts: { cache?: BuildCache 
   });
   // Rasterise the SVG we already have rather than rendering the scene twice.
   const png = rasteriseSvg(svg, { widthPx: Math.round((scene.widthMm / MM_PER_IN) * PNG_DPI) });
-  const rendered = { svg, pdf, png };
+  return { svg, pdf, png };
+}
+
+/** Renders through the renderer (a worker pool) or in this thread, or takes the files from the cache. */
+export async function renderSheetFiles(
+  scene: Scene,
+  opts: { cache?: BuildCache; renderer?: SheetRenderer },
+): Promise<RenderedSheet> {
+  const key = opts.cache ? sceneHash(scene) : '';
+  const cached = opts.cache?.rendered.get(key);
+  if (cached) return cached;
+  const rendered = opts.renderer ? await opts.renderer.render(scene) : await renderSheetNow(scene);
   opts.cache?.rendered.set(key, rendered);
   return rendered;
 }

@@ -5,18 +5,18 @@
  */
 import { join } from 'node:path';
 import { analyseBoat, analyseWallChart } from '../analysis/index.ts';
-import type { Project, SheetRequest } from '../data/types.ts';
+import type { Project } from '../data/types.ts';
 import { renderPdf } from '../render/index.ts';
+import { FONT_FILES } from '../scene/fonts.ts';
 import type { Scene } from '../scene/types.ts';
-import { sheetScene } from '../sheets/index.ts';
 import { PACKAGE_ROOT } from './eleventySetup.ts';
-import { inlineSvg } from './inlineSvg.ts';
 import { outputFiles } from './outputFiles.ts';
 import { planSheets } from './planSheets.ts';
 import type { BuildCache } from './renderCache.ts';
-import { renderSheetFiles } from './sheetFiles.ts';
+import type { SheetRenderer } from './renderPool.ts';
+import { drawSheets } from './drawSheets.ts';
 import { siteView } from './siteViewBuild.ts';
-import { SiteData, type SheetView } from './siteView.ts';
+import { SiteData } from './siteView.ts';
 import { stableJson } from './stableJson.ts';
 
 export interface SiteCounts {
@@ -34,26 +34,9 @@ export interface SiteFilesArgs {
   /** Output folder (the staging folder of an atomic build). */
   readonly dir: string;
   readonly cache?: BuildCache;
+  /** Renders sheets off the main thread; without one, sheets render here. */
+  readonly renderer?: SheetRenderer;
   readonly onProgress?: (done: number, total: number) => void;
-}
-
-/** Page-size name for CSS @page rules, from the media size in tenths of a millimetre. */
-function printPageName(scene: Scene): string {
-  return `p${Math.round(scene.widthMm * 10)}x${Math.round(scene.heightMm * 10)}`;
-}
-
-function sheetView(slug: string, request: SheetRequest, scene: Scene, svg: string): SheetView {
-  return {
-    slug,
-    kind: request.kind,
-    title: scene.title,
-    description: scene.description,
-    svgInline: inlineSvg(svg, slug),
-    printPage: printPageName(scene),
-    widthMm: scene.widthMm,
-    heightMm: scene.heightMm,
-    downloads: { svg: `sheets/${slug}.svg`, png: `sheets/${slug}.png`, pdf: `sheets/${slug}.pdf` },
-  };
 }
 
 /** Writes every sheet, book, results file and schema; returns the data the pages are made from. */
@@ -62,18 +45,9 @@ export async function writeSiteFiles(args: SiteFilesArgs): Promise<{ site: SiteD
   const files = outputFiles(args.dir);
   const plan = planSheets(project);
   const inBooks = new Set([...plan.byBook.values()].flat());
-  const bookScenes = new Map<string, Scene>();
-  const sheets = new Map<string, SheetView>();
-  for (const [index, { slug, request }] of plan.sheets.entries()) {
-    const scene = sheetScene(request, { project, dateIso });
-    const rendered = await renderSheetFiles(scene, { cache: args.cache });
-    files.write(`sheets/${slug}.svg`, rendered.svg);
-    files.write(`sheets/${slug}.pdf`, rendered.pdf);
-    files.write(`sheets/${slug}.png`, rendered.png);
-    sheets.set(slug, sheetView(slug, request, scene, rendered.svg));
-    if (inBooks.has(slug)) bookScenes.set(slug, scene);
-    args.onProgress?.(index + 1, plan.sheets.length);
-  }
+  const drawn = await drawSheets({ project, dateIso, plan, files, keep: inBooks, cache: args.cache, renderer: args.renderer, onProgress: args.onProgress });
+  const sheets = drawn.views;
+  const bookScenes = drawn.scenes;
 
   for (const book of project.books) {
     const scenes = (plan.byBook.get(book.id) ?? []).map((slug) => bookScenes.get(slug) as Scene);
@@ -90,13 +64,16 @@ export async function writeSiteFiles(args: SiteFilesArgs): Promise<{ site: SiteD
 
   const boatResults = new Map(project.boats.map((boat) => [boat.id, analyseBoat({ boat, project })]));
   for (const [id, result] of boatResults) files.write(`results/boats/${id}.json`, stableJson(result));
-  const wallCharts = plan.sheets.map((p) => p.request).filter((r) => r.kind === 'wallChart');
+  // A family's results are those of the wall charts on its page, in the same order.
+  const requests = new Map(plan.sheets.map((p) => [p.slug, p.request]));
   const familyResults = new Map(
     project.engines.map((family) => [
       family.id,
-      wallCharts
-        .filter((r) => r.engineFamilyId === family.id)
-        .map((r) => analyseWallChart({ family, jet: project.jets.find((j) => j.id === r.jetId)!, conditions: r.conditions })),
+      (plan.byFamily.get(family.id) ?? []).flatMap((slug) => {
+        const r = requests.get(slug);
+        const jet = project.jets.find((j) => r?.kind === 'wallChart' && j.id === r.jetId);
+        return r?.kind === 'wallChart' && jet ? [analyseWallChart({ family, jet, conditions: r.conditions })] : [];
+      }),
     ]),
   );
   for (const [id, charts] of familyResults) {
@@ -104,9 +81,12 @@ export async function writeSiteFiles(args: SiteFilesArgs): Promise<{ site: SiteD
   }
 
   const schemas = files.copyDir(join(PACKAGE_ROOT, 'schema'), 'schema', '.schema.json');
-  files.copyFile(join(PACKAGE_ROOT, 'docs', 'results.md'), 'docs/results.md');
+  const hasResultsDoc = files.copyFile(join(PACKAGE_ROOT, 'docs', 'results.md'), 'docs/results.md');
+  // The sheets' own font, so inline SVG and the pages look as the PDFs do on any machine.
+  files.copyFile(FONT_FILES.regular, 'assets/fonts/SourceSans3-Regular.ttf');
+  files.copyFile(FONT_FILES.bold, 'assets/fonts/SourceSans3-Bold.ttf');
 
-  const view = siteView({ project, dateIso, plan, sheets, boatResults, familyResults, schemas });
+  const view = siteView({ project, dateIso, plan, sheets, boatResults, familyResults, schemas, hasResultsDoc });
   const counts = {
     sheets: plan.sheets.length,
     books: project.books.length,

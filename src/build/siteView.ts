@@ -95,8 +95,8 @@ export interface SiteView {
   readonly boats: readonly BoatView[];
   readonly books: readonly BookView[];
   readonly schemas: readonly LinkView[];
-  /** Where the results JSON shape is documented (docs/results.md, copied into the site). */
-  readonly resultsDocHref: string;
+  /** Where the results JSON shape is documented (docs/results.md copied into the site), if present. */
+  readonly resultsDocHref?: string;
 }
 
 /**

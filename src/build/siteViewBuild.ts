@@ -5,6 +5,7 @@ import type { Boat, EngineFamily, JetUnit, Project } from '../data/types.ts';
 import { cautionsFor } from '../sheets/kit/cautions.ts';
 import { powerText, rpmRangeText, rpmWithUnit } from '../sheets/kit/format.ts';
 import { boatTables } from './boatTables.ts';
+import { ratingCell } from './cells.ts';
 import type { SheetPlan } from './planSheets.ts';
 import type { BoatView, FamilyView, JetView, SheetView, SiteView } from './siteView.ts';
 import { wallChartTables } from './wallChartTables.ts';
@@ -18,6 +19,8 @@ export interface SiteViewArgs {
   readonly familyResults: ReadonlyMap<string, readonly WallChartResult[]>;
   /** File names of the JSON Schemas copied to schema/. */
   readonly schemas: readonly string[];
+  /** Whether docs/results.md was copied into the site. */
+  readonly hasResultsDoc: boolean;
 }
 
 function pick(sheets: ReadonlyMap<string, SheetView>, slugs: readonly string[] | undefined): SheetView[] {
@@ -92,9 +95,9 @@ function jetView(jet: JetUnit, project: Project): JetView {
       numeric: [1, 2, 3],
       rows: jet.impellers.map((i) => [
         i.label,
-        powerText(i.ratingKw, unit),
-        powerText(i.ratingKw * (1 - tol), unit),
-        powerText(i.ratingKw * (1 + tol), unit),
+        ratingCell(i.ratingKw, unit),
+        ratingCell(i.ratingKw * (1 - tol), unit),
+        ratingCell(i.ratingKw * (1 + tol), unit),
       ]),
     },
   };
@@ -121,6 +124,6 @@ export function siteView(args: SiteViewArgs): SiteView {
       sheets: pick(args.sheets, args.plan.byBook.get(book.id)),
     })),
     schemas: args.schemas.map((name) => ({ label: name, href: `schema/${name}` })),
-    resultsDocHref: 'docs/results.md',
+    resultsDocHref: args.hasResultsDoc ? 'docs/results.md' : undefined,
   };
 }

@@ -2,6 +2,7 @@
 import type { WallChartResult } from '../analysis/wallChart.ts';
 import type { PowerUnit } from '../data/types.ts';
 import { powerText, rpmText } from '../sheets/kit/format.ts';
+import { powerCell, ratingCell } from './cells.ts';
 import type { TableView } from './siteView.ts';
 
 /** Predicted WOT operating points (nominal and tolerance band) and cruise crossings of one wall chart. */
@@ -15,11 +16,11 @@ export function wallChartTables(r: WallChartResult, unit: PowerUnit): TableView[
     rows: r.pairings.map((p) => [
       impeller.get(p.impellerId)?.label ?? p.impellerId,
       variantLabel.get(p.variantId) ?? p.variantId,
-      powerText(impeller.get(p.impellerId)?.ratingKw ?? Number.NaN, unit).replace(` ${unit}`, ''),
+      ratingCell(impeller.get(p.impellerId)?.ratingKw ?? Number.NaN, unit),
       rpmText(p.band.nominal.speedRpm),
       rpmText(p.band.low.speedRpm),
       rpmText(p.band.high.speedRpm),
-      powerText(p.band.nominal.powerKw, unit).replace(` ${unit}`, ''),
+      powerCell(p.band.nominal.powerKw, unit),
       p.band.verdict,
     ]),
     note:

@@ -40,6 +40,10 @@ export function reportFailure(error: unknown, io: CliIo): number {
     io.err(`matchbook: ${error.message}\n${error instanceof UsageError ? 'Run "matchbook --help" for usage.\n' : ''}`);
     return EXIT_MISUSE;
   }
+  if (error instanceof Error && error.name === 'SheetDrawError') {
+    io.err(`matchbook: ${error.message}\nmatchbook: nothing written; the output folder is unchanged.\n`);
+    return EXIT_INVALID_DATA;
+  }
   const message = error instanceof Error ? error.message : String(error);
   io.err(
     `matchbook: the build stopped unexpectedly: ${message.split('\n')[0]}\n` +

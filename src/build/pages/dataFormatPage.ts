@@ -23,7 +23,7 @@ site conditions, cruise settings and sea-trial records.</li>
 ${site.schemas.length === 0
     ? html`<p>No schemas were found.</p>`
     : html`<ul class="links">${site.schemas.map((s) => html`<li><a href="${root}${s.href}">${s.label}</a></li>`)}</ul>`}
-<p>Check a folder without building: <code>npx matchbook check --data DIR</code>.
-The results downloads are described in <a href="${root}${site.resultsDocHref}">results.md</a>.</p>`;
+<p>Check a folder without building: <code>npx matchbook check --data DIR</code>.</p>
+${site.resultsDocHref ? html`<p>The results downloads are described in <a href="${root}${site.resultsDocHref}">results.md</a>.</p>` : ''}`;
   return pageLayout({ site, title: 'Data format', root, body });
 }

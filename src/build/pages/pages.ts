@@ -8,6 +8,11 @@ function section(id: string, title: string, body: SafeHtml): SafeHtml {
   return html`<section id="${id}" aria-labelledby="${id}-title"><h2 id="${id}-title">${title}</h2>${body}</section>`;
 }
 
+function resultsLink(site: SiteView, href: string, root: string): SafeHtml {
+  const doc = site.resultsDocHref ? html` (fields described in <a href="${root}${site.resultsDocHref}">results.md</a>)` : '';
+  return html`<p><a href="${root}${href}" download>Results as JSON</a>${doc}.</p>`;
+}
+
 function none(list: readonly unknown[], text: string): SafeHtml | null {
   return list.length === 0 ? html`<p>${text}</p>` : null;
 }
@@ -19,7 +24,7 @@ export function indexPage(site: SiteView): string {
 <p class="lede">Predicted wide-open-throttle (WOT) operating points of waterjet impellers on marine engines,
 as wall charts for the shop, spec sheets for dealers and console cards for owners.</p>
 ${section('families', 'Engine families', html`${none(site.families, 'No engine families defined.')}${linkList(
-    site.families.map((f) => ({ label: `${f.label} (${f.maker})`, href: f.href })),
+    site.families.map((f) => ({ label: `${f.label}, ${f.maker}`, href: f.href })),
     root,
   )}`)}
 ${section('jets', 'Jet units', html`${none(site.jets, 'No jet units defined.')}${site.jets.map(
@@ -44,8 +49,7 @@ export function familyPage(site: SiteView, family: FamilyView): string {
 ${facts(family.facts)}${family.notes ? html`<p>${family.notes}</p>` : ''}
 ${section('charts', 'Wall charts', html`${none(family.charts, 'No wall charts for this family.')}${family.charts.map((s) => sheetFigure(s, root))}`)}
 ${section('results', 'Predicted operating points', html`${family.tables.map(table)}
-<p><a href="${root}${family.resultsHref}" download>Results as JSON</a> (shape described in
-<a href="${root}${site.resultsDocHref}">results.md</a>).</p>`)}
+${resultsLink(site, family.resultsHref, root)}`)}
 ${section('boats', 'Boats with this engine family', html`${none(family.boats, 'No boats use this family.')}${linkList(family.boats, root)}`)}`;
   return pageLayout({ site, title: family.label, root, body, sheets: family.charts });
 }
@@ -57,8 +61,7 @@ export function boatPage(site: SiteView, boat: BoatView): string {
 ${facts(boat.facts)}${boat.notes ? html`<p>${boat.notes}</p>` : ''}
 ${linkList(boat.links, root)}
 ${section('results', 'Predictions', html`${boat.tables.map(table)}
-<p><a href="${root}${boat.resultsHref}" download>Results as JSON</a> (shape described in
-<a href="${root}${site.resultsDocHref}">results.md</a>).</p>`)}
+${resultsLink(site, boat.resultsHref, root)}`)}
 ${section('sheets', 'Sheets', html`${boat.sheets.map((s) => sheetFigure(s, root))}`)}`;
   return pageLayout({ site, title: boat.name, root, body, sheets: boat.sheets });
 }

@@ -1,0 +1,80 @@
+/**
+ * Draws every planned sheet: the scene here, the three files through the renderer (worker pool), with
+ * a bounded number of sheets in flight so a thousand-boat build never holds a thousand scenes. Files
+ * are written as each sheet finishes; the order of finishing does not change any file.
+ */
+import type { Project, SheetRequest } from '../data/types.ts';
+import type { Scene } from '../scene/types.ts';
+import { sheetScene } from '../sheets/index.ts';
+import { drawingSheet } from './errors.ts';
+import { inlineSvg } from './inlineSvg.ts';
+import type { OutputFiles } from './outputFiles.ts';
+import type { SheetPlan } from './planSheets.ts';
+import type { BuildCache } from './renderCache.ts';
+import type { SheetRenderer } from './renderPool.ts';
+import { renderSheetFiles } from './sheetFiles.ts';
+import type { SheetView } from './siteView.ts';
+
+export interface DrawArgs {
+  readonly project: Project;
+  readonly dateIso: string;
+  readonly plan: SheetPlan;
+  readonly files: OutputFiles;
+  /** Slugs whose scenes are kept for the book PDFs. */
+  readonly keep: ReadonlySet<string>;
+  readonly cache?: BuildCache;
+  readonly renderer?: SheetRenderer;
+  readonly onProgress?: (done: number, total: number) => void;
+}
+
+/** Page-size name for CSS @page rules, from the media size in tenths of a millimetre. */
+function printPageName(scene: Scene): string {
+  return `p${Math.round(scene.widthMm * 10)}x${Math.round(scene.heightMm * 10)}`;
+}
+
+function sheetView(slug: string, request: SheetRequest, scene: Scene, svg: string): SheetView {
+  return {
+    slug,
+    kind: request.kind,
+    title: scene.title,
+    description: scene.description,
+    svgInline: inlineSvg(svg, slug),
+    printPage: printPageName(scene),
+    widthMm: scene.widthMm,
+    heightMm: scene.heightMm,
+    downloads: { svg: `sheets/${slug}.svg`, png: `sheets/${slug}.png`, pdf: `sheets/${slug}.pdf` },
+  };
+}
+
+/** Draws and writes every sheet; returns each sheet's view and the scenes the books need. */
+export async function drawSheets(args: DrawArgs): Promise<{ views: Map<string, SheetView>; scenes: Map<string, Scene> }> {
+  const views = new Map<string, SheetView>();
+  const scenes = new Map<string, Scene>();
+  const total = args.plan.sheets.length;
+  const limit = 4;
+  const inFlight = new Set<Promise<void>>();
+  let failure: unknown;
+  for (const { slug, request } of args.plan.sheets) {
+    const scene = await drawingSheet(slug, () => sheetScene(request, { project: args.project, dateIso: args.dateIso }));
+    if (args.keep.has(slug)) scenes.set(slug, scene);
+    const task = drawingSheet(slug, () => renderSheetFiles(scene, { cache: args.cache, renderer: args.renderer })).then(
+      (rendered) => {
+        args.files.write(`sheets/${slug}.svg`, rendered.svg);
+        args.files.write(`sheets/${slug}.pdf`, rendered.pdf);
+        args.files.write(`sheets/${slug}.png`, rendered.png);
+        views.set(slug, sheetView(slug, request, scene, rendered.svg));
+        args.onProgress?.(views.size, total);
+      },
+      (error: unknown) => {
+        failure ??= error;
+      },
+    );
+    inFlight.add(task);
+    void task.finally(() => inFlight.delete(task));
+    if (inFlight.size >= limit) await Promise.race(inFlight);
+    if (failure !== undefined) break;
+  }
+  await Promise.all(inFlight);
+  if (failure !== undefined) throw failure;
+  return { views, scenes };
+}

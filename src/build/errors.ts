@@ -1,0 +1,25 @@
+/**
+ * A sheet that cannot be drawn from the data as given (it does not fit its paper, or a name holds a
+ * character the font lacks) is a problem the user fixes in the data, not a fault in matchbook: it is
+ * reported with the sheet's name, the reason and the fix, and the build exits with status 1.
+ */
+
+/** Errors of src/sheets and src/render the user fixes; told apart by name, as they may come from a worker. */
+const USER_FIXABLE = new Set(['LayoutError', 'UnsupportedCharacterError']);
+
+export class SheetDrawError extends Error {
+  constructor(slug: string, cause: Error) {
+    super(`sheet ${slug} cannot be drawn: ${cause.message}`, { cause });
+    this.name = 'SheetDrawError';
+  }
+}
+
+/** Runs fn; turns the two user-fixable drawing errors into a SheetDrawError naming the sheet. */
+export async function drawingSheet<T>(slug: string, fn: () => T | Promise<T>): Promise<T> {
+  try {
+    return await fn();
+  } catch (error) {
+    if (error instanceof Error && USER_FIXABLE.has(error.name)) throw new SheetDrawError(slug, error);
+    throw error;
+  }
+}

@@ -1,0 +1,59 @@
+/**
+ * A small pool of render workers (one per core). Jobs go to the worker with the fewest jobs waiting;
+ * replies are matched by id. Errors come back by name and message, so a sheet that cannot be drawn is
+ * still reported as such.
+ */
+import { availableParallelism } from 'node:os';
+import { Worker } from 'node:worker_threads';
+import type { Scene } from '../scene/types.ts';
+import type { RenderedSheet } from './renderCache.ts';
+import type { RenderReply } from './renderWorker.ts';
+
+export interface SheetRenderer {
+  render(scene: Scene): Promise<RenderedSheet>;
+  close(): Promise<void>;
+}
+
+interface Pending {
+  readonly resolve: (r: RenderedSheet) => void;
+  readonly reject: (e: Error) => void;
+}
+
+/** Starts `size` render workers (default: the number of cores). */
+export function createRenderPool(opts: { size?: number } = {}): SheetRenderer {
+  const size = Math.max(1, opts.size ?? availableParallelism());
+  const pending = new Map<number, Pending>();
+  const load = new Map<Worker, number>();
+  let nextId = 0;
+  for (let i = 0; i < size; i += 1) {
+    // A plain-JS boot file registers tsx inside the thread (worker threads do not inherit it).
+    const worker = new Worker(new URL('./renderWorkerBoot.js', import.meta.url));
+    worker.on('message', (reply: RenderReply) => {
+      load.set(worker, (load.get(worker) ?? 1) - 1);
+      const job = pending.get(reply.id);
+      pending.delete(reply.id);
+      if (!job) return;
+      if (reply.ok) job.resolve({ svg: reply.svg, pdf: reply.pdf, png: reply.png });
+      else job.reject(Object.assign(new Error(reply.message), { name: reply.name }));
+    });
+    worker.on('error', (error) => {
+      for (const job of pending.values()) job.reject(error);
+      pending.clear();
+    });
+    load.set(worker, 0);
+  }
+  return {
+    render(scene) {
+      const [worker] = [...load.entries()].sort((a, b) => a[1] - b[1])[0];
+      const id = (nextId += 1);
+      load.set(worker, (load.get(worker) ?? 0) + 1);
+      return new Promise<RenderedSheet>((resolve, reject) => {
+        pending.set(id, { resolve, reject });
+        worker.postMessage({ id, scene });
+      });
+    },
+    async close() {
+      await Promise.all([...load.keys()].map((w) => w.terminate()));
+    },
+  };
+}

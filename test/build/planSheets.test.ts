@@ -1,0 +1,43 @@
+import { describe, expect, it } from 'vitest';
+import { loadProject } from '../../src/data/load.ts';
+import { boatSheetRequests, planSheets } from '../../src/build/planSheets.ts';
+import type { Project } from '../../src/data/types.ts';
+
+async function demo(): Promise<Project> {
+  const loaded = await loadProject('data');
+  if (!loaded.ok) throw new Error(loaded.errors.map((e) => e.message).join('\n'));
+  return loaded.project;
+}
+
+describe('planSheets()', () => {
+  it('gives every boat a spec sheet, a console card and an upgrade sheet', async () => {
+    const project = await demo();
+    const plan = planSheets(project);
+    for (const boat of project.boats) {
+      expect(plan.byBoat.get(boat.id)).toEqual([`spec-${boat.id}`, `card-${boat.id}`, `upgrade-${boat.id}`]);
+    }
+    expect(boatSheetRequests(project.boats[0]).map((r) => r.kind)).toEqual(['specSheet', 'consoleCard', 'upgradeSheet']);
+  });
+
+  it('draws a sheet asked for twice once, and gives one asked for on other paper its own file', async () => {
+    const project = await demo();
+    const plan = planSheets(project);
+    const slugs = plan.sheets.map((s) => s.slug);
+    expect(new Set(slugs).size).toBe(slugs.length);
+    const requests = plan.sheets.map((s) => JSON.stringify(s.request));
+    expect(new Set(requests).size).toBe(requests.length);
+    // Every book sheet is one of the planned sheets, in the book's order.
+    for (const book of project.books) {
+      const bookSlugs = plan.byBook.get(book.id) ?? [];
+      expect(bookSlugs.length).toBe(book.sheets.length);
+      bookSlugs.forEach((slug, i) => {
+        const planned = plan.sheets.find((s) => s.slug === slug);
+        expect(planned?.request).toEqual(book.sheets[i]);
+      });
+    }
+  });
+
+  it('names sheets only with plain lower-case file-name words', async () => {
+    for (const { slug } of planSheets(await demo()).sheets) expect(slug).toMatch(/^[a-z0-9][a-z0-9._-]*$/);
+  });
+});
