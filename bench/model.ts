@@ -36,7 +36,7 @@ function benchEngine(): EngineSpec {
 
 const family: ImpellerFamilySpec = { referenceSpeedRpm: 1000, exponent: 3, tolerancePct: 5, referenceDensityKgM3: 1025 };
 
-/** Runs fn(i) for about `seconds`, returning calls per second. */
+/** Calls per second of fn(i) over about `seconds` (after a warm-up); the sink defeats dead-code removal. */
 function rate(fn: (i: number) => number, seconds: number): { perSecond: number; sink: number } {
   let sink = 0;
   for (let i = 0; i < 20000; i++) sink += fn(i); // warm up the JIT
@@ -49,6 +49,18 @@ function rate(fn: (i: number) => number, seconds: number): { perSecond: number; 
     elapsedMs = performance.now() - start;
   }
   return { perSecond: (calls / elapsedMs) * 1000, sink };
+}
+
+/** Best rate of each over interleaved rounds, so a busy machine slows both alike and bursts do not decide. */
+function bestRates(fns: readonly ((i: number) => number)[], rounds: number, seconds: number): { perSecond: number; sink: number }[] {
+  const best = fns.map(() => ({ perSecond: 0, sink: 0 }));
+  for (let r = 0; r < rounds; r++) {
+    fns.forEach((fn, j) => {
+      const got = rate(fn, seconds);
+      best[j] = { perSecond: Math.max(best[j].perSecond, got.perSecond), sink: best[j].sink + got.sink };
+    });
+  }
+  return best;
 }
 
 /** Lines to print: solves per second and the ratio to the closed form. */
@@ -64,14 +76,17 @@ export async function runModelBench(): Promise<string[]> {
     }),
   );
   const limits = benchEngine().limits;
-  const solve = rate((i) => operatingPoint({ curve, absorber: absorbers[i & 63], limits }).speedRpm, 1.5);
-  const closed = rate(
-    (i) => swapFromKnownPoint({ knownRpm: 5800, knownPowerKw: 210, fromRatingKw: 1, toRatingKw: 0.6 + (i & 63) * 0.02, exponent: 3 }).speedRpm,
-    1.5,
+  const [solve, closed] = bestRates(
+    [
+      (i) => operatingPoint({ curve, absorber: absorbers[i & 63], limits }).speedRpm,
+      (i) => swapFromKnownPoint({ knownRpm: 5800, knownPowerKw: 210, fromRatingKw: 1, toRatingKw: 0.6 + (i & 63) * 0.02, exponent: 3 }).speedRpm,
+    ],
+    5,
+    0.4,
   );
   const fmt = (x: number) => Math.round(x).toLocaleString('en-US');
   return [
-    `model: operatingPoint, 20-row table: ${fmt(solve.perSecond)} solves/s (goal ≥ 1,000,000)`,
+    `model: operatingPoint, 20-row table: ${fmt(solve.perSecond)} solves/s (best of 5 rounds; goal ≥ 1,000,000)`,
     `model: constant-torque closed form:  ${fmt(closed.perSecond)} solves/s`,
     `model: closed form / table solve = ${(closed.perSecond / solve.perSecond).toFixed(1)}× (goal ≤ 10×)`,
     `model: (checksums ${solve.sink.toFixed(0)} ${closed.sink.toFixed(0)})`,

@@ -16,6 +16,8 @@ export interface Absorber {
   readonly densityRatio: number;
   /** Precomputed c in P_engine = c · n^k (kW, n engine rpm). */
   readonly coefficient: number;
+  /** ln c, for the solver's per-piece screen. */
+  readonly lnCoefficient: number;
 }
 
 /** Absorption of one impeller at one water density, referred to the engine shaft. */
@@ -51,6 +53,7 @@ export function makeAbsorber(args: {
     efficiency: driveLine.efficiency,
     densityRatio,
     coefficient,
+    lnCoefficient: Math.log(coefficient),
   });
 }
 

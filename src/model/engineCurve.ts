@@ -26,6 +26,36 @@ export interface EngineCurve {
   readonly kind: CurveKind;
   /** Product of condition factor, ambient factor and extra power factor applied to the published values. */
   readonly appliedFactor: number;
+  /** Solver shortcut per piece: ln of its lowest power (kW) and ln of its end speed (rpm). */
+  readonly screen: PieceScreen;
+}
+
+/**
+ * A piece holds surplus everywhere when its lowest power exceeds what the impeller takes at its end,
+ * min(y0, y1) > c·x1^k, i.e. ln min(y0, y1) − k·ln x1 > ln c: one multiply-add per piece, any k.
+ * For the usual k = 3 the running minimum of the left side is stored too; it only falls, so the first
+ * piece that can hold a crossing is found by binary search.
+ */
+export interface PieceScreen {
+  readonly lnFloorKw: Float64Array;
+  readonly lnEndRpm: Float64Array;
+  /** min over pieces 0..i of lnFloorKw − 3·lnEndRpm. */
+  readonly runningMinCube: Float64Array;
+}
+
+function screenOf(pieces: readonly HermitePiece[]): PieceScreen {
+  const n = pieces.length;
+  const lnFloorKw = new Float64Array(n);
+  const lnEndRpm = new Float64Array(n);
+  const runningMinCube = new Float64Array(n);
+  let least = Number.POSITIVE_INFINITY;
+  pieces.forEach((p, i) => {
+    lnFloorKw[i] = Math.log(Math.min(p.y0, p.y1));
+    lnEndRpm[i] = Math.log(p.x1);
+    least = Math.min(least, lnFloorKw[i] - 3 * lnEndRpm[i]);
+    runningMinCube[i] = least;
+  });
+  return Object.freeze({ lnFloorKw, lnEndRpm, runningMinCube });
 }
 
 /** Full-throttle curve of one engine, scaled by condition factor, ambient correction and an extra factor. */
@@ -90,6 +120,7 @@ function fromPieces(pieces: readonly HermitePiece[], kind: CurveKind, appliedFac
     pieces: frozen,
     kind,
     appliedFactor,
+    screen: screenOf(frozen),
     powerKwUnchecked,
     powerAt(speedRpm: number): CurveValue {
       if (speedRpm < minRpm) return { status: 'belowRange', nearestRpm: minRpm };
@@ -108,6 +139,7 @@ function singlePoint(speedRpm: number, powerKw: number, appliedFactor: number): 
     pieces: Object.freeze([]),
     kind: 'singlePoint' as const,
     appliedFactor,
+    screen: screenOf([]),
     powerKwUnchecked: () => powerKw,
     powerAt(rpm: number): CurveValue {
       if (rpm === speedRpm) return { status: 'ok', powerKw };

@@ -4,11 +4,14 @@
  * peak, several crossings.
  *
  * Per piece [u, v], because the cubic is monotone and c·n^k rises:
- *   - lower bound  s ≥ min(y(u), y(v)) − c·v^k; if that is > 0 the piece holds no crossing (cheap skip);
+ *   - lower bound  s ≥ min(y(u), y(v)) − c·v^k; if that is > 0 the piece holds no crossing (cheap skip,
+ *     done in logs with the curve's precomputed screen so no power function is evaluated);
  *   - if max y'(n) over [u, v] < k·c·u^(k−1) ≤ d(c·n^k)/dn, s falls strictly, so a sign change there is
  *     the only root and safeguarded Newton (bisection whenever Newton leaves the bracket) refines it;
  *   - otherwise split in half and search the left half first, so the first crossing wins.
  */
+import type { Absorber } from './absorption.ts';
+import type { EngineCurve } from './engineCurve.ts';
 import { hermiteMaxSlope, hermiteValue, type HermitePiece } from './monotoneCubic.ts';
 
 /** Bisection depth cap: 2^-60 of a piece is far below any meaningful rpm. */
@@ -18,28 +21,43 @@ function absorbed(c: number, k: number, n: number): number {
   return k === 3 ? c * n * n * n : c * Math.pow(n, k);
 }
 
+/** Margin on the log screen so rounding can never skip a piece that holds a crossing. */
+const SCREEN_MARGIN = 1e-9;
+
 /** Lowest rpm in [lo, hi] where surplus turns negative, or -1 if it never does; caller ensures surplus(lo) ≥ 0. */
-export function firstCrossingRpm(pieces: readonly HermitePiece[], c: number, k: number, lo: number, hi: number): number {
-  let i = 0;
-  while (i < pieces.length - 1 && pieces[i].x1 <= lo) i++;
-  let a = lo;
-  let ya = hermiteValue(pieces[i], lo);
-  let sa = ya - absorbed(c, k, lo);
-  for (; i < pieces.length && a < hi; i++) {
+export function firstCrossingRpm(curve: EngineCurve, absorber: Absorber, lo: number, hi: number): number {
+  const { pieces, screen } = curve;
+  const c = absorber.coefficient;
+  const k = absorber.exponent;
+  const lnC = absorber.lnCoefficient + SCREEN_MARGIN;
+  const lnFloorKw = screen.lnFloorKw;
+  const lnEndRpm = screen.lnEndRpm;
+  for (let i = k === 3 ? firstScreenFailureCube(screen.runningMinCube, lnC) : 0; i < pieces.length; i++) {
+    // Every earlier piece kept surplus ≥ 0, so only pieces that fail the screen need a closer look.
+    if (lnFloorKw[i] - k * lnEndRpm[i] > lnC) continue;
     const p = pieces[i];
+    if (p.x1 <= lo) continue;
+    if (p.x0 >= hi) break;
+    const a = p.x0 > lo ? p.x0 : lo;
     const b = p.x1 < hi ? p.x1 : hi;
+    const ya = a === p.x0 ? p.y0 : hermiteValue(p, a);
     const yb = b === p.x1 ? p.y1 : hermiteValue(p, b);
-    const absB = absorbed(c, k, b);
-    const sb = yb - absB;
-    if ((ya < yb ? ya : yb) - absB <= 0) {
-      const r = searchPiece(p, c, k, a, ya, sa, b, yb, sb, 0);
-      if (r >= 0) return r;
-    }
-    a = b;
-    ya = yb;
-    sa = sb;
+    const r = searchPiece(p, c, k, a, ya, ya - absorbed(c, k, a), b, yb, yb - absorbed(c, k, b), 0);
+    if (r >= 0) return r;
   }
   return -1;
+}
+
+/** First index whose running minimum is ≤ lnC (all earlier pieces pass the screen); length if none. */
+function firstScreenFailureCube(runningMin: Float64Array, lnC: number): number {
+  let lo = 0;
+  let hi = runningMin.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (runningMin[mid] > lnC) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
 }
 
 function searchPiece(
@@ -85,13 +103,15 @@ function refine(p: HermitePiece, c: number, k: number, u: number, su: number, v:
     const t = (x - p.x0) / h;
     const ab = absorbed(c, k, x);
     const sx = p.y0 + t * (A + t * (B + t * C)) - ab;
-    if (sx === 0) return x;
+    // Balanced to 1e-12 of the power: done (this also ends the loop when Newton lands on x again).
+    if (Math.abs(sx) <= 1e-12 * ab) return x;
     if (sx > 0) a = x;
     else b = x;
     const slope = (A + t * (2 * B + 3 * C * t)) / h - (k * ab) / x;
     let next = x - sx / slope;
+    if (Math.abs(next - x) <= 1e-13 * x) return next;
     if (!(next > a && next < b)) next = 0.5 * (a + b);
-    if (Math.abs(next - x) <= 1e-13 * x || b - a <= 1e-13 * b) return next;
+    if (b - a <= 1e-13 * b) return next;
     x = next;
   }
   return x;

@@ -51,12 +51,14 @@ export function operatingPoint(args: { curve: EngineCurve; absorber: Absorber; l
   if (curve.pieces.length === 0) return point('noCrossing', lo, curve.powerKwUnchecked(lo), 0, REASONS.singlePoint);
   if (lo > limits.maxRpm) return point('noCrossing', lo, curve.powerKwUnchecked(lo), 0, REASONS.tableAboveMax);
   const hi = curve.maxRpm < limits.maxRpm ? curve.maxRpm : limits.maxRpm;
-  const availableLoKw = curve.powerKwUnchecked(lo);
+  const first = curve.pieces[0];
+  const availableLoKw = lo === first.x0 ? first.y0 : curve.powerKwUnchecked(lo);
   if (availableLoKw - absorbedPowerKw(absorber, lo) < 0) return point('noCrossing', lo, availableLoKw, 0, REASONS.tooHeavyAtStart);
 
-  const crossingRpm = firstCrossingRpm(curve.pieces, absorber.coefficient, absorber.exponent, lo, hi);
+  const crossingRpm = firstCrossingRpm(curve, absorber, lo, hi);
   if (crossingRpm >= 0) {
-    const powerKw = curve.powerKwUnchecked(crossingRpm);
+    // At the crossing engine and impeller power agree (to ~1e-13); the absorption law is the cheaper side.
+    const powerKw = absorbedPowerKw(absorber, crossingRpm);
     if (crossingRpm < limits.windowLowRpm) return point('belowWindow', crossingRpm, powerKw, 0, REASONS.belowWindow);
     if (crossingRpm > limits.windowHighRpm) return point('aboveWindow', crossingRpm, powerKw, 0, REASONS.aboveWindow);
     return point('matched', crossingRpm, powerKw, 0, REASONS.matched);

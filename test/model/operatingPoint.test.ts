@@ -24,7 +24,7 @@ describe('operatingPoint()', () => {
     const op = solve(flat(200), 1.0);
     expect(op.status).toBe('matched');
     expect(op.speedRpm).toBeCloseTo(1000 * Math.cbrt(200), 7);
-    expect(op.powerKw).toBeCloseTo(200, 12);
+    expect(op.powerKw).toBeCloseTo(200, 9);
     expect(op.unusedPowerKw).toBe(0);
     expect(op.reason).toBe(REASONS.matched);
   });
