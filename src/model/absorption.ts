@@ -70,7 +70,7 @@ export function absorbedPowerKw(a: Absorber, engineSpeedRpm: number): number {
   return a.exponent === 3 ? a.coefficient * n * n * n : a.coefficient * Math.pow(n, a.exponent);
 }
 
-/** Inverse: engine rpm at which the impeller takes this engine-side power. */
+/** Inverse: engine rpm at which the impeller takes this engine-side power (0 rpm for power ≤ 0). */
 export function speedAtAbsorbedPowerRpm(a: Absorber, engineSidePowerKw: number): number {
-  return Math.pow(engineSidePowerKw / a.coefficient, 1 / a.exponent);
+  return engineSidePowerKw > 0 ? Math.pow(engineSidePowerKw / a.coefficient, 1 / a.exponent) : 0;
 }

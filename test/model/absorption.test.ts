@@ -58,6 +58,11 @@ describe('speedAtAbsorbedPowerRpm()', () => {
       expect(absorbedPowerKw(a, speedAtAbsorbedPowerRpm(a, 187.5))).toBeCloseTo(187.5, 9);
     }
   });
+
+  it('answers 0 rpm, not NaN, for zero or negative power', () => {
+    expect(speedAtAbsorbedPowerRpm(absorber(), 0)).toBe(0);
+    expect(speedAtAbsorbedPowerRpm(absorber(), -5)).toBe(0);
+  });
 });
 
 describe('makeAbsorber()', () => {
