@@ -10,7 +10,7 @@ import { drawingSheet } from './errors.ts';
 import { inlineSvg } from './inlineSvg.ts';
 import type { OutputFiles } from './outputFiles.ts';
 import type { SheetPlan } from './planSheets.ts';
-import type { BuildCache } from './renderCache.ts';
+import { sceneKey, type BuildCache } from './renderCache.ts';
 import type { SheetRenderer } from './renderPool.ts';
 import { renderSheetFiles } from './sheetFiles.ts';
 import type { SheetView } from './siteView.ts';
@@ -46,6 +46,16 @@ function sheetView(slug: string, request: SheetRequest, scene: Scene, svg: strin
   };
 }
 
+/** The sheet's scene, from the cache when nothing it is drawn from has changed. */
+function cachedScene(request: SheetRequest, args: DrawArgs): Scene {
+  const key = args.cache ? sceneKey({ request, project: args.project, dateIso: args.dateIso }) : '';
+  const cached = args.cache?.scenes.get(key);
+  if (cached) return cached;
+  const scene = sheetScene(request, { project: args.project, dateIso: args.dateIso });
+  args.cache?.scenes.set(key, scene);
+  return scene;
+}
+
 /** Draws and writes every sheet; returns each sheet's view and the scenes the books need. */
 export async function drawSheets(args: DrawArgs): Promise<{ views: Map<string, SheetView>; scenes: Map<string, Scene> }> {
   const views = new Map<string, SheetView>();
@@ -55,7 +65,7 @@ export async function drawSheets(args: DrawArgs): Promise<{ views: Map<string, S
   const inFlight = new Set<Promise<void>>();
   let failure: unknown;
   for (const { slug, request } of args.plan.sheets) {
-    const scene = await drawingSheet(slug, () => sheetScene(request, { project: args.project, dateIso: args.dateIso }));
+    const scene = await drawingSheet(slug, () => cachedScene(request, args));
     if (args.keep.has(slug)) scenes.set(slug, scene);
     const task = drawingSheet(slug, () => renderSheetFiles(scene, { cache: args.cache, renderer: args.renderer })).then(
       (rendered) => {

@@ -11,6 +11,7 @@ declare module '@11ty/eleventy' {
         config?: (config: never) => void | Promise<void>;
       },
     );
+    init(): Promise<void>;
     disableLogger(): void;
     write(): Promise<unknown>;
     watch(): Promise<unknown>;

@@ -5,14 +5,14 @@
  */
 import { join } from 'node:path';
 import { analyseBoat, analyseWallChart } from '../analysis/index.ts';
-import type { Project } from '../data/types.ts';
+import type { Book, Project } from '../data/types.ts';
 import { renderPdf } from '../render/index.ts';
 import { FONT_FILES } from '../scene/fonts.ts';
 import type { Scene } from '../scene/types.ts';
 import { PACKAGE_ROOT } from './eleventySetup.ts';
 import { outputFiles } from './outputFiles.ts';
 import { planSheets } from './planSheets.ts';
-import type { BuildCache } from './renderCache.ts';
+import { jsonHash, sceneHash, type BuildCache } from './renderCache.ts';
 import type { SheetRenderer } from './renderPool.ts';
 import { drawSheets } from './drawSheets.ts';
 import { siteView } from './siteViewBuild.ts';
@@ -39,6 +39,23 @@ export interface SiteFilesArgs {
   readonly onProgress?: (done: number, total: number) => void;
 }
 
+/** One PDF for the whole book, a bookmark per sheet; reused while its scenes and title are unchanged. */
+async function bookPdf(args: { book: Book; scenes: readonly Scene[]; dateIso: string; cache?: BuildCache }): Promise<Uint8Array> {
+  const { book, scenes } = args;
+  const key = args.cache ? jsonHash({ title: book.title, audience: book.audience, scenes: scenes.map(sceneHash) }) : '';
+  const cached = args.cache?.books.get(key);
+  if (cached) return cached;
+  const pdf = await renderPdf(scenes, {
+    title: book.title,
+    subject: `Impeller matching chart book for the ${book.audience}`,
+    keywords: ['waterjet', 'impeller', 'matching', book.audience],
+    dateIso: args.dateIso,
+    outline: scenes.map((s) => s.title),
+  });
+  args.cache?.books.set(key, pdf);
+  return pdf;
+}
+
 /** Writes every sheet, book, results file and schema; returns the data the pages are made from. */
 export async function writeSiteFiles(args: SiteFilesArgs): Promise<{ site: SiteData; counts: SiteCounts }> {
   const { project, dateIso } = args;
@@ -52,14 +69,7 @@ export async function writeSiteFiles(args: SiteFilesArgs): Promise<{ site: SiteD
   for (const book of project.books) {
     const scenes = (plan.byBook.get(book.id) ?? []).map((slug) => bookScenes.get(slug) as Scene);
     if (scenes.length === 0) continue;
-    const pdf = await renderPdf(scenes, {
-      title: book.title,
-      subject: `Impeller matching chart book for the ${book.audience}`,
-      keywords: ['waterjet', 'impeller', 'matching', book.audience],
-      dateIso,
-      outline: scenes.map((s) => s.title),
-    });
-    files.write(`books/${book.id}.pdf`, pdf);
+    files.write(`books/${book.id}.pdf`, await bookPdf({ book, scenes, dateIso, cache: args.cache }));
   }
 
   const boatResults = new Map(project.boats.map((boat) => [boat.id, analyseBoat({ boat, project })]));

@@ -21,6 +21,7 @@ export async function runServe(args: ParsedArgs, io: CliIo): Promise<number> {
   });
   eleventy.disableLogger();
   try {
+    await eleventy.init();
     await eleventy.watch();
   } catch (error) {
     if (error instanceof InvalidDataError) return 1;
