@@ -5,7 +5,7 @@
  * The curve never extrapolates: outside its rows powerAt() answers with a status, not a number.
  */
 import { ambientPowerFactor } from './ambient.ts';
-import { hermiteValue, monotonePieces, type HermitePiece } from './monotoneCubic.ts';
+import { hermiteMaxSlope, hermiteValue, monotonePieces, type HermitePiece } from './monotoneCubic.ts';
 import type { Ambient, EngineSpec } from './types.ts';
 
 export type CurveValue =
@@ -41,6 +41,8 @@ export interface PieceScreen {
   readonly lnEndRpm: Float64Array;
   /** min over pieces 0..i of lnFloorKw − 3·lnEndRpm. */
   readonly runningMinCube: Float64Array;
+  /** Steepest slope of each whole piece, kW/rpm. */
+  readonly maxSlopeKwPerRpm: Float64Array;
 }
 
 function screenOf(pieces: readonly HermitePiece[]): PieceScreen {
@@ -48,14 +50,16 @@ function screenOf(pieces: readonly HermitePiece[]): PieceScreen {
   const lnFloorKw = new Float64Array(n);
   const lnEndRpm = new Float64Array(n);
   const runningMinCube = new Float64Array(n);
+  const maxSlopeKwPerRpm = new Float64Array(n);
   let least = Number.POSITIVE_INFINITY;
   pieces.forEach((p, i) => {
     lnFloorKw[i] = Math.log(Math.min(p.y0, p.y1));
     lnEndRpm[i] = Math.log(p.x1);
     least = Math.min(least, lnFloorKw[i] - 3 * lnEndRpm[i]);
     runningMinCube[i] = least;
+    maxSlopeKwPerRpm[i] = hermiteMaxSlope(p, p.x0, p.x1);
   });
-  return Object.freeze({ lnFloorKw, lnEndRpm, runningMinCube });
+  return Object.freeze({ lnFloorKw, lnEndRpm, runningMinCube, maxSlopeKwPerRpm });
 }
 
 /** Full-throttle curve of one engine, scaled by condition factor, ambient correction and an extra factor. */

@@ -7,7 +7,7 @@
  *   - lower bound  s ≥ min(y(u), y(v)) − c·v^k; if that is > 0 the piece holds no crossing (cheap skip,
  *     done in logs with the curve's precomputed screen so no power function is evaluated);
  *   - if max y'(n) over [u, v] < k·c·u^(k−1) ≤ d(c·n^k)/dn, s falls strictly, so a sign change there is
- *     the only root and safeguarded Newton (bisection whenever Newton leaves the bracket) refines it;
+ *     the only root and safeguarded Halley iteration (bisection whenever a step leaves the bracket) refines it;
  *   - otherwise split in half and search the left half first, so the first crossing wins.
  */
 import type { Absorber } from './absorption.ts';
@@ -42,7 +42,15 @@ export function firstCrossingRpm(curve: EngineCurve, absorber: Absorber, lo: num
     const b = p.x1 < hi ? p.x1 : hi;
     const ya = a === p.x0 ? p.y0 : hermiteValue(p, a);
     const yb = b === p.x1 ? p.y1 : hermiteValue(p, b);
-    const r = searchPiece(p, c, k, a, ya, ya - absorbed(c, k, a), b, yb, yb - absorbed(c, k, b), 0);
+    const absA = absorbed(c, k, a);
+    const sb = yb - absorbed(c, k, b);
+    // Usual case: the whole piece is less steep than the impeller curve at its start, so surplus falls
+    // throughout and one sign check decides (same test as in searchPiece, slope precomputed).
+    if (a === p.x0 && b === p.x1 && screen.maxSlopeKwPerRpm[i] < (k * absA) / a) {
+      if (sb < 0) return refine(p, c, k, a, ya - absA, b, sb);
+      continue;
+    }
+    const r = searchPiece(p, c, k, a, ya, ya - absA, b, yb, sb, 0);
     if (r >= 0) return r;
   }
   return -1;
@@ -86,7 +94,7 @@ function searchPiece(
   return searchPiece(p, c, k, m, ym, sm, v, yv, sv, depth + 1);
 }
 
-/** Root of a strictly falling surplus on [u, v], s(u) ≥ 0 > s(v): Newton kept inside a shrinking bracket. */
+/** Root of a strictly falling surplus on [u, v], s(u) ≥ 0 > s(v): Halley steps kept inside a shrinking bracket. */
 function refine(p: HermitePiece, c: number, k: number, u: number, su: number, v: number, sv: number): number {
   if (su === 0) return u;
   // Cubic in t = (x − x0)/h: y = y0 + t·(A + t·(B + t·C)), dy/dx = (A + t·(2B + 3C·t)) / h.
@@ -103,13 +111,17 @@ function refine(p: HermitePiece, c: number, k: number, u: number, su: number, v:
     const t = (x - p.x0) / h;
     const ab = absorbed(c, k, x);
     const sx = p.y0 + t * (A + t * (B + t * C)) - ab;
-    // Balanced to 1e-12 of the power: done (this also ends the loop when Newton lands on x again).
+    // Balanced to 1e-12 of the power: done.
     if (Math.abs(sx) <= 1e-12 * ab) return x;
     if (sx > 0) a = x;
     else b = x;
+    // Halley's step (cubic convergence) from s, s' and s''; the bracket guards it like Newton's.
     const slope = (A + t * (2 * B + 3 * C * t)) / h - (k * ab) / x;
-    let next = x - sx / slope;
-    if (Math.abs(next - x) <= 1e-13 * x) return next;
+    const curvature = (2 * B + 6 * C * t) / (h * h) - (k * (k - 1) * ab) / (x * x);
+    let next = x - (2 * sx * slope) / (2 * slope * slope - sx * curvature);
+    // Halley's error after a step of relative size δ is of order δ³ (times the curves' bend), so a step
+    // of 1e-7 leaves far less than the 1e-9 balance we promise: stop without another evaluation.
+    if (next >= a && next <= b && Math.abs(next - x) <= 1e-7 * x) return next;
     if (!(next > a && next < b)) next = 0.5 * (a + b);
     if (b - a <= 1e-13 * b) return next;
     x = next;
