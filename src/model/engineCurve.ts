@@ -74,9 +74,15 @@ export function engineCurve(engine: EngineSpec, opts: { ambient?: Ambient; power
   const source = engine.curve;
   if (source.kind === 'knownPoint') {
     const { speedRpm, powerKw } = source.point;
-    const slope = (powerKw * factor) / speedRpm;
     const lo = engine.limits.idleRpm;
     const hi = engine.limits.maxRpm;
+    if (!(speedRpm > 0 && powerKw > 0 && Number.isFinite(speedRpm) && Number.isFinite(powerKw))) {
+      throw new RangeError(`engine ${engine.id}: the known point needs rpm > 0 and power > 0, found ${speedRpm} rpm, ${powerKw} kW`);
+    }
+    if (!(lo > 0 && hi > lo)) {
+      throw new RangeError(`engine ${engine.id}: idle speed must be above 0 and below the maximum speed, found idle ${lo} rpm, max ${hi} rpm`);
+    }
+    const slope = (powerKw * factor) / speedRpm;
     const piece = Object.freeze({ x0: lo, x1: hi, y0: slope * lo, y1: slope * hi, m0: slope, m1: slope });
     return fromPieces([piece], 'constantTorque', factor);
   }

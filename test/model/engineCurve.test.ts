@@ -51,6 +51,12 @@ describe('engineCurve()', () => {
     expect(() => engineCurve(testEngine({ points: rows([[3000, 100], [3000, 120]]) }))).toThrow(/remove repeats/);
     expect(() => engineCurve(testEngine({ points: rows([[3000, -5], [4000, 120]]) }))).toThrow(/row 1 .* found 3000 rpm, -5 kW/);
     expect(() => engineCurve(testEngine({ points: [] }))).toThrow(/no rows/);
+    const knownPoint = { kind: 'knownPoint', point: { speedRpm: 5800, powerKw: 0 } } as const;
+    expect(() => engineCurve(testEngine({ curve: knownPoint }))).toThrow(/known point needs rpm > 0 and power > 0, found 5800 rpm, 0 kW/);
+    const upsideDown = { idleRpm: 7000, windowLowRpm: 5000, windowHighRpm: 6000, maxRpm: 6500 };
+    expect(() => engineCurve(testEngine({ curve: { ...knownPoint, point: { speedRpm: 5800, powerKw: 200 } }, limits: upsideDown }))).toThrow(
+      /found idle 7000 rpm, max 6500 rpm/,
+    );
   });
 
   it('answers NaN speeds with a status, never a number', () => {
