@@ -3,7 +3,10 @@
  * before every (re)build, files written straight into the served folder (no atomic swap: the page
  * reloads after the rebuild anyway). Rendered sheets are reused through the content-hash cache.
  */
+import { mkdirSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
 import { loadProject } from '../data/load.ts';
+import { OUTPUT_MARKER } from './atomicDir.ts';
 import { formatDataErrors } from './buildSite.ts';
 import { buildDateIso } from './dateIso.ts';
 import { SheetDrawError } from './errors.ts';
@@ -33,6 +36,8 @@ export function liveSiteData(opts: LiveSiteOptions): () => Promise<SiteData> {
       throw new InvalidDataError('the data has problems; fix them and save again');
     }
     const dateIso = buildDateIso({ sourceDateEpoch: process.env.SOURCE_DATE_EPOCH, issueDate: loaded.project.site.issueDate });
+    mkdirSync(opts.outDir, { recursive: true });
+    writeFileSync(join(opts.outDir, OUTPUT_MARKER), 'Written by matchbook serve.\n');
     const written = await writeSiteFiles({ project: loaded.project, dateIso, dir: opts.outDir, cache }).catch((error: unknown) => {
       if (!(error instanceof SheetDrawError)) throw error;
       report(`${error.message}\n`);
