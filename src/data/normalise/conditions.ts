@@ -1,7 +1,7 @@
 /** Conditions and water from their file forms (any unit) to Ambient, Site and Water in kPa, °C, kg/m³. */
-import { isaPressureKpa } from '../../model/ambient.ts';
+import { isaPressureKpa } from '../../standards/atmosphere.ts';
 import type { Ambient } from '../../model/types.ts';
-import { FRESH_WATER_KG_M3, SALT_WATER_KG_M3 } from '../../model/water.ts';
+import { FRESH_WATER_KG_M3, SALT_WATER_KG_M3 } from '../../standards/water.ts';
 import { fToC, hpaToKpa, inHgToKpa } from '../../units.ts';
 import type { RawConditions } from '../schema/common.ts';
 import type { Site, Water } from '../types.ts';
