@@ -1,7 +1,8 @@
 /**
  * Results of one boat: its fitted combination under its own conditions, the predicted WOT band, the
  * cruise table, every alternative impeller of its jet, and the engine-upgrade table. Pure composition of
- * model calls. Speed, fuel and sea-trial calibration are added by later analyses into the optional fields.
+ * model calls. Speed and fuel estimates (boatEstimates.ts) sit beside the nominal figures; a boat with sea
+ * trials also gets its calibration and the estimates on the calibrated model (boatCalibration.ts).
  */
 import type { Boat, CruiseSetting, Project } from '../data/types.ts';
 import {
@@ -14,12 +15,14 @@ import {
   type ImpellerSpec,
   type Installation,
 } from '../model/index.ts';
+import { boatCalibration, calibrationResult, type CalibrationResult } from './boatCalibration.ts';
+import { boatEstimates, type BoatEstimates, type SpeedGainRow, type TopSpeedRow, type UpgradeEstimate } from './boatEstimates.ts';
 import { bandResult, conditionsResult, limitsResult, pointResult, type BandResult, type ConditionsResult, type LimitsResult, type PointResult } from './results.ts';
 
 export interface CruiseRow {
   readonly label: string;
   readonly kind: CruiseSetting['kind'];
-  /** 'ok'; 'aboveWot' (asks more than the engine makes at WOT); 'needsSpeedModel' (speed settings, for now). */
+  /** 'ok'; 'aboveWot' (asks more than the engine makes at WOT). 'needsSpeedModel' is no longer produced (speed settings use the Crouch estimate); kept so older readers still type-check. */
   readonly status: 'ok' | 'aboveWot' | 'needsSpeedModel';
   readonly speedRpm?: number;
   readonly powerKw?: number;
@@ -27,6 +30,10 @@ export interface CruiseRow {
   readonly speedKn?: number;
   /** Fuel flow, L/h (filled by the fuel model). */
   readonly fuelLPerH?: number;
+  readonly fuelUsGalPerH?: number;
+  /** With a tank: hours and nautical miles keeping a third in reserve. */
+  readonly hoursWithReserve?: number;
+  readonly rangeWithReserveNm?: number;
 }
 
 export interface AlternativeRow {
@@ -35,11 +42,21 @@ export interface AlternativeRow {
   readonly ratingKw: number;
   readonly fitted: 'yes' | 'no';
   readonly band: BandResult;
+  /** Crouch top-speed estimate at the nominal WOT power, knots. */
+  readonly topSpeedKn?: number;
+  /** On the sea-trial-calibrated model, when the boat has trials. */
+  readonly calibratedWotRpm?: number;
+  readonly calibratedTopSpeedKn?: number;
 }
 
 export interface UpgradeRow {
   readonly changePct: number;
   readonly wot: PointResult;
+  /** Crouch estimate at the new WOT power, knots, and the gain over today, %. */
+  readonly speedKn?: number;
+  readonly speedGainPct?: number;
+  /** The impeller of the jet that would best use the new power (matched, most power taken). */
+  readonly best?: UpgradeEstimate['best'];
 }
 
 export interface RpmGainRow {
@@ -68,6 +85,12 @@ export interface BoatResult {
   readonly alternatives: readonly AlternativeRow[];
   readonly upgrade: readonly UpgradeRow[];
   readonly rpmGains: readonly RpmGainRow[];
+  /** Speed, fuel and upgrade estimates beside the nominal figures (hull constant from trials when logged). */
+  readonly estimates: BoatEstimates;
+  /** Power change for planing-speed gains (estimates). */
+  readonly speedGains: readonly SpeedGainRow[];
+  /** Present when the boat has sea trials: the calibration and the estimates on the calibrated model. */
+  readonly calibrated?: { readonly calibration: CalibrationResult; readonly estimates: BoatEstimates };
 }
 
 /** Power changes tabulated on upgrade sheets, %. */
@@ -82,12 +105,15 @@ export function boatInstallation(boat: Boat, impeller?: ImpellerSpec): Installat
   return { engine: boat.engine, ambient: boat.site.ambient, family: boat.jet.family, impeller: fitted, driveLine: boat.driveLine, waterDensityKgM3: boat.water.densityKgM3 };
 }
 
-function cruiseRow(setting: CruiseSetting, inst: Installation, wotRpm: number): CruiseRow {
+function cruiseRow(setting: CruiseSetting, inst: Installation, wotRpm: number, est: BoatEstimates['cruise'][number]): CruiseRow {
   const absorber = installationAbsorber(inst);
-  if (setting.kind === 'speed') return { label: setting.label, kind: setting.kind, status: 'needsSpeedModel' };
+  const range = est.rangeWithReserveNm !== undefined ? { hoursWithReserve: est.hoursWithReserve!, rangeWithReserveNm: est.rangeWithReserveNm } : {};
+  const estimates = { speedKn: est.speedKn, fuelLPerH: est.fuelLPerH, fuelUsGalPerH: est.fuelUsGalPerH, ...range };
+  // A speed setting needs the speed model: its rpm and power come from the Crouch estimate inverted.
+  if (setting.kind === 'speed') return { label: setting.label, kind: setting.kind, status: est.status, speedRpm: est.speedRpm, powerKw: est.powerKw, ...estimates };
   const speedRpm = setting.kind === 'rpm' ? setting.speedRpm : speedAtAbsorbedPowerRpm(absorber, setting.powerKw);
   const powerKw = setting.kind === 'power' ? setting.powerKw : absorbedPowerKw(absorber, setting.speedRpm);
-  return { label: setting.label, kind: setting.kind, status: speedRpm > wotRpm ? 'aboveWot' : 'ok', speedRpm, powerKw };
+  return { label: setting.label, kind: setting.kind, status: speedRpm > wotRpm ? 'aboveWot' : 'ok', speedRpm, powerKw, ...estimates };
 }
 
 /** Analyses one boat of the project (powers kW, speeds rpm). */
@@ -95,14 +121,27 @@ export function analyseBoat(args: { boat: Boat; project: Project }): BoatResult 
   const { boat } = args;
   const inst = boatInstallation(boat);
   const wot = bandResult(operatingBand(inst));
+  const calibration = boatCalibration(boat, inst);
+  const estimates = boatEstimates({ boat, inst, calibration, basis: 'nominal' });
+  const calibrated =
+    calibration.mode === 'none' ? undefined : { calibration: calibrationResult(boat, calibration), estimates: boatEstimates({ boat, inst, calibration, basis: 'calibrated' }) };
+  const topOf = (rows: readonly TopSpeedRow[], id: string) => rows.find((r) => r.impellerId === id)!;
   const alternatives = boat.jet.impellers.map((impeller) => ({
     impellerId: impeller.id,
     label: impeller.label,
     ratingKw: impeller.ratingKw,
     fitted: impeller.id === boat.impellerId ? ('yes' as const) : ('no' as const),
     band: bandResult(operatingBand(boatInstallation(boat, impeller))),
+    topSpeedKn: topOf(estimates.topSpeeds, impeller.id).speedKn,
+    ...(calibrated
+      ? { calibratedWotRpm: topOf(calibrated.estimates.topSpeeds, impeller.id).wotRpm, calibratedTopSpeedKn: topOf(calibrated.estimates.topSpeeds, impeller.id).speedKn }
+      : {}),
   }));
-  const upgrade = UPGRADE_STEPS_PCT.map((changePct) => ({ changePct, wot: pointResult(upgradeOperatingPoint(inst, changePct)) }));
+  const upgrade = UPGRADE_STEPS_PCT.map((changePct): UpgradeRow => {
+    const e = estimates.upgrade.find((u) => u.changePct === changePct);
+    const speed = e ? { speedKn: e.speedKn, speedGainPct: e.speedGainPct, ...(e.best ? { best: e.best } : {}) } : {};
+    return { changePct, wot: pointResult(upgradeOperatingPoint(inst, changePct)), ...speed };
+  });
   const rpmGains = RPM_GAINS.map((gainRpm): RpmGainRow => {
     const targetRpm = wot.nominal.speedRpm + gainRpm;
     const pct = powerChangeForRpm(inst, targetRpm);
@@ -122,9 +161,12 @@ export function analyseBoat(args: { boat: Boat; project: Project }): BoatResult 
     limits: limitsResult(boat.engine.limits),
     conditions: conditionsResult(boat),
     wot,
-    cruise: boat.cruise.map((c) => cruiseRow(c, inst, wot.nominal.speedRpm)),
+    cruise: boat.cruise.map((c, i) => cruiseRow(c, inst, wot.nominal.speedRpm, estimates.cruise[i])),
     alternatives,
     upgrade,
     rpmGains,
+    estimates,
+    speedGains: estimates.speedGains,
+    ...(calibrated ? { calibrated } : {}),
   };
 }

@@ -77,13 +77,17 @@ export interface UpgradeEstimate {
 export interface SpeedGainRow {
   readonly gainPct: number;
   readonly fittedChangePct?: number;
+  /** Match status of the fitted impeller after that change. */
+  readonly fittedStatus?: string;
+  readonly fittedStatusText?: string;
   readonly rematchedChangePct?: number;
   readonly rematchedImpellerId?: string;
 }
 
 export interface BoatEstimates {
-  /** 'calibrated' when the figures rest on sea trials (trialDates), else 'nominal'. */
+  /** 'calibrated' when the rpm and power figures rest on sea trials (trialDates), else 'nominal'. */
   readonly basis: 'calibrated' | 'nominal';
+  /** Trials the calibrated figures rest on (empty on the nominal basis). */
   readonly trialDates: readonly string[];
   readonly hull: HullResult;
   readonly wotSpeedKn: number;
@@ -140,10 +144,14 @@ function topSpeedRow(boat: Boat, p: WhatIfPoint): TopSpeedRow {
   };
 }
 
-/** Speed, fuel and upgrade estimates of one boat on its calibrated (or nominal) model. */
-export function boatEstimates(args: { boat: Boat; inst: Installation; calibration: Calibration }): BoatEstimates {
+/**
+ * Speed, fuel and upgrade estimates of one boat, on the nominal model (figures that sit beside the sheet's
+ * predicted WOT band) or on the sea-trial-calibrated one. The hull constant comes from trials either way.
+ */
+export function boatEstimates(args: { boat: Boat; inst: Installation; calibration: Calibration; basis: 'nominal' | 'calibrated' }): BoatEstimates {
   const { boat, calibration } = args;
-  const inst = calibratedBoatInstallation(args.inst, calibration);
+  const calibrated = args.basis === 'calibrated' && calibration.mode !== 'none';
+  const inst = calibrated ? calibratedBoatInstallation(args.inst, calibration) : args.inst;
   const measured = crouchConstantsFromTrials({ inst: args.inst, calibration, trials: boatTrials(boat), displacementKg: boat.hull.displacementKg });
   const hc = hullConstant({ hullType: boat.hull.type, statedConstant: boat.hull.crouchConstant, measured });
   const speed: SpeedBasis = { crouchConstant: hc.value, displacementKg: boat.hull.displacementKg };
@@ -166,14 +174,16 @@ export function boatEstimates(args: { boat: Boat; inst: Installation; calibratio
     const need = powerChangeForSpeedGain({ inst, impellers: boat.jet.impellers, gainPct });
     return {
       gainPct,
-      ...(need.fittedChangePct !== null ? { fittedChangePct: need.fittedChangePct } : {}),
+      ...(need.fittedChangePct !== null && need.fittedStatus !== null
+        ? { fittedChangePct: need.fittedChangePct, fittedStatus: need.fittedStatus, fittedStatusText: STATUS_WORDS[need.fittedStatus] }
+        : {}),
       ...(need.rematchedChangePct !== null ? { rematchedChangePct: need.rematchedChangePct, rematchedImpellerId: need.rematchedImpellerId! } : {}),
     };
   });
   const wotFuel = fuelFlow({ powerKw: fitted.powerKw, fuel: inst.engine.fuel, bsfcGPerKwh: inst.engine.bsfcGPerKwh });
-  const trialDates = calibration.residuals.filter((r) => r.usedInFit).map((r) => r.date);
+  const trialDates = calibrated ? calibration.residuals.filter((r) => r.usedInFit).map((r) => r.date) : [];
   return {
-    basis: calibration.mode === 'none' ? 'nominal' : 'calibrated',
+    basis: calibrated ? 'calibrated' : 'nominal',
     trialDates,
     hull: { crouchConstant: hc.value, source: hc.source, trialDates: hc.trialDates, note: hc.note, displacementKg: boat.hull.displacementKg },
     wotSpeedKn: fitted.speedKn,

@@ -4,3 +4,16 @@ export { analyseBoat, boatInstallation, RPM_GAINS, UPGRADE_STEPS_PCT, type BoatR
 export { defaultWallCharts, defaultChartConditions, DEFAULT_SITE, DEFAULT_CRUISE_FRACTIONS } from './defaults.ts';
 export { STATUS_WORDS, bandVerdict, isWarning, toleranceNote, worstStatus } from './status.ts';
 export type { PointResult, BandResult, ConditionsResult, CurveKeyNumbers, LimitsResult } from './results.ts';
+export { boatCalibration, boatTrials, calibratedBoatInstallation, calibrationResult, type CalibrationResult, type TrialRow } from './boatCalibration.ts';
+export {
+  boatEstimates,
+  FUEL_NOTE,
+  SPEED_GAINS_PCT,
+  SPEED_NOTE,
+  type BoatEstimates,
+  type CruiseEstimate,
+  type HullResult,
+  type SpeedGainRow,
+  type TopSpeedRow,
+  type UpgradeEstimate,
+} from './boatEstimates.ts';

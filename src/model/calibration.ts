@@ -43,7 +43,7 @@ export interface Calibration {
   readonly residuals: readonly TrialResidual[];
   /** True when the engine is a known point: the fit anchors its constant-torque line. */
   readonly anchoredConstantTorque: boolean;
-  /** Plain sentences: what was fitted and why, what could not be told apart. */
+  /** Plain sentences: what was assumed, what was left out, what could not be told apart and why. */
   readonly notes: readonly string[];
 }
 
@@ -128,21 +128,21 @@ function chooseFit(args: { inst: Installation; usable: readonly Row[]; leftOut: 
     const fit = fitLogLinear(usable.map((r) => point(r, r.impeller.id, false)));
     if (plausible(fit, reasons, 'with free ratings')) {
       const ratingFactors = Object.fromEntries([...fit.intercepts].map(([id, b]) => [id, Math.exp(b.value) / nominalKw.get(id)!]));
-      const notes = [...leftNote, `Exponent and each tried impeller’s rating fitted from ${usable.length} trials; the engine is taken as published, untried impellers as nominal.`];
+      const notes = [...leftNote, 'The engine is taken as published; untried impellers keep their nominal ratings.'];
       return { mode: 'exponentAndRatings', exponent: fit.slope, exponentSe: fit.slopeSe, powerFactor: 1, powerFactorSe: null, ratingFactors, notes };
     }
   }
   if (ids.size >= 2 && span(usable) >= MIN_RPM_SPAN && usable.length >= 3) {
     const fit = fitLogLinear(usable.map((r) => point(r, '', true)));
     if (plausible(fit, reasons, 'with nominal ratings')) {
-      const notes = [...leftNote, `Exponent and an engine power factor fitted from ${usable.length} trials of ${ids.size} impellers, ratings taken as nominal.`];
+      const notes = [...leftNote, 'Impeller ratings are taken as nominal.'];
       return { mode: 'exponentAndCondition', exponent: fit.slope, exponentSe: fit.slopeSe, ...factorOf(fit), ratingFactors: {}, notes };
     }
   } else {
     reasons.push(whyNoExponent(usable, ids.size));
   }
   const fit = fitLogLinear(usable.map((r) => point(r, '', true)), { slope: k0 });
-  const notes = [...leftNote, ...reasons, `Engine power factor fitted from ${usable.length} trial(s) with the family exponent ${k0}.`];
+  const notes = [...leftNote, ...reasons];
   return { mode: 'conditionOnly', exponent: k0, exponentSe: null, ...factorOf(fit), ratingFactors: {}, notes };
 }
 

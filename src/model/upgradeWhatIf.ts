@@ -6,7 +6,7 @@
  * Pass a calibrated installation (calibration.ts) to build on sea trials.
  */
 import { solveInstallation, type Installation } from './installation.ts';
-import type { OperatingPoint } from './operatingPoint.ts';
+import type { MatchStatus, OperatingPoint } from './operatingPoint.ts';
 import { crouchSpeedKn } from './speed.ts';
 import type { ImpellerSpec } from './types.ts';
 
@@ -95,6 +95,8 @@ export interface SpeedGainNeed {
   readonly targetPowerKw: number;
   /** Engine power change (%) with the fitted impeller; null when the limiter or table end stops it first. */
   readonly fittedChangePct: number | null;
+  /** Match status of the fitted impeller at that change (null with fittedChangePct). */
+  readonly fittedStatus: MatchStatus | null;
   /** Smallest change (%) with which some impeller of the family is matched and takes the target power. */
   readonly rematchedChangePct: number | null;
   readonly rematchedImpellerId: string | null;
@@ -121,6 +123,7 @@ export function powerChangeForSpeedGain(args: { inst: Installation; impellers: r
   return {
     targetPowerKw,
     fittedChangePct: fitted === null ? null : (fitted - 1) * 100,
+    fittedStatus: fitted === null ? null : solveInstallation(inst, { powerFactor: fitted }).status,
     rematchedChangePct: rematched === null ? null : (rematched.f - 1) * 100,
     rematchedImpellerId: rematched?.id ?? null,
   };

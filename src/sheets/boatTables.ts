@@ -1,6 +1,7 @@
 /** Tables shared by the boat sheets: fitted combination, cruise settings, alternative impellers. */
-import type { Boat, PowerUnit } from '../data/types.ts';
+import type { Boat, PowerUnit, SpeedUnit } from '../data/types.ts';
 import { isWarning, toleranceNote, type BoatResult, type CruiseRow } from '../analysis/index.ts';
+import { knToKmh, knToMph } from '../units.ts';
 import { numberText, powerBothText, powerText, rpmBandText, rpmText } from './kit/format.ts';
 import type { Cell, Column } from './kit/table.ts';
 import { INK, WARN } from './kit/style.ts';
@@ -37,24 +38,44 @@ const CRUISE_NOTES: Readonly<Record<CruiseRow['status'], string>> = {
   needsSpeedModel: 'needs a speed estimate (not yet computed)',
 };
 
-/** Cruise settings: what was asked, engine rpm and power, a note. */
-export function cruiseRows(boat: Boat, result: BoatResult, unit: PowerUnit): { columns: Column[]; rows: Cell[][] } {
+/** Boat speed in the site's unit, whole numbers (estimates: a decimal would claim too much). */
+export function speedText(speedKn: number, unit: SpeedUnit): string {
+  const v = unit === 'mph' ? knToMph(speedKn) : unit === 'km/h' ? knToKmh(speedKn) : speedKn;
+  return numberText(v, 0, 'boat speed');
+}
+
+/** Column header for estimated speeds: "Speed (kn, est.)". */
+export function speedHeader(unit: SpeedUnit, what = 'Speed'): string {
+  return `${what} (${unit}, est.)`;
+}
+
+/** Cruise settings: what was asked, engine rpm and power, estimated speed and fuel, a note. */
+export function cruiseRows(boat: Boat, result: BoatResult, unit: PowerUnit, speedUnit: SpeedUnit = 'kn'): { columns: Column[]; rows: Cell[][] } {
   return {
-    columns: [left('Cruise setting'), right('Asked'), right('Engine rpm'), right(`Power (${unit})`), left('Note')],
+    columns: [left('Cruise setting'), right('Asked'), right('Engine rpm'), right(`Power (${unit})`), right(speedHeader(speedUnit)), right('Fuel (L/h, est.)'), left('Note')],
     rows: result.cruise.map((row) => [
       row.label,
       cruiseAsked(row, boat, unit),
       row.speedRpm !== undefined ? rpmText(row.speedRpm) : '–',
       row.powerKw !== undefined ? powerText(row.powerKw, unit).replace(` ${unit}`, '') : '–',
+      row.speedKn !== undefined ? speedText(row.speedKn, speedUnit) : '–',
+      row.fuelLPerH !== undefined ? numberText(row.fuelLPerH, 0, 'fuel flow') : '–',
       CRUISE_NOTES[row.status] || '–',
     ]),
   };
 }
 
-/** Every impeller of the jet with its predicted WOT band and status. */
-export function alternativeRows(result: BoatResult, unit: PowerUnit): { columns: Column[]; rows: Cell[][] } {
+/** One sentence on where the speed and fuel estimates come from. */
+export function estimatesNote(result: BoatResult): string {
+  const e = result.estimates;
+  const bsfc = e.bsfcSource === 'engine' ? `${e.bsfcGPerKwh} g/kWh from the engine data` : `a typical ${e.bsfcGPerKwh} g/kWh`;
+  return `Speed and fuel are estimates. Speed: Crouch’s planing formula on shaft power and ${Math.round(e.hull.displacementKg)} kg loaded. ${e.hull.note} Fuel: ${bsfc} and ${e.fuelKgPerL} kg/L (typical).`;
+}
+
+/** Every impeller of the jet with its predicted WOT band, status and estimated top speed. */
+export function alternativeRows(result: BoatResult, unit: PowerUnit, speedUnit: SpeedUnit = 'kn'): { columns: Column[]; rows: Cell[][] } {
   return {
-    columns: [left('Impeller'), right('WOT band'), right('Nominal'), right(`Power (${unit})`), left('Status'), left('Within tolerance')],
+    columns: [left('Impeller'), right('WOT band'), right('Nominal'), right(`Power (${unit})`), right(speedHeader(speedUnit, 'Top')), left('Status'), left('Within tolerance')],
     rows: result.alternatives.map((a) => {
       const b = a.band;
       const warn = isWarning(b.nominal.status);
@@ -64,6 +85,7 @@ export function alternativeRows(result: BoatResult, unit: PowerUnit): { columns:
         { text: rpmBandText(b.low.speedRpm, b.high.speedRpm), weight: bold },
         { text: rpmText(b.nominal.speedRpm), weight: bold },
         { text: powerText(b.nominal.powerKw, unit).replace(` ${unit}`, ''), weight: bold },
+        { text: a.topSpeedKn !== undefined ? speedText(a.topSpeedKn, speedUnit) : '–', weight: bold },
         { text: b.nominal.statusText, weight: warn ? 'bold' : bold, colour: warn ? WARN : INK },
         toleranceNote({ nominal: b.nominal.status, low: b.low.status, high: b.high.status }) || '–',
       ];

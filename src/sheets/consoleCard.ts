@@ -14,6 +14,7 @@ import { stack, type Part } from './kit/stack.ts';
 import { INK, typeScale } from './kit/style.ts';
 import { table } from './kit/table.ts';
 import { findBoat, type SheetContext } from './context.ts';
+import { speedText } from './boatTables.ts';
 import { LayoutError } from './kit/errors.ts';
 
 type BoatRequest = Extract<SheetRequest, { kind: 'consoleCard' }>;
@@ -40,7 +41,10 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
   const box = frame.contentBox;
   const b = result.wot;
   const rangeText = rpmBandText(b.low.speedRpm, b.high.speedRpm);
-  const cruiseRows = result.cruise.filter((c) => c.speedRpm !== undefined && c.status === 'ok').map((c) => [c.label, { text: `${rpmText(c.speedRpm as number)} rpm`, weight: 'bold' as const }]);
+  const speedUnit = site.speedUnit;
+  const cruiseRows = result.cruise
+    .filter((c) => c.speedRpm !== undefined && c.status === 'ok')
+    .map((c) => [c.label, { text: `${rpmText(c.speedRpm as number)} rpm`, weight: 'bold' as const }, c.speedKn !== undefined ? `~${speedText(c.speedKn, speedUnit)} ${speedUnit}` : '–']);
   const figures: Part[] = [
     ({ x, y, widthMm }): Block => {
       const head = label({ x, y: y + ascentMm(type.heading, 'bold'), text: 'Expected WOT rpm', sizePt: type.heading, weight: 'bold', role: 'heading', where });
@@ -57,7 +61,7 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
       return { nodes: [head, node, ...sub.nodes], heightMm: linePitchMm(type.heading, 'bold') + linePitchMm(sizePt, 'bold') + sub.heightMm };
     },
     ...(cruiseRows.length > 0
-      ? [({ x, y, widthMm }: { x: number; y: number; widthMm: number }): Block => table({ x, y, maxWidthMm: widthMm, columns: [{ header: 'Cruise', align: 'left' }, { header: 'Engine', align: 'right' }], rows: cruiseRows, sizePt: type.body + 1, minSizePt: type.min, fullWidth: true, role: 'cruise-table', where })]
+      ? [({ x, y, widthMm }: { x: number; y: number; widthMm: number }): Block => table({ x, y, maxWidthMm: widthMm, columns: [{ header: 'Cruise', align: 'left' }, { header: 'Engine', align: 'right' }, { header: 'Speed (est.)', align: 'right' }], rows: cruiseRows, sizePt: type.body + 1, minSizePt: type.min, fullWidth: true, role: 'cruise-table', where })]
       : []),
   ];
   const advice: Part[] = [

@@ -6,7 +6,8 @@ import type { SheetRequest } from '../data/types.ts';
 import type { Scene } from '../scene/types.ts';
 import { analyseBoat, isWarning } from '../analysis/index.ts';
 import { boatChart } from './chart/boatChart.ts';
-import { alternativeRows, cruiseRows, fittedRows, wotHeadline } from './boatTables.ts';
+import { alternativeRows, cruiseRows, estimatesNote, fittedRows, wotHeadline } from './boatTables.ts';
+import { calibrationText, trialRows } from './trialTables.ts';
 import { assembleScene, assertFits } from './kit/assemble.ts';
 import { paragraph, type Block } from './kit/block.ts';
 import { cautionsBlock } from './kit/cautions.ts';
@@ -17,6 +18,10 @@ import { table, type Cell, type Column } from './kit/table.ts';
 import { findBoat, type SheetContext } from './context.ts';
 
 type BoatRequest = Extract<SheetRequest, { kind: 'specSheet' | 'consoleCard' | 'upgradeSheet' }>;
+
+/** Match-chart height: as designed, and the least it may shrink to for sea trials and notes. */
+const CHART_MAX_MM = 82;
+const CHART_MIN_MM = 45;
 
 /** A heading followed by a table, as one part. */
 export function tablePart(args: { heading: string; columns: Column[]; rows: Cell[][]; header?: boolean; sizePt: number; minSizePt: number; headingPt: number; role: string; where: string }): Part {
@@ -40,9 +45,12 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
   const warn = isWarning(result.wot.nominal.status);
   const common = { sizePt: type.body, minSizePt: type.min, headingPt: type.heading, where };
   const fitted = fittedRows(boat, result, unit);
-  const cruise = cruiseRows(boat, result, unit);
-  const alts = alternativeRows(result, unit);
-  const parts: Part[] = [
+  const speedUnit = site.speedUnit;
+  const cruise = cruiseRows(boat, result, unit, speedUnit);
+  const alts = alternativeRows(result, unit, speedUnit);
+  const trials = trialRows(result, boat.jet.family.tolerancePct);
+  const hiddenTrials = trials.hidden > 0 ? ` ${trials.hidden} older trial(s) not listed.` : '';
+  const parts = (chartMm: number): Part[] => [
     tablePart({ heading: 'Fitted combination', ...fitted, header: false, ...common, role: 'fitted-table' }),
     ({ x, y, widthMm }) => {
       const head = paragraph({ x, y, widthMm, text: wotHeadline(result, unit), sizePt: type.heading, weight: 'bold', colour: warn ? WARN : INK, role: 'wot-headline', where });
@@ -50,16 +58,30 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
       return { nodes: [...head.nodes, ...why.nodes], heightMm: head.heightMm + 0.5 + why.heightMm };
     },
     ({ x, y, widthMm }) => {
-      const chart = boatChart({ boat, result, box: { x, y, width: widthMm, height: 82 }, sizePt: type.small, powerUnitFirst: unit, where });
+      const chart = boatChart({ boat, result, box: { x, y, width: widthMm, height: chartMm }, sizePt: type.small, powerUnitFirst: unit, where });
       const notes = chart.notes.map((n) => `(${n.number}) ${n.text}`).join('  ');
-      const note = notes ? paragraph({ x, y: y + 83, widthMm, text: notes, sizePt: type.small, where }) : { nodes: [], heightMm: 0 };
-      return { nodes: [chart.node, ...note.nodes], heightMm: 83 + note.heightMm };
+      const note = notes ? paragraph({ x, y: y + chartMm + 1, widthMm, text: notes, sizePt: type.small, where }) : { nodes: [], heightMm: 0 };
+      return { nodes: [chart.node, ...note.nodes], heightMm: chartMm + 1 + note.heightMm };
     },
     tablePart({ heading: 'Cruise settings', ...cruise, ...common, role: 'cruise-table' }),
     tablePart({ heading: 'Every impeller of this jet on this boat', ...alts, ...common, role: 'alternatives-table' }),
+    ...(trials.rows.length > 0
+      ? [
+          tablePart({ heading: 'Sea trials', columns: trials.columns, rows: trials.rows, ...common, role: 'trials-table' }),
+        ]
+      : []),
+    ({ x, y, widthMm }) => {
+      const calibration = trials.rows.length > 0 ? `${calibrationText(result, speedUnit)}${hiddenTrials} ` : '';
+      return paragraph({ x, y, widthMm, text: `${calibration}${estimatesNote(result)}`, sizePt: type.small, role: 'estimates-note', where });
+    },
     ({ x, y, widthMm }) => cautionsBlock({ site, x, y, widthMm, sizePt: type.body, headingPt: type.heading, where }),
   ];
-  const laid = stack({ x: box.x, y: box.y, widthMm: box.width, gapMm: 4, parts });
+  // The chart gives up height when the tables, sea trials and notes need it (its figures are in the tables
+  // too), down to CHART_MIN_MM; below that the sheet needs larger paper.
+  const layout = (chartMm: number) => stack({ x: box.x, y: box.y, widthMm: box.width, gapMm: 4, parts: parts(chartMm) });
+  const first = layout(CHART_MAX_MM);
+  const over = first.bottomMm - (box.y + box.height);
+  const laid = over > 0 ? layout(Math.max(CHART_MIN_MM, CHART_MAX_MM - over)) : first;
   assertFits(box, laid.bottomMm, where);
   return assembleScene({
     frame,

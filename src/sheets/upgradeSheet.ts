@@ -18,12 +18,16 @@ import { stack, type Part } from './kit/stack.ts';
 import { INK, STROKE, WARN, typeScale } from './kit/style.ts';
 import { findBoat, type SheetContext } from './context.ts';
 import { tablePart } from './specSheet.ts';
+import { speedHeader, speedText } from './boatTables.ts';
 
 type BoatRequest = Extract<SheetRequest, { kind: 'upgradeSheet' }>;
 
 /** Power changes drawn on the chart (a subset of the table, so the curves stay apart). */
 const CHART_STEPS_PCT: readonly number[] = [0, 25, 50];
 const CHART_DASHES: readonly (readonly number[])[] = [[], [6, 1.6], [1.2, 1.2]];
+/** Chart height as designed, and the least it may shrink to when the tables and notes need the room. */
+const CHART_MAX_MM = 88;
+const CHART_MIN_MM = 60;
 
 /** Builds the upgrade-sheet scene. */
 export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
@@ -36,6 +40,9 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
   const frame = sheetFrame({ paper: request.paper, site, title: `${boat.name}: engine upgrade`, subtitle: `${boat.engine.label} · ${boat.jet.label} · impeller ${result.impellerLabel} kept`, dateIso: ctx.dateIso, type, where });
   const box = frame.contentBox;
   const common = { sizePt: type.body, minSizePt: type.min, headingPt: type.heading, where };
+  const speedUnit = site.speedUnit;
+  const label = (id: string) => result.alternatives.find((a) => a.impellerId === id)?.label ?? id;
+  const fittedTop = result.alternatives.find((a) => a.fitted === 'yes')?.topSpeedKn;
   const engines: EngineSeries[] = CHART_STEPS_PCT.map((pct, i) => ({
     id: `plus-${pct}`,
     label: pct === 0 ? 'As now' : `${percentText(pct)} power`,
@@ -44,33 +51,63 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
     dashMm: CHART_DASHES[i],
   }));
   const upgradeRows = [
-    ['As now', rpmText(result.wot.nominal.speedRpm), powerText(result.wot.nominal.powerKw, unit), result.wot.nominal.statusText],
+    ['As now', rpmText(result.wot.nominal.speedRpm), powerText(result.wot.nominal.powerKw, unit), fittedTop !== undefined ? speedText(fittedTop, speedUnit) : '–', result.wot.nominal.statusText, '–'],
     ...result.upgrade.map((u) => [
       percentText(u.changePct),
       rpmText(u.wot.speedRpm),
       powerText(u.wot.powerKw, unit),
+      u.speedKn !== undefined ? speedText(u.speedKn, speedUnit) : '–',
       { text: u.wot.statusText, weight: isWarning(u.wot.status) ? ('bold' as const) : ('regular' as const), colour: isWarning(u.wot.status) ? WARN : INK },
+      u.best ? `${label(u.best.impellerId)}: ${rpmText(u.best.wotRpm)} rpm, ${speedText(u.best.speedKn, speedUnit)} ${speedUnit}` : 'none matched',
     ]),
   ];
+  // One sentence per speed gain: the power change with the fitted impeller, and with the best re-match.
+  const speedGainText = result.speedGains
+    .map((g) => {
+      const status = g.fittedStatus && g.fittedStatus !== 'matched' ? ` (${g.fittedStatusText?.toLowerCase()})` : '';
+      const kept = g.fittedChangePct !== undefined ? `${percentText(g.fittedChangePct, { digits: 0 })} power with ${result.impellerLabel}${status}` : `not reachable with ${result.impellerLabel} below max rpm`;
+      const rematched = g.rematchedChangePct !== undefined && g.rematchedImpellerId !== undefined ? `${percentText(g.rematchedChangePct, { digits: 0 })} with ${label(g.rematchedImpellerId)} matched` : 'no impeller of this jet matched';
+      return `${percentText(g.gainPct)} top speed: ${kept}, or ${rematched}.`;
+    })
+    .join(' ');
   const gainRows = result.rpmGains.map((g) => [
     `+${g.gainRpm} rpm`,
     `${rpmText(g.targetRpm)} rpm`,
     g.status === 'ok' && g.powerChangePct !== undefined ? percentText(g.powerChangePct, { digits: 0 }) : { text: 'not reachable below max rpm', weight: 'bold' as const, colour: WARN },
   ]);
-  const parts: Part[] = [
+  const parts = (chartMm: number): Part[] => [
     ({ x, y, widthMm }) =>
       paragraph({ x, y, widthMm, text: `With the same impeller, more engine power raises WOT rpm only a little: the impeller takes power as rpm to the power ${boat.jet.family.exponent}, so x % more power gives roughly x/${boat.jet.family.exponent} % more rpm, less where the engine curve is flat. Check the new WOT rpm against the maximum (${rpmText(result.limits.maxRpm)} rpm).`, sizePt: type.body, where }),
     ({ x, y, widthMm }) => {
-      const chart = boatChart({ boat, result, box: { x, y, width: widthMm, height: 88 }, sizePt: type.small, powerUnitFirst: unit, engines, points: 'fitted', where });
+      const chart = boatChart({ boat, result, box: { x, y, width: widthMm, height: chartMm }, sizePt: type.small, powerUnitFirst: unit, engines, points: 'fitted', where });
       const notes = chart.notes.map((n) => `(${n.number}) ${n.text}`).join('  ');
-      const note = notes ? paragraph({ x, y: y + 89, widthMm, text: notes, sizePt: type.small, where }) : { nodes: [], heightMm: 0 };
-      return { nodes: [chart.node, ...note.nodes], heightMm: 89 + note.heightMm };
+      const note = notes ? paragraph({ x, y: y + chartMm + 1, widthMm, text: notes, sizePt: type.small, where }) : { nodes: [], heightMm: 0 };
+      return { nodes: [chart.node, ...note.nodes], heightMm: chartMm + 1 + note.heightMm };
     },
-    tablePart({ heading: `Engine power change with impeller ${result.impellerLabel}`, columns: [{ header: 'Power change', align: 'left' }, { header: 'WOT rpm', align: 'right' }, { header: `Power at WOT`, align: 'right' }, { header: 'Status', align: 'left' }], rows: upgradeRows, ...common, role: 'upgrade-table' }),
+    tablePart({
+      heading: `Engine power change with impeller ${result.impellerLabel}`,
+      columns: [
+        { header: 'Power change', align: 'left' },
+        { header: 'WOT rpm', align: 'right' },
+        { header: 'Power at WOT', align: 'right' },
+        { header: speedHeader(speedUnit, 'Top'), align: 'right' },
+        { header: 'Status', align: 'left' },
+        { header: 'Best impeller for the new power', align: 'left' },
+      ],
+      rows: upgradeRows,
+      ...common,
+      role: 'upgrade-table',
+    }),
     tablePart({ heading: 'Power needed for more WOT rpm', columns: [{ header: 'Gain', align: 'left' }, { header: 'Target WOT', align: 'right' }, { header: 'Power change needed', align: 'right' }], rows: gainRows, ...common, role: 'rpm-gain-table' }),
+    ({ x, y, widthMm }) =>
+      paragraph({ x, y, widthMm, text: `Speeds are estimates (Crouch’s planing formula, hull constant ${Math.round(result.estimates.hull.crouchConstant)}, ${result.estimates.hull.source}). ${speedGainText}`, sizePt: type.small, role: 'speed-gain-note', where }),
     ({ x, y, widthMm }) => cautionsBlock({ site, x, y, widthMm, sizePt: type.body, headingPt: type.heading, where }),
   ];
-  const laid = stack({ x: box.x, y: box.y, widthMm: box.width, gapMm: 4, parts });
+  // The chart gives up height first (its figures are in the table too); below CHART_MIN_MM the sheet needs larger paper.
+  const layout = (chartMm: number) => stack({ x: box.x, y: box.y, widthMm: box.width, gapMm: 4, parts: parts(chartMm) });
+  const first = layout(CHART_MAX_MM);
+  const over = first.bottomMm - (box.y + box.height);
+  const laid = over > 0 ? layout(Math.max(CHART_MIN_MM, CHART_MAX_MM - over)) : first;
   assertFits(box, laid.bottomMm, where);
   return assembleScene({
     frame,

@@ -20,7 +20,7 @@ function boatWithTrials(): Boat {
 function estimatesOf(b: Boat) {
   const inst = boatInstallation(b);
   const calibration = boatCalibration(b, inst);
-  return { calibration, est: boatEstimates({ boat: b, inst, calibration }) };
+  return { calibration, est: boatEstimates({ boat: b, inst, calibration, basis: 'calibrated' }), nominal: boatEstimates({ boat: b, inst, calibration, basis: 'nominal' }) };
 }
 
 describe('boatEstimates()', () => {
@@ -54,6 +54,18 @@ describe('boatEstimates()', () => {
     expect(est.hull.source).toBe('trial');
     expect(est.hull.crouchConstant).toBeCloseTo(170, 6);
     expect(est.cruise.every((c) => c.rangeWithReserveNm! > 0)).toBe(true);
+  });
+
+  it('keeps rpm figures on the nominal model when asked, with the trial-calibrated hull constant', () => {
+    const b = boatWithTrials();
+    const { est, nominal } = estimatesOf(b);
+    expect(nominal.basis).toBe('nominal');
+    expect(nominal.trialDates).toEqual([]);
+    expect(nominal.hull.crouchConstant).toBe(est.hull.crouchConstant);
+    const fitted = (e: typeof est) => e.topSpeeds.find((r) => r.fitted === 'yes')!;
+    // The nominal engine is 6 % stronger than the calibrated one, so it revs higher with the same impeller.
+    expect(fitted(nominal).wotRpm).toBeGreaterThan(fitted(est).wotRpm);
+    expect(fitted(est).wotRpm).toBeCloseTo(b.trials.find((t) => t.impellerId === 'b')!.wotRpm, 6);
   });
 
   it('gives upgrade rows with speed gains that grow with power, and a best impeller when one is matched', () => {

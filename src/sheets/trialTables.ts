@@ -1,0 +1,61 @@
+/** Sea-trial table and calibration sentence for the boat sheets (shown only when the boat has trials). */
+import type { SpeedUnit } from '../data/types.ts';
+import type { BoatResult } from '../analysis/index.ts';
+import { numberText, percentText, rpmText } from './kit/format.ts';
+import { INK, WARN } from './kit/style.ts';
+import type { Cell, Column } from './kit/table.ts';
+import { speedText } from './boatTables.ts';
+
+const left = (header: string): Column => ({ header, align: 'left' });
+const right = (header: string): Column => ({ header, align: 'right' });
+
+const TRIAL_STATUS: Readonly<Record<string, string>> = {
+  measured: '',
+  atLimiter: 'at limiter: rating is an upper bound',
+  offCurve: 'rpm outside the engine table',
+};
+
+/** Most trials a boat sheet lists (the latest by date); the calibration still uses all of them. */
+export const MAX_TRIAL_ROWS = 4;
+
+/** One row per sea trial (the latest few): measured and calibrated-model WOT rpm, residual, effective rating against nominal. */
+export function trialRows(result: BoatResult, tolerancePct: number): { columns: Column[]; rows: Cell[][]; hidden: number } {
+  const all = result.calibrated?.calibration.trials ?? [];
+  // Latest first by ISO date, then keep the table's order chronological.
+  const trials = [...all].sort((a, b) => (a.date < b.date ? 1 : a.date > b.date ? -1 : 0)).slice(0, MAX_TRIAL_ROWS).reverse();
+  return {
+    hidden: all.length - trials.length,
+    columns: [left('Trial'), left('Impeller'), right('WOT measured'), right('Model'), right('Residual'), right('Rating vs nominal'), left(`Within ± ${tolerancePct} %`)],
+    rows: trials.map((t) => {
+      const off = t.insideTolerance === 'no' && t.deviationPct !== undefined;
+      return [
+        t.date,
+        result.alternatives.find((a) => a.impellerId === t.impellerId)?.label ?? t.impellerId,
+        `${rpmText(t.wotRpm)} rpm`,
+        `${rpmText(t.predictedRpm)} rpm`,
+        `${Math.round(t.residualRpm) > 0 ? '+' : Math.round(t.residualRpm) < 0 ? '−' : ''}${numberText(Math.abs(Math.round(t.residualRpm)), 0, 'residual')} rpm`,
+        t.deviationPct !== undefined ? percentText(t.deviationPct, { digits: 1 }) : '–',
+        TRIAL_STATUS[t.status] || { text: off ? 'no' : 'yes', weight: off ? 'bold' : 'regular', colour: off ? WARN : INK },
+      ];
+    }),
+  };
+}
+
+/** "Calibrated to the sea trials of …": what was fitted, the fitted impeller's calibrated WOT rpm and top speed, caveats. */
+export function calibrationText(result: BoatResult, speedUnit: SpeedUnit): string {
+  const cal = result.calibrated;
+  if (!cal) return '';
+  const c = cal.calibration;
+  const se = (v: number | undefined, d: number) => (v === undefined ? '' : ` ± ${numberText(v, d, 'standard error')}`);
+  const k = `exponent ${numberText(c.exponent, 2, 'exponent')}${se(c.exponentSe, 2)}`;
+  const factor = `engine power factor ${numberText(c.powerFactor, 3, 'power factor')}${se(c.powerFactorSe, 3)}`;
+  const fittedWhat =
+    c.mode === 'conditionOnly' ? `${factor} fitted, ${k} kept from the jet data`
+    : c.mode === 'exponentAndCondition' ? `${k} and ${factor} fitted`
+    : c.mode === 'exponentAndRatings' ? `${k} and the tried impellers’ ratings fitted (${c.ratingFactors.map((r) => `${r.impellerId} ×${numberText(r.factor, 3, 'rating factor')}`).join(', ')})`
+    : 'nothing fitted';
+  const fitted = cal.estimates.topSpeeds.find((r) => r.fitted === 'yes');
+  const dates = c.trialDates.length > 0 ? c.trialDates.join(', ') : 'none usable';
+  const wot = fitted ? ` Fitted impeller, calibrated: WOT ${rpmText(fitted.wotRpm)} rpm, about ${speedText(fitted.speedKn, speedUnit)} ${speedUnit} (est.).` : '';
+  return `Calibrated to the sea trials of ${dates}: ${fittedWhat}.${wot} ${c.notes.join(' ')}`.trim();
+}
