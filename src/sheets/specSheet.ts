@@ -7,7 +7,7 @@ import type { Scene } from '../scene/types.ts';
 import { analyseBoat, isWarning } from '../analysis/index.ts';
 import { boatChart } from './chart/boatChart.ts';
 import { alternativeRows, cruiseRows, estimatesNote, fittedRows, wotHeadline } from './boatTables.ts';
-import { calibrationText, trialRows } from './trialTables.ts';
+import { calibrationText, MAX_TRIAL_ROWS, trialRows } from './trialTables.ts';
 import { assembleScene, assertFits } from './kit/assemble.ts';
 import { paragraph, type Block } from './kit/block.ts';
 import { cautionsBlock } from './kit/cautions.ts';
@@ -48,9 +48,8 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
   const speedUnit = site.speedUnit;
   const cruise = cruiseRows(boat, result, unit, speedUnit);
   const alts = alternativeRows(result, unit, speedUnit);
-  const trials = trialRows(result, boat.jet.family.tolerancePct);
-  const hiddenTrials = trials.hidden > 0 ? ` ${trials.hidden} older trial(s) not listed.` : '';
-  const parts = (chartMm: number): Part[] => [
+  const trialCount = result.calibrated?.calibration.trials.length ?? 0;
+  const parts = (chartMm: number, trials: ReturnType<typeof trialRows>): Part[] => [
     tablePart({ heading: 'Fitted combination', ...fitted, header: false, ...common, role: 'fitted-table' }),
     ({ x, y, widthMm }) => {
       const head = paragraph({ x, y, widthMm, text: wotHeadline(result, unit), sizePt: type.heading, weight: 'bold', colour: warn ? WARN : INK, role: 'wot-headline', where });
@@ -71,17 +70,25 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
         ]
       : []),
     ({ x, y, widthMm }) => {
-      const calibration = trials.rows.length > 0 ? `${calibrationText(result, speedUnit)}${hiddenTrials} ` : '';
+      const hidden = trials.hidden > 0 ? ` ${trials.hidden} older trial(s) not listed.` : '';
+      const calibration = trials.rows.length > 0 ? `${calibrationText(result, speedUnit)}${hidden} ` : '';
       return paragraph({ x, y, widthMm, text: `${calibration}${estimatesNote(result)}`, sizePt: type.small, role: 'estimates-note', where });
     },
     ({ x, y, widthMm }) => cautionsBlock({ site, x, y, widthMm, sizePt: type.body, headingPt: type.heading, where }),
   ];
   // The chart gives up height when the tables, sea trials and notes need it (its figures are in the tables
-  // too), down to CHART_MIN_MM; below that the sheet needs larger paper.
-  const layout = (chartMm: number) => stack({ x: box.x, y: box.y, widthMm: box.width, gapMm: 4, parts: parts(chartMm) });
-  const first = layout(CHART_MAX_MM);
-  const over = first.bottomMm - (box.y + box.height);
-  const laid = over > 0 ? layout(Math.max(CHART_MIN_MM, CHART_MAX_MM - over)) : first;
+  // too), down to CHART_MIN_MM; then older sea trials leave the table (down to the latest one); below that
+  // the sheet needs larger paper.
+  const layout = (shownTrials: number) => {
+    const trials = trialRows(result, boat.jet.family.tolerancePct, { maxRows: shownTrials });
+    const at = (chartMm: number) => stack({ x: box.x, y: box.y, widthMm: box.width, gapMm: 4, parts: parts(chartMm, trials) });
+    const first = at(CHART_MAX_MM);
+    const over = first.bottomMm - (box.y + box.height);
+    return over > 0 ? at(Math.max(CHART_MIN_MM, CHART_MAX_MM - over)) : first;
+  };
+  let shown = Math.min(trialCount, MAX_TRIAL_ROWS);
+  let laid = layout(shown);
+  while (laid.bottomMm > box.y + box.height + 1e-6 && shown > 1) laid = layout(--shown);
   assertFits(box, laid.bottomMm, where);
   return assembleScene({
     frame,

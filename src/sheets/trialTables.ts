@@ -19,10 +19,10 @@ const TRIAL_STATUS: Readonly<Record<string, string>> = {
 export const MAX_TRIAL_ROWS = 4;
 
 /** One row per sea trial (the latest few): measured and calibrated-model WOT rpm, residual, effective rating against nominal. */
-export function trialRows(result: BoatResult, tolerancePct: number): { columns: Column[]; rows: Cell[][]; hidden: number } {
+export function trialRows(result: BoatResult, tolerancePct: number, opts: { maxRows?: number } = {}): { columns: Column[]; rows: Cell[][]; hidden: number } {
   const all = result.calibrated?.calibration.trials ?? [];
   // Latest first by ISO date, then keep the table's order chronological.
-  const trials = [...all].sort((a, b) => (a.date < b.date ? 1 : a.date > b.date ? -1 : 0)).slice(0, MAX_TRIAL_ROWS).reverse();
+  const trials = [...all].sort((a, b) => (a.date < b.date ? 1 : a.date > b.date ? -1 : 0)).slice(0, opts.maxRows ?? MAX_TRIAL_ROWS).reverse();
   return {
     hidden: all.length - trials.length,
     columns: [left('Trial'), left('Impeller'), right('WOT measured'), right('Model'), right('Residual'), right('Rating vs nominal'), left(`Within ± ${tolerancePct} %`)],
