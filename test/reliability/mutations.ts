@@ -3,10 +3,9 @@
  * retype a value, perturb a number, cut the text, insert random characters. Each mutation carries
  * plain numbers that the apply step folds into range, so fast-check can shrink them.
  */
-import { readdirSync, readFileSync, statSync } from 'node:fs';
-import { join } from 'node:path';
 import fc from 'fast-check';
 import type { SourceFile } from '../../src/data/load.ts';
+import { demoFiles } from '../data/helpers.ts';
 
 /** Runs per property from an environment variable (MATCHBOOK_FUZZ_RUNS, MATCHBOOK_BUILD_FUZZ_RUNS), else fallback. */
 export function fuzzRuns(args: { name: string; fallback: number }): number {
@@ -14,15 +13,8 @@ export function fuzzRuns(args: { name: string; fallback: number }): number {
   return Number.isInteger(n) && n > 0 ? n : args.fallback;
 }
 
-const walk = (dir: string): string[] =>
-  readdirSync(dir)
-    .sort()
-    .flatMap((n) => (statSync(join(dir, n)).isDirectory() ? walk(join(dir, n)) : [join(dir, n)]));
-
-/** The demo data as loader input, paths "data/…". */
-export function demoSources(): SourceFile[] {
-  return walk('data').map((p) => ({ path: p.replace(/\\/g, '/'), text: readFileSync(p, 'utf8') }));
-}
+/** The demo data as loader input, paths "data/…" (the data tests' helper). */
+export const demoSources = demoFiles;
 
 export type Mutation =
   | { readonly kind: 'dropKey' | 'duplicateKey'; readonly at: number }
