@@ -11,6 +11,7 @@ import type { BuildCache } from './renderCache.ts';
 import { createRenderPool } from './renderPool.ts';
 import { writePages } from './runEleventy.ts';
 import { writeSiteFiles, type SiteCounts } from './siteFiles.ts';
+import { unprintableText } from './unprintable.ts';
 
 export interface BuildOptions {
   readonly dataDir: string;
@@ -39,6 +40,8 @@ export async function buildSite(opts: BuildOptions): Promise<BuildOutcome> {
   const loaded = await loadProject(opts.dataDir);
   const warningsText = formatDataErrors(loaded.warnings, 'warning');
   if (!loaded.ok) return { ok: false, errorsText: formatDataErrors(loaded.errors, 'problem'), warningsText };
+  const unprintable = unprintableText(loaded.project, { dataDir: opts.dataDir });
+  if (unprintable.length > 0) return { ok: false, errorsText: formatDataErrors(unprintable, 'problem'), warningsText };
   const dateIso = buildDateIso({ sourceDateEpoch: opts.sourceDateEpoch, issueDate: loaded.project.site.issueDate });
   const staging = createStaging(opts.outDir);
   const renderer = createRenderPool();
