@@ -1,8 +1,11 @@
 /**
  * The wall charts a project gets when its books do not ask for others: one per engine family and jet
- * unit that some boat pairs with it (every jet when no boat uses the family), under default conditions.
+ * unit that some boat pairs with it (every jet when no boat uses the family). Conditions come from the
+ * boats that pair the two: their most common drive line, and their water and site when all of them share
+ * one; anything the boats do not settle stays standard (direct drive, fresh water, a warm day at the coast).
  */
-import type { ChartConditions, EngineFamily, Project, SheetRequest } from '../data/types.ts';
+import type { Boat, ChartConditions, EngineFamily, Project, SheetRequest, Site, Water } from '../data/types.ts';
+import type { DriveLineSpec } from '../model/index.ts';
 import { engineCurve, FRESH_WATER_KG_M3 } from '../model/index.ts';
 import { hpToKw, kwToHp } from '../units.ts';
 import type { PowerUnit } from '../data/types.ts';
@@ -15,6 +18,12 @@ export const DEFAULT_SITE = Object.freeze({
   altitudeM: 0,
 });
 
+/** Direct drive with 3 % lost in couplings and bearings (DOMAIN.md: 0.95–0.98, common practice). */
+export const DEFAULT_DRIVE_LINE: DriveLineSpec = Object.freeze({ ratio: 1, efficiency: 0.97 });
+
+/** Fresh water at the reference density. */
+export const DEFAULT_WATER: Water = Object.freeze({ kind: 'fresh', densityKgM3: FRESH_WATER_KG_M3 });
+
 /** Fractions of the largest variant's peak power drawn as cruise lines. */
 export const DEFAULT_CRUISE_FRACTIONS: readonly number[] = [0.4, 0.6, 0.8];
 
@@ -26,13 +35,46 @@ function roundPowerKw(powerKw: number, unit: PowerUnit): number {
   return unit === 'kW' ? rounded : hpToKw(rounded);
 }
 
-/** Default chart conditions for a family: direct drive, 0.97 efficiency, fresh water, sea-level air. */
-export function defaultChartConditions(family: EngineFamily, powerUnit: PowerUnit): ChartConditions {
+/** The boats that pair an engine family with a jet unit, sorted by boat id. */
+export function pairingBoats(project: Pick<Project, 'boats'>, engineFamilyId: string, jetId: string): Boat[] {
+  return project.boats.filter((b) => b.engineFamilyId === engineFamilyId && b.jetId === jetId).sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
+}
+
+const sameDriveLine = (a: DriveLineSpec, b: DriveLineSpec): boolean => a.ratio === b.ratio && a.efficiency === b.efficiency;
+const sameWater = (a: Water, b: Water): boolean => a.kind === b.kind && a.densityKgM3 === b.densityKgM3;
+const sameSite = (a: Site, b: Site): boolean =>
+  a.label === b.label &&
+  a.altitudeM === b.altitudeM &&
+  a.ambient.pressureKpa === b.ambient.pressureKpa &&
+  a.ambient.airTempC === b.ambient.airTempC &&
+  a.ambient.relativeHumidityPct === b.ambient.relativeHumidityPct;
+
+/** The drive line most of the boats use; a tie goes to the one whose first boat (by id) comes first. */
+function commonDriveLine(boats: readonly Boat[]): DriveLineSpec {
+  let best: { driveLine: DriveLineSpec; count: number } | undefined;
+  for (const boat of boats) {
+    const count = boats.filter((b) => sameDriveLine(b.driveLine, boat.driveLine)).length;
+    // Boats come sorted by id, so the first boat seen with a drive line wins a tie.
+    if (!best || count > best.count) best = { driveLine: boat.driveLine, count };
+  }
+  return best ? { ratio: best.driveLine.ratio, efficiency: best.driveLine.efficiency } : DEFAULT_DRIVE_LINE;
+}
+
+/** The value every boat shares, else the fallback. */
+function shared<T>(values: readonly T[], same: (a: T, b: T) => boolean, fallback: T): T {
+  return values.length > 0 && values.every((v) => same(v, values[0])) ? values[0] : fallback;
+}
+
+/**
+ * Default chart conditions for a family drawn against a jet, taken from the boats that pair them (pass
+ * none for standard conditions); cruise lines at 40/60/80 % of the largest variant's peak power (kW).
+ */
+export function defaultChartConditions(family: EngineFamily, powerUnit: PowerUnit, boats: readonly Boat[] = []): ChartConditions {
   const peakKw = Math.max(...family.variants.map((v) => curveKeyNumbers(engineCurve(v)).peakPowerKw));
   return {
-    driveLine: { ratio: 1, efficiency: 0.97 },
-    water: { kind: 'fresh', densityKgM3: FRESH_WATER_KG_M3 },
-    site: DEFAULT_SITE,
+    driveLine: commonDriveLine(boats),
+    water: shared(boats.map((b) => b.water), sameWater, DEFAULT_WATER),
+    site: shared<Site>(boats.map((b) => b.site), sameSite, DEFAULT_SITE),
     cruisePowersKw: DEFAULT_CRUISE_FRACTIONS.map((f) => roundPowerKw(f * peakKw, powerUnit)),
   };
 }
@@ -42,12 +84,11 @@ export function defaultWallCharts(project: Project): SheetRequest[] {
   return project.engines.flatMap((family) => {
     const paired = new Set(project.boats.filter((b) => b.engineFamilyId === family.id).map((b) => b.jetId));
     const jets = paired.size > 0 ? project.jets.filter((j) => paired.has(j.id)) : project.jets;
-    const conditions = defaultChartConditions(family, project.site.powerUnitFirst);
     return jets.map((jet) => ({
       kind: 'wallChart' as const,
       engineFamilyId: family.id,
       jetId: jet.id,
-      conditions,
+      conditions: defaultChartConditions(family, project.site.powerUnitFirst, pairingBoats(project, family.id, jet.id)),
       paper: { size: 'A3' as const, orientation: 'landscape' as const, bleedMm: 0 },
     }));
   });

@@ -1,12 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import type { Paper, SheetRequest } from '../../src/data/types.ts';
-import { chartInstallation, defaultWallCharts, boatInstallation } from '../../src/analysis/index.ts';
+import { defaultWallCharts, boatInstallation } from '../../src/analysis/index.ts';
 import { solveInstallation } from '../../src/model/index.ts';
 import { renderSvg } from '../../src/render/index.ts';
 import { LayoutError, sheetScene, sheetSlug } from '../../src/sheets/index.ts';
 import { boxesOverlap, boxInside } from '../../src/sheets/kit/boxes.ts';
 import { MIN_STROKE_MM } from '../../src/sheets/kit/style.ts';
-import { kwToPower } from '../../src/sheets/kit/units.ts';
 import { boat, family, jet, project } from './fixtures/demoProject.ts';
 import { leaves, markBox, scaleFromTicks, texts } from './sceneWalk.ts';
 
@@ -62,40 +61,7 @@ describe.each(requests.map((r) => [name(r), r] as const))('sheetScene() for %s',
   });
 });
 
-describe('wall chart', () => {
-  const request = defaultWallCharts(project)[0] as Extract<SheetRequest, { kind: 'wallChart' }>;
-  const scene = sheetScene(request, ctx);
-
-  it('has one absorption series and one tolerance band per impeller', () => {
-    const curves = new Set(leaves(scene).filter((n) => n.role === 'absorption-curve').map((n) => n.key));
-    const bands = new Set(leaves(scene).filter((n) => n.role === 'tolerance-band').map((n) => n.key));
-    expect([...curves].sort()).toEqual(jet.impellers.map((i) => `impeller:${i.id}`));
-    expect(bands.size).toBe(jet.impellers.length);
-  });
-
-  it('draws every operating point within 0.1 mm of where the model and the printed axes put it', () => {
-    const x = scaleFromTicks(scene, 'x');
-    const y = scaleFromTicks(scene, 'left');
-    const points = leaves(scene).filter((n) => n.role === 'operating-point');
-    expect(points).toHaveLength(family.variants.length * jet.impellers.length);
-    for (const variant of family.variants) {
-      for (const impeller of jet.impellers) {
-        const p = solveInstallation(chartInstallation({ variant, jet, impeller, conditions: request.conditions }));
-        const node = points.find((n) => n.key === `impeller:${impeller.id}|engine:${variant.variantId}`)!;
-        const box = markBox(node)!;
-        expect(Math.abs(box.x + box.width / 2 - x(p.speedRpm))).toBeLessThan(0.1);
-        expect(Math.abs(box.y + box.height / 2 - y(kwToPower(p.powerKw, 'kW')))).toBeLessThan(0.1);
-      }
-    }
-  });
-
-  it('names the over-revving and lugging pairings in words', () => {
-    const table = texts(scene).filter((t) => t.role === 'table-cell').map((t) => t.text);
-    // In the invented data S250 with the lightest impeller reaches the 5400 rpm limiter.
-    expect(table).toContain('Too light: over-revs');
-    expect(table).toContain('Too heavy: lugs');
-  });
-});
+// The wall chart's own checks (panels, shared scales, points, windows, table) are in wallChart.test.ts.
 
 describe('boat sheets', () => {
   it('marks the fitted WOT point where the model puts it on the spec sheet', () => {

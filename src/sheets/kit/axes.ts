@@ -19,13 +19,31 @@ function yLabelRoomMm(sizePt: number): number {
   return measureTextMm({ text: '88888', sizePt, weight: 'regular' });
 }
 
-/** The plot area inside a chart box, leaving room for ticks, tick labels and axis titles. */
-export function chartArea(box: Box, sizePt: number): Box {
-  const side = TICK_MM + GAP_MM + yLabelRoomMm(sizePt) + GAP_MM + linePitchMm(sizePt);
+/**
+ * Which power axes carry tick labels and a title. Small multiples label only the outer sides of a row;
+ * the inner sides keep their tick marks (so every panel can be read back from its ticks) but no words.
+ */
+export interface AxisSides {
+  readonly left: boolean;
+  readonly right: boolean;
+}
+
+const BOTH_SIDES: AxisSides = { left: true, right: true };
+
+/** Width (mm) one power axis takes beside the plot: ticks only, or ticks, labels and title. */
+export function powerAxisWidthMm(sizePt: number, labelled: boolean): number {
+  return labelled ? TICK_MM + GAP_MM + yLabelRoomMm(sizePt) + GAP_MM + linePitchMm(sizePt) : TICK_MM + GAP_MM;
+}
+
+/** The plot area inside a chart box, leaving room for ticks, tick labels, axis titles and a top strip (mm). */
+export function chartArea(box: Box, sizePt: number, opts: { sides?: AxisSides; topMm?: number } = {}): Box {
+  const sides = opts.sides ?? BOTH_SIDES;
+  const left = powerAxisWidthMm(sizePt, sides.left);
+  const right = powerAxisWidthMm(sizePt, sides.right);
   const bottom = TICK_MM + GAP_MM + linePitchMm(sizePt) * 2 + GAP_MM;
   // Room above the plot for annotation names (window, rev limit).
-  const top = linePitchMm(sizePt, 'bold') + 1.5;
-  return { x: box.x + side, y: box.y + top, width: box.width - 2 * side, height: box.height - top - bottom };
+  const top = opts.topMm ?? linePitchMm(sizePt, 'bold') + 1.5;
+  return { x: box.x + left, y: box.y + top, width: box.width - left - right, height: box.height - top - bottom };
 }
 
 /** Grid lines drawn under the data. */
@@ -44,9 +62,10 @@ export function chartGrid(scales: PlotScales): SceneNode {
 }
 
 /** Frame, ticks, tick labels and titles drawn over the data. */
-export function chartAxes(scales: PlotScales, args: { sizePt: number; where: string }): SceneNode {
+export function chartAxes(scales: PlotScales, args: { sizePt: number; where: string; sides?: AxisSides }): SceneNode {
   const { area } = scales;
   const { sizePt, where } = args;
+  const sides = args.sides ?? BOTH_SIDES;
   const nodes: SceneNode[] = [{ type: 'rect', role: 'plot-frame', x: area.x, y: area.y, width: area.width, height: area.height, stroke: stroke(INK, STROKE.axis) }];
   const bottom = area.y + area.height;
   const right = area.x + area.width;
@@ -66,6 +85,7 @@ export function chartAxes(scales: PlotScales, args: { sizePt: number; where: str
       const x = side === 'left' ? area.x : right;
       const dir = side === 'left' ? -1 : 1;
       nodes.push(tick(`${side}:${t}`, x, y, x + dir * TICK_MM, y));
+      if (!sides[side]) continue;
       const node = label({ x: x + dir * (TICK_MM + GAP_MM), y: y + asc * 0.35, text: String(t), sizePt, anchor: side === 'left' ? 'end' : 'start', role: `tick-label-${side}`, where });
       if (node.widthMm > room) throw new LayoutError(where, `the power tick label "${t}" is wider than the axis margin`);
       nodes.push(node);
@@ -78,7 +98,7 @@ export function chartAxes(scales: PlotScales, args: { sizePt: number; where: str
   nodes.push(label({ x: area.x + area.width / 2, y: xTitleY, text: 'Engine speed (rpm)', sizePt, weight: 'bold', anchor: 'middle', colour: INK, role: 'axis-title', where }));
   const titleOffset = TICK_MM + GAP_MM + room + GAP_MM;
   const midY = area.y + area.height / 2;
-  nodes.push(label({ x: area.x - titleOffset - linePitchMm(sizePt) + asc, y: midY, text: `Power (${scales.leftUnit})`, sizePt, weight: 'bold', anchor: 'middle', rotateDeg: 90, role: 'axis-title', where }));
-  nodes.push(label({ x: right + titleOffset + asc, y: midY, text: `Power (${scales.rightUnit})`, sizePt, anchor: 'middle', rotateDeg: 90, colour: INK_SOFT, role: 'axis-title', where }));
+  if (sides.left) nodes.push(label({ x: area.x - titleOffset - linePitchMm(sizePt) + asc, y: midY, text: `Power (${scales.leftUnit})`, sizePt, weight: 'bold', anchor: 'middle', rotateDeg: 90, role: 'axis-title', where }));
+  if (sides.right) nodes.push(label({ x: right + titleOffset + asc, y: midY, text: `Power (${scales.rightUnit})`, sizePt, anchor: 'middle', rotateDeg: 90, colour: INK_SOFT, role: 'axis-title', where }));
   return { type: 'group', role: 'chart-axes', children: nodes };
 }

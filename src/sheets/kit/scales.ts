@@ -25,12 +25,16 @@ export interface PlotScales {
 /** Aim for one labelled tick every ~22 mm: dense enough to read values, sparse enough to stay legible. */
 const MM_PER_TICK = 22;
 
-/** Scales for a plot area; the power domain is widened to round values in the left unit, rpm kept as asked. */
+/**
+ * Scales for a plot area; rpm kept as asked, the power domain widened to round values in the left unit
+ * unless `nicePower` is false (ticks are round either way).
+ */
 export function plotScales(args: {
   area: Box;
   rpmDomain: readonly [number, number];
   powerKwDomain: readonly [number, number];
   powerUnitFirst: PowerUnit;
+  nicePower?: boolean;
 }): PlotScales {
   const { area } = args;
   const leftUnit = args.powerUnitFirst;
@@ -40,8 +44,8 @@ export function plotScales(args: {
     .range([area.x, area.x + area.width]);
   const yLeft = scaleLinear()
     .domain([kwToPower(args.powerKwDomain[0], leftUnit), kwToPower(args.powerKwDomain[1], leftUnit)])
-    .range([area.y + area.height, area.y])
-    .nice(yTickCount(area));
+    .range([area.y + area.height, area.y]);
+  if (args.nicePower ?? true) yLeft.nice(yTickCount(area));
   const [l0, l1] = yLeft.domain();
   const y = scaleLinear()
     .domain([powerToKw(l0, leftUnit), powerToKw(l1, leftUnit)])

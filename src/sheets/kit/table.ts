@@ -14,6 +14,12 @@ export interface Column {
   readonly align: 'left' | 'right';
 }
 
+/** A header over consecutive columns (a column group); an empty header leaves its columns without one. */
+export interface ColumnGroup {
+  readonly header: string;
+  readonly span: number;
+}
+
 export type Cell = string | { readonly text: string; readonly weight?: FontWeight; readonly colour?: Colour };
 
 const PAD_MM = 1.6;
@@ -48,6 +54,8 @@ export function table(args: {
   fullWidth?: boolean;
   /** Default true; false for item/value lists whose first column says what each row is. */
   header?: boolean;
+  /** Group headers set over the column headers, spans summing to the column count. */
+  groups?: readonly ColumnGroup[];
   role?: string;
   where: string;
 }): Block & { widthMm: number; sizePt: number } {
@@ -56,8 +64,24 @@ export function table(args: {
       throw new LayoutError(args.where, `a table row has ${row.length} cells, expected ${args.columns.length}`);
     }
   }
+  const groups = args.groups ?? [];
+  if (groups.length > 0 && groups.reduce((a, g) => a + g.span, 0) !== args.columns.length) {
+    throw new LayoutError(args.where, `the column groups span ${groups.reduce((a, g) => a + g.span, 0)} columns, expected ${args.columns.length}`);
+  }
+  // A group header wider than its columns widens the group's last column.
+  const measure = (size: number): number[] => {
+    const w = columnWidths(args.columns, args.rows, size, args.header ?? true);
+    let first = 0;
+    for (const g of groups) {
+      const need = measureTextMm({ text: g.header, sizePt: size, weight: 'bold' }) + 2 * PAD_MM;
+      const have = w.slice(first, first + g.span).reduce((a, b) => a + b, 0);
+      if (g.header !== '' && need > have) w[first + g.span - 1] += need - have;
+      first += g.span;
+    }
+    return w;
+  };
   let sizePt = args.sizePt;
-  let widths = columnWidths(args.columns, args.rows, sizePt, args.header ?? true);
+  let widths = measure(sizePt);
   let total = widths.reduce((a, b) => a + b, 0);
   if (total > args.maxWidthMm) {
     // Text width is proportional to size and padding is fixed, so one step lands on the size that fits
@@ -67,7 +91,7 @@ export function table(args: {
     if (!(sizePt >= args.minSizePt)) {
       throw new LayoutError(args.where, `the table needs ${total.toFixed(0)} mm at ${args.sizePt} pt but has ${args.maxWidthMm.toFixed(0)} mm, and would need type under ${args.minSizePt} pt; use wider paper or fewer columns`);
     }
-    widths = columnWidths(args.columns, args.rows, sizePt, args.header ?? true);
+    widths = measure(sizePt);
     total = widths.reduce((a, b) => a + b, 0);
   }
   if (args.fullWidth && total < args.maxWidthMm) {
@@ -99,14 +123,25 @@ export function table(args: {
     });
   };
   const withHeader = args.header ?? true;
-  if (withHeader) emitRow(args.columns.map((c) => c.header), args.y, true);
-  const bodyTop = withHeader ? args.y + rowPitch : args.y;
+  const groupRows = groups.length > 0 ? 1 : 0;
+  let first = 0;
+  for (const g of groups) {
+    if (g.header !== '') {
+      const right = lefts[first + g.span - 1] + widths[first + g.span - 1];
+      nodes.push(label({ x: lefts[first] + PAD_MM, y: args.y + baselineOffset, text: g.header, sizePt, weight: 'bold', role: 'table-group-header', where: args.where }));
+      nodes.push({ type: 'path', role: 'table-group-rule', segments: [{ op: 'M', x: lefts[first] + PAD_MM, y: args.y + rowPitch }, { op: 'L', x: right - PAD_MM, y: args.y + rowPitch }], stroke: stroke(INK, STROKE.rule) });
+    }
+    first += g.span;
+  }
+  const headerTop = args.y + groupRows * rowPitch;
+  if (withHeader) emitRow(args.columns.map((c) => c.header), headerTop, true);
+  const bodyTop = withHeader ? headerTop + rowPitch : headerTop;
   args.rows.forEach((row, r) => {
     const top = bodyTop + r * rowPitch;
     if (r % 2 === 1) nodes.push({ type: 'rect', role: 'table-zebra', x: args.x, y: top, width: total, height: rowPitch, fill: { colour: ZEBRA } });
     emitRow(row, top, false);
   });
-  const heightMm = rowPitch * (args.rows.length + (withHeader ? 1 : 0));
+  const heightMm = rowPitch * (args.rows.length + (withHeader ? 1 : 0) + groupRows);
   const line = (y: number, w: number): SceneNode => ({ type: 'path', role: 'table-rule', segments: [{ op: 'M', x: args.x, y }, { op: 'L', x: args.x + total, y }], stroke: stroke(INK, w) });
   nodes.push(line(args.y, STROKE.rule), ...(withHeader ? [line(bodyTop, STROKE.rule)] : []), line(args.y + heightMm, STROKE.rule));
   return { nodes: [{ type: 'group', role: args.role ?? 'table', children: nodes }], heightMm, widthMm: total, sizePt };
