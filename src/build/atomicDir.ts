@@ -5,7 +5,7 @@
  * starts from an empty folder. Renames within one parent folder stay on one file system, so each
  * step is atomic.
  */
-import { existsSync, mkdtempSync, readdirSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, mkdtempSync, readdirSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import { basename, dirname, join, resolve } from 'node:path';
 import { homedir } from 'node:os';
 
@@ -41,6 +41,7 @@ export function checkOutputFolder(args: { outDir: string; dataDir: string }): vo
 /** Creates an empty staging folder beside outDir (".out-build-XXXXXX" for "out"). */
 export function createStaging(outDir: string): string {
   const out = resolve(outDir);
+  mkdirSync(dirname(out), { recursive: true });
   const staging = mkdtempSync(join(dirname(out), `.${basename(out)}-build-`));
   writeFileSync(join(staging, OUTPUT_MARKER), 'Written by matchbook; the whole folder is replaced on each build.\n');
   return staging;
