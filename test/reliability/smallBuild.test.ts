@@ -91,6 +91,24 @@ describe('hostile text in names and notes', () => {
   });
 });
 
+describe('ids that try to leave the output folder', () => {
+  it.each([
+    ['a climb out with ../', '../../reliability-escape-7q', 3, 5],
+    ['an absolute path', '/tmp/reliability-escape-7q', 3, 5],
+  ])('%s is refused as data (exit 1) and nothing is written anywhere', async (_what, id, line, column) => {
+    const dir = join(root, `id-${line}-${id.length}`);
+    writeSmallData(join(dir, 'data'));
+    const file = join(dir, 'data/boats/light-boat.yaml');
+    writeFileSync(file, readFileSync(file, 'utf8').replace('id: light-boat', `id: ${id}`));
+    const run = await matchbook(['build', '--data', 'data', '--out', 'site/out'], { cwd: dir, env: ENV });
+    expect(run.status).toBe(1);
+    expect(run.stderr).toContain(`data/boats/light-boat.yaml:${line}:${column} id must be a lower-case id`);
+    expect(readdirSync(dir)).toEqual(['data']);
+    for (const near of [root, dirname(root), '/tmp']) expect(readdirSync(near).filter((n) => n.includes('reliability-escape-7q'))).toEqual([]);
+    rmSync(dir, { recursive: true });
+  });
+});
+
 describe('fits that over-rev or lug', () => {
   const sheetText = (slug: string) => folded(pdfPages(join(out, `sheets/${slug}.pdf`)).join(' '));
 

@@ -1,0 +1,127 @@
+/**
+ * Two builds of the demo data through the real command, in different folders, from different working
+ * folders, more than a second apart: the trees are byte-identical, SOURCE_DATE_EPOCH sets the printed
+ * date, no built file shows NaN, Infinity, undefined or null where a number belongs, and every page
+ * and every sheet (HTML, SVG, each PDF page) carries the cautions.
+ */
+import { cpSync } from 'node:fs';
+import { join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { BUILT_IN_CAUTIONS } from '../../src/sheets/kit/cautions.ts';
+import { matchbook } from './cli.ts';
+import { removeDir, tempDir } from './corpus.ts';
+import { numbersIn } from './mutations.ts';
+import { folded, pdfPages, tree, visibleText } from './outputTree.ts';
+
+/** 1767225600 s after 1970-01-01 UTC is 2026-01-01 (20454 days × 86400 s). */
+const ENV = { SOURCE_DATE_EPOCH: '1767225600' };
+const EPOCH_DATE = '2026-01-01';
+
+const first = tempDir('demo-a');
+const second = tempDir('demo-b');
+let a: Map<string, Buffer>;
+let b: Map<string, Buffer>;
+
+async function buildIn(dir: string, cwd: string): Promise<Map<string, Buffer>> {
+  cpSync('data', join(dir, 'data'), { recursive: true });
+  // Relative paths from a working folder that differs between the two builds.
+  const run = await matchbook(['build', '--data', 'data', '--out', 'site/out'], { cwd, env: ENV });
+  if (run.status !== 0) throw new Error(`demo build failed:\n${run.stderr}`);
+  return tree(join(dir, 'site', 'out'));
+}
+
+beforeAll(async () => {
+  a = await buildIn(first, first);
+  await new Promise((done) => setTimeout(done, 1100)); // the clock moves on by more than a second
+  b = await buildIn(second, second);
+});
+afterAll(() => {
+  removeDir(first);
+  removeDir(second);
+});
+
+const text = (path: string) => a.get(path)!.toString('utf8');
+const of = (ext: string) => [...a.keys()].filter((p) => p.endsWith(ext));
+
+describe('two builds of the same data', () => {
+  it('give byte-identical trees of SVG, PNG, PDF, HTML and JSON', () => {
+    expect([...b.keys()]).toEqual([...a.keys()]);
+    for (const ext of ['.svg', '.png', '.pdf', '.html', '.json']) expect(of(ext).length, ext).toBeGreaterThan(0);
+    const differing = [...a].filter(([path, bytes]) => Buffer.compare(bytes, b.get(path)!) !== 0).map(([path]) => path);
+    expect(differing).toEqual([]);
+  });
+
+  it('print the date SOURCE_DATE_EPOCH gives, not the clock or the issue date', () => {
+    expect(visibleText(text('index.html'))).toContain(EPOCH_DATE);
+    expect(visibleText(text('sheets/spec-ember-reach.svg'))).toContain(`Issued ${EPOCH_DATE}`);
+    expect(folded(pdfPages(join(first, 'site/out/sheets/spec-ember-reach.pdf')).join(' '))).toContain(`Issued ${EPOCH_DATE}`);
+    expect(visibleText(text('sheets/spec-ember-reach.svg'))).not.toContain('Issued 2026-11-02');
+  });
+});
+
+/** Words that must never stand where a number is printed (matched as whole words). */
+const NONSENSE = /\b(NaN|-?Infinity|undefined|null)\b/;
+
+describe('no nonsense on paper', () => {
+  it('no HTML page, SVG sheet or PDF page shows NaN, Infinity, undefined or null', () => {
+    const found: string[] = [];
+    for (const path of [...of('.html'), ...of('.svg')]) {
+      const m = NONSENSE.exec(visibleText(text(path)));
+      if (m) found.push(`${path}: ${m[0]}`);
+    }
+    for (const path of of('.pdf')) {
+      pdfPages(join(first, 'site/out', path)).forEach((page, i) => {
+        const m = NONSENSE.exec(page);
+        if (m) found.push(`${path} page ${i + 1}: ${m[0]}`);
+      });
+    }
+    expect(found).toEqual([]);
+  });
+
+  it('no SVG coordinate or attribute holds NaN or Infinity', () => {
+    for (const path of of('.svg')) expect(text(path), path).not.toMatch(/NaN|Infinity|undefined/);
+  });
+
+  it('every results JSON file holds finite numbers only, and no null or missing value', () => {
+    const files = of('.json').filter((p) => p.startsWith('results/'));
+    expect(files.length).toBe(9); // six boats, three engine families
+    for (const path of files) {
+      const raw = text(path);
+      expect(raw, path).not.toMatch(/\bnull\b|NaN|Infinity/);
+      const value = JSON.parse(raw) as unknown;
+      expect(numbersIn(value).filter((n) => !Number.isFinite(n.value)), path).toEqual([]);
+    }
+  });
+});
+
+describe('cautions', () => {
+  // The three points every sheet must make (DOMAIN.md, "Cautions that belong on every sheet").
+  const essentials = [/sea trial/i, /maximum rpm/i, /qualified marine technician/i, /instructions/i, /regulations/i];
+  const carries = (where: string, body: string) => {
+    for (const caution of BUILT_IN_CAUTIONS) expect(body, `${where} lacks: ${caution}`).toContain(caution);
+    for (const e of essentials) expect(body, where).toMatch(e);
+  };
+
+  it('appear on every HTML page', () => {
+    const pages = of('.html');
+    expect(pages.length).toBeGreaterThanOrEqual(14);
+    for (const page of pages) carries(page, visibleText(text(page)));
+  });
+
+  it('appear on every SVG sheet', () => {
+    const sheets = of('.svg').filter((p) => p.startsWith('sheets/'));
+    expect(sheets.length).toBe(27);
+    for (const sheet of sheets) carries(sheet, visibleText(text(sheet)));
+  });
+
+  it('appear on every page of every PDF, single sheets and books', () => {
+    let pages = 0;
+    for (const path of of('.pdf')) {
+      pdfPages(join(first, 'site/out', path)).forEach((page, i) => {
+        pages++;
+        carries(`${path} page ${i + 1}`, folded(page));
+      });
+    }
+    expect(pages).toBeGreaterThanOrEqual(27 + 15);
+  });
+});
