@@ -20,8 +20,9 @@ function yLabelRoomMm(sizePt: number): number {
 }
 
 /**
- * Which power axes carry tick labels and a title. Small multiples label only the outer sides of a row;
- * the inner sides keep their tick marks (so every panel can be read back from its ticks) but no words.
+ * Which power axes carry tick labels and a title. Small multiples label only the outer sides of a row.
+ * An unlabelled left side keeps its tick marks (on the grid lines, so every panel can still be read back
+ * from its own ticks); an unlabelled right side draws nothing, as its other-unit ticks miss the grid.
  */
 export interface AxisSides {
   readonly left: boolean;
@@ -79,6 +80,7 @@ export function chartAxes(scales: PlotScales, args: { sizePt: number; where: str
   }
   const room = yLabelRoomMm(sizePt);
   const yAxis = (scale: PlotScales['yLeft'], side: 'left' | 'right'): void => {
+    if (side === 'right' && !sides.right) return;
     for (const t of scale.ticks(yTickCount(area))) {
       const y = scale(t);
       if (y < area.y - 0.01 || y > bottom + 0.01) continue;
