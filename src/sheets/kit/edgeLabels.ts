@@ -7,7 +7,6 @@
 import type { Colour, FontWeight, SceneNode } from '../../scene/types.ts';
 import { measureTextMm } from '../../scene/text.ts';
 import { ascentMm, label, linePitchMm } from './block.ts';
-import { LayoutError } from './errors.ts';
 import { INK, STROKE, stroke } from './style.ts';
 
 export interface EdgeLabel {
@@ -61,7 +60,10 @@ export function spreadAlong(items: readonly { anchorX: number; widthMm: number }
   return lefts;
 }
 
-/** A row of labels whose baseline sits `gapMm` above `edgeY`, spread inside [fromMm, toMm], with leaders. */
+/**
+ * A row of labels just above `edgeY` (their descent `gapMm` clear of it), spread inside [fromMm, toMm],
+ * with leaders; null when they do not fit in one row (the caller places them some other way).
+ */
 export function edgeLabelRow(args: {
   labels: readonly EdgeLabel[];
   edgeY: number;
@@ -73,7 +75,7 @@ export function edgeLabelRow(args: {
   gapMm: number;
   role: string;
   where: string;
-}): { nodes: SceneNode[]; heightMm: number } {
+}): { nodes: SceneNode[]; heightMm: number } | null {
   const weight = args.weight ?? 'bold';
   const widths = args.labels.map((l) => measureTextMm({ text: l.text, sizePt: args.sizePt, weight }));
   const pad = measureTextMm({ text: 'n', sizePt: args.sizePt, weight }) * 0.6;
@@ -81,9 +83,7 @@ export function edgeLabelRow(args: {
     args.labels.map((l, i) => ({ anchorX: l.anchorX, widthMm: widths[i] })),
     { fromMm: args.fromMm, toMm: args.toMm, gapMm: pad },
   );
-  if (lefts.length !== args.labels.length) {
-    throw new LayoutError(args.where, `the names ${args.labels.map((l) => `"${l.text}"`).join(', ')} do not fit in one row of ${(args.toMm - args.fromMm).toFixed(0)} mm; use wider paper or fewer series`);
-  }
+  if (lefts.length !== args.labels.length) return null;
   const pitch = linePitchMm(args.sizePt, weight);
   const top = args.edgeY - args.gapMm - pitch;
   const baseline = top + ascentMm(args.sizePt, weight);

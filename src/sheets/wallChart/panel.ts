@@ -101,13 +101,14 @@ export function wallChartPanel(args: PanelArgs): { node: SceneNode; scales: Plot
   const revLimit = revLimitLine(scales, args.limits.maxRpm);
   if (revLimit) data.push(revLimit.node);
 
-  // Impeller names: over the curve where it leaves through the top; inside the plot where it leaves right.
-  const topNames: EdgeLabel[] = [];
-  for (const end of imps.ends) {
-    if (end.y <= area.y + 0.01) topNames.push({ key: `impeller-label:${end.id}`, anchorX: end.x, text: end.label });
-    else labels.push({ key: `impeller-label:${end.id}`, x: end.x, y: end.y, text: end.label, sizePt, weight: 'bold', prefer: [[-1, 1], [-1, 0], [-1, -1]] });
-  }
+  // Impeller names: over the curve where it leaves through the top; inside the plot where it leaves right
+  // (and for all of them when the top row is too short to hold every name).
+  const atTop = imps.ends.filter((end) => end.y <= area.y + 0.01);
+  const topNames: EdgeLabel[] = atTop.map((end) => ({ key: `impeller-label:${end.id}`, anchorX: end.x, text: end.label }));
   const names = edgeLabelRow({ labels: topNames, edgeY: area.y, fromMm: area.x, toMm: right, sizePt, gapMm: NAME_GAP_MM, role: 'impeller-name', where });
+  for (const end of imps.ends.filter((e) => !names || !atTop.includes(e))) {
+    labels.push({ key: `impeller-label:${end.id}`, x: end.x, y: end.y, text: end.label, sizePt, weight: 'bold', prefer: [[-1, 1], [-1, 0], [-1, -1]] });
+  }
 
   const markers: SceneNode[] = [];
   const pointLabels: LabelRequest[] = [];
@@ -122,7 +123,7 @@ export function wallChartPanel(args: PanelArgs): { node: SceneNode; scales: Plot
     type: 'group',
     role: 'wall-chart-panel',
     key: `panel:${args.variantId}`,
-    children: [...heading.nodes, ...under, ...data, ...markers, chartAxes(scales, { sizePt, where, sides: args.sides }), { type: 'group', role: 'chart-labels', children: [...names.nodes, ...placed.nodes] }],
+    children: [...heading.nodes, ...under, ...data, ...markers, chartAxes(scales, { sizePt, where, sides: args.sides }), { type: 'group', role: 'chart-labels', children: [...(names?.nodes ?? []), ...placed.nodes] }],
   };
   // Labels that found no room became numbered callouts; the sheet prints their notes.
   return { node, scales, notes: placed.notes };
