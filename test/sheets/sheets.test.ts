@@ -45,7 +45,7 @@ describe.each(requests.map((r) => [name(r), r] as const))('sheetScene() for %s',
   it('uses no type under the paper minimum (8 pt; 10 pt on A3/Tabloid) and no stroke under 0.5 pt', () => {
     const minPt = request.paper.size === 'A3' || request.paper.size === 'Tabloid' ? 10 : 8;
     for (const t of texts(scene)) expect(t.sizePt, t.text).toBeGreaterThanOrEqual(minPt);
-    for (const n of leaves(scene)) if (n.type !== 'text' && n.stroke) expect(n.stroke.widthMm).toBeGreaterThanOrEqual(MIN_STROKE_MM);
+    for (const n of leaves(scene)) if (n.type !== 'text' && n.type !== 'group' && n.stroke) expect(n.stroke.widthMm).toBeGreaterThanOrEqual(MIN_STROKE_MM);
   });
 
   it('prints no NaN, Infinity or undefined, dates from the context, and the cautions', () => {
