@@ -36,7 +36,7 @@ beforeAll(async () => {
     args: ARGS,
     viewport: { width: 1280, height: 900 },
   });
-});
+}, 600_000);
 
 afterAll(async () => {
   await context?.close();
@@ -82,7 +82,8 @@ async function crawl(): Promise<string[]> {
   return [...seen].sort();
 }
 
-describe('the built demo site in Chromium', () => {
+// Builds and a browser on a busy 2-core machine: generous limits; speed is measured in npm run bench.
+describe('the built demo site in Chromium', { timeout: 600_000 }, () => {
   it('has an index, a page per engine family, boat and book, and a data-format page', async () => {
     const pages = await crawl();
     expect(pages).toContain('index.html');

@@ -12,7 +12,7 @@ import { matchbook, REPO } from '../cli/runCli.ts';
 const HOSTILE = `<script>alert("x")</script> & 'Bob's' <b>boat</b>`;
 
 describe('a boat name holding markup', () => {
-  it('is escaped on its page, in the index and inside the inline SVG', () => {
+  it('is escaped on its page, in the index and inside the inline SVG', { timeout: 600_000 }, () => {
     const root = mkdtempSync(join(tmpdir(), 'matchbook-escape-'));
     const data = join(root, 'data');
     cpSync(join(REPO, 'data'), data, { recursive: true });

@@ -30,7 +30,7 @@ function sandbox(): string {
 const EPOCH = { SOURCE_DATE_EPOCH: '1767225600' };
 
 describe('build output', () => {
-  it('is byte-identical for two builds of the same data in different folders', async () => {
+  it('is byte-identical for two builds of the same data in different folders', { timeout: 600_000 }, async () => {
     const a = join(sandbox(), 'site-a');
     const b = join(sandbox(), 'elsewhere', 'site-b');
     const first = matchbook(['build', '--out', a], EPOCH);
@@ -48,7 +48,7 @@ describe('build output', () => {
     expect(ta.get('index.html')?.toString('utf8')).toContain('issued 2026-01-01');
   });
 
-  it('stays as it was when a data file breaks between two builds, and drops a removed boat', () => {
+  it('stays as it was when a data file breaks between two builds, and drops a removed boat', { timeout: 600_000 }, () => {
     const root = sandbox();
     const data = join(root, 'data');
     const out = join(root, 'out');
