@@ -1,70 +1,46 @@
 /**
  * Results of one boat: its fitted combination under its own conditions, the predicted WOT band, the
  * cruise table, every alternative impeller of its jet, and the engine-upgrade table. Pure composition of
- * model calls. Speed and fuel estimates (boatEstimates.ts) sit beside the nominal figures; a boat with sea
- * trials also gets its calibration and the estimates on the calibrated model (boatCalibration.ts).
+ * model calls. Speed and fuel estimates (boatEstimates.ts) sit beside the data-sheet figures; a boat with
+ * usable sea trials also gets its calibration and every figure again on the calibrated model
+ * (boatCalibration.ts, boatCalibratedBand.ts), which sheets put first.
  */
-import type { Boat, CruiseSetting, Project } from '../data/types.ts';
-import {
-  absorbedPowerKw,
-  installationAbsorber,
-  operatingBand,
-  powerChangeForRpm,
-  speedAtAbsorbedPowerRpm,
-  upgradeOperatingPoint,
-  type ImpellerSpec,
-  type Installation,
-} from '../model/index.ts';
-import { boatCalibration, calibrationResult, type CalibrationResult } from './boatCalibration.ts';
-import { boatEstimates, type BoatEstimates, type SpeedGainRow, type TopSpeedRow, type UpgradeEstimate } from './boatEstimates.ts';
-import { bandResult, conditionsResult, limitsResult, pointResult, type BandResult, type ConditionsResult, type LimitsResult, type PointResult } from './results.ts';
+import type { Boat, Project } from '../data/types.ts';
+import { operatingBand, type ImpellerSpec, type Installation } from '../model/index.ts';
+import { calibratedBand, calibratedBandNote } from './boatCalibratedBand.ts';
+import { boatCalibration, calibratedBoatInstallation, calibrationResult, type CalibrationResult } from './boatCalibration.ts';
+import { boatEstimates, type BoatEstimates, type SpeedGainRow, type TopSpeedRow } from './boatEstimates.ts';
+import { boatFigures, type BoatFigures, type CruiseRow, type RpmGainRow, type UpgradeRow } from './boatFigures.ts';
+import { bandResult, conditionsResult, limitsResult, type BandResult, type ConditionsResult, type LimitsResult } from './results.ts';
 
-export interface CruiseRow {
-  readonly label: string;
-  readonly kind: CruiseSetting['kind'];
-  /** 'ok'; 'aboveWot' (asks more than the engine makes at WOT). 'needsSpeedModel' is no longer produced (speed settings use the Crouch estimate); kept so older readers still type-check. */
-  readonly status: 'ok' | 'aboveWot' | 'needsSpeedModel';
-  readonly speedRpm?: number;
-  readonly powerKw?: number;
-  /** Boat speed, knots (filled by the speed model). */
-  readonly speedKn?: number;
-  /** Fuel flow, L/h (filled by the fuel model). */
-  readonly fuelLPerH?: number;
-  readonly fuelUsGalPerH?: number;
-  /** With a tank: hours and nautical miles keeping a third in reserve. */
-  readonly hoursWithReserve?: number;
-  readonly rangeWithReserveNm?: number;
-}
+export { RPM_GAINS, UPGRADE_STEPS_PCT, windowPlace, type BoatFigures, type CruiseRow, type RpmGainRow, type UpgradeRow, type WindowPlace } from './boatFigures.ts';
 
 export interface AlternativeRow {
   readonly impellerId: string;
   readonly label: string;
   readonly ratingKw: number;
   readonly fitted: 'yes' | 'no';
+  /** On the data-sheet model, band over the data-sheet tolerances. */
   readonly band: BandResult;
   /** Crouch top-speed estimate at the nominal WOT power, knots. */
   readonly topSpeedKn?: number;
   /** On the sea-trial-calibrated model, when the boat has trials. */
   readonly calibratedWotRpm?: number;
   readonly calibratedTopSpeedKn?: number;
+  /** Band on the calibrated model (what it covers: BoatResult.calibrated.bandNote). */
+  readonly calibratedBand?: BandResult;
 }
 
-export interface UpgradeRow {
-  readonly changePct: number;
-  readonly wot: PointResult;
-  /** Crouch estimate at the new WOT power, knots, and the gain over today, %. */
-  readonly speedKn?: number;
-  readonly speedGainPct?: number;
-  /** The impeller of the jet that would best use the new power (matched, most power taken). */
-  readonly best?: UpgradeEstimate['best'];
-}
-
-export interface RpmGainRow {
-  readonly gainRpm: number;
-  readonly targetRpm: number;
-  /** 'ok' with powerChangePct, or 'unreachable' below the engine's maximum rpm. */
-  readonly status: 'ok' | 'unreachable';
-  readonly powerChangePct?: number;
+/** The boat's figures on the sea-trial-calibrated model. */
+export interface CalibratedFigures extends BoatFigures {
+  readonly calibration: CalibrationResult;
+  readonly estimates: BoatEstimates;
+  /** Fitted impeller's WOT band on the calibrated model. */
+  readonly wot: BandResult;
+  /** What the calibrated bands cover, one sentence. */
+  readonly bandNote: string;
+  /** The latest usable trial of the fitted impeller, when it ran in one. */
+  readonly fittedMeasured?: { readonly date: string; readonly wotRpm: number };
 }
 
 export interface BoatResult {
@@ -89,14 +65,9 @@ export interface BoatResult {
   readonly estimates: BoatEstimates;
   /** Power change for planing-speed gains (estimates). */
   readonly speedGains: readonly SpeedGainRow[];
-  /** Present when the boat has sea trials: the calibration and the estimates on the calibrated model. */
-  readonly calibrated?: { readonly calibration: CalibrationResult; readonly estimates: BoatEstimates };
+  /** Present when the boat has usable sea trials: the calibration and every figure on the calibrated model. */
+  readonly calibrated?: CalibratedFigures;
 }
-
-/** Power changes tabulated on upgrade sheets, %. */
-export const UPGRADE_STEPS_PCT: readonly number[] = [5, 10, 15, 20, 25, 30, 35, 40, 45, 50];
-/** WOT rpm gains tabulated on upgrade sheets. */
-export const RPM_GAINS: readonly number[] = [100, 200, 300, 500];
 
 /** The boat's installation with a given impeller (its fitted one by default). */
 export function boatInstallation(boat: Boat, impeller?: ImpellerSpec): Installation {
@@ -105,15 +76,11 @@ export function boatInstallation(boat: Boat, impeller?: ImpellerSpec): Installat
   return { engine: boat.engine, ambient: boat.site.ambient, family: boat.jet.family, impeller: fitted, driveLine: boat.driveLine, waterDensityKgM3: boat.water.densityKgM3 };
 }
 
-function cruiseRow(setting: CruiseSetting, inst: Installation, wotRpm: number, est: BoatEstimates['cruise'][number]): CruiseRow {
-  const absorber = installationAbsorber(inst);
-  const range = est.rangeWithReserveNm !== undefined ? { hoursWithReserve: est.hoursWithReserve!, rangeWithReserveNm: est.rangeWithReserveNm } : {};
-  const estimates = { speedKn: est.speedKn, fuelLPerH: est.fuelLPerH, fuelUsGalPerH: est.fuelUsGalPerH, ...range };
-  // A speed setting needs the speed model: its rpm and power come from the Crouch estimate inverted.
-  if (setting.kind === 'speed') return { label: setting.label, kind: setting.kind, status: est.status, speedRpm: est.speedRpm, powerKw: est.powerKw, ...estimates };
-  const speedRpm = setting.kind === 'rpm' ? setting.speedRpm : speedAtAbsorbedPowerRpm(absorber, setting.powerKw);
-  const powerKw = setting.kind === 'power' ? setting.powerKw : absorbedPowerKw(absorber, setting.speedRpm);
-  return { label: setting.label, kind: setting.kind, status: speedRpm > wotRpm ? 'aboveWot' : 'ok', speedRpm, powerKw, ...estimates };
+/** The latest trial of the fitted impeller that the fit used, as the card prints it. */
+function fittedMeasured(boat: Boat, c: CalibrationResult): CalibratedFigures['fittedMeasured'] {
+  const runs = c.trials.filter((t) => t.impellerId === boat.impellerId && t.usedInFit === 'yes');
+  const latest = runs.reduce<(typeof runs)[number] | undefined>((a, t) => (a === undefined || t.date >= a.date ? t : a), undefined);
+  return latest ? { date: latest.date, wotRpm: latest.wotRpm } : undefined;
 }
 
 /** Analyses one boat of the project (powers kW, speeds rpm). */
@@ -123,10 +90,27 @@ export function analyseBoat(args: { boat: Boat; project: Project }): BoatResult 
   const wot = bandResult(operatingBand(inst));
   const calibration = boatCalibration(boat, inst);
   const estimates = boatEstimates({ boat, inst, calibration, basis: 'nominal' });
-  const calibrated =
-    calibration.mode === 'none' ? undefined : { calibration: calibrationResult(boat, calibration), estimates: boatEstimates({ boat, inst, calibration, basis: 'calibrated' }) };
+  const nominal = boatFigures({ boat, inst, wotRpm: wot.nominal.speedRpm, estimates });
+  const usable = calibration.mode !== 'none';
+  const calBands = new Map(usable ? boat.jet.impellers.map((impeller) => [impeller.id, calibratedBand({ inst, cal: calibration, impeller })]) : []);
+  const calibrated = ((): CalibratedFigures | undefined => {
+    if (!usable) return undefined;
+    const calEstimates = boatEstimates({ boat, inst, calibration, basis: 'calibrated' });
+    const calWot = calBands.get(inst.impeller.id)!;
+    const figures = boatFigures({ boat, inst: calibratedBoatInstallation(inst, calibration), wotRpm: calWot.nominal.speedRpm, estimates: calEstimates });
+    const cal = calibrationResult(boat, calibration);
+    const measured = fittedMeasured(boat, cal);
+    return {
+      calibration: cal,
+      estimates: calEstimates,
+      wot: calWot,
+      bandNote: calibratedBandNote({ cal: calibration, tolerancePct: boat.jet.family.tolerancePct }),
+      ...figures,
+      ...(measured ? { fittedMeasured: measured } : {}),
+    };
+  })();
   const topOf = (rows: readonly TopSpeedRow[], id: string) => rows.find((r) => r.impellerId === id)!;
-  const alternatives = boat.jet.impellers.map((impeller) => ({
+  const alternatives = boat.jet.impellers.map((impeller): AlternativeRow => ({
     impellerId: impeller.id,
     label: impeller.label,
     ratingKw: impeller.ratingKw,
@@ -134,19 +118,13 @@ export function analyseBoat(args: { boat: Boat; project: Project }): BoatResult 
     band: bandResult(operatingBand(boatInstallation(boat, impeller))),
     topSpeedKn: topOf(estimates.topSpeeds, impeller.id).speedKn,
     ...(calibrated
-      ? { calibratedWotRpm: topOf(calibrated.estimates.topSpeeds, impeller.id).wotRpm, calibratedTopSpeedKn: topOf(calibrated.estimates.topSpeeds, impeller.id).speedKn }
+      ? {
+          calibratedWotRpm: topOf(calibrated.estimates.topSpeeds, impeller.id).wotRpm,
+          calibratedTopSpeedKn: topOf(calibrated.estimates.topSpeeds, impeller.id).speedKn,
+          calibratedBand: calBands.get(impeller.id)!,
+        }
       : {}),
   }));
-  const upgrade = UPGRADE_STEPS_PCT.map((changePct): UpgradeRow => {
-    const e = estimates.upgrade.find((u) => u.changePct === changePct);
-    const speed = e ? { speedKn: e.speedKn, speedGainPct: e.speedGainPct, ...(e.best ? { best: e.best } : {}) } : {};
-    return { changePct, wot: pointResult(upgradeOperatingPoint(inst, changePct)), ...speed };
-  });
-  const rpmGains = RPM_GAINS.map((gainRpm): RpmGainRow => {
-    const targetRpm = wot.nominal.speedRpm + gainRpm;
-    const pct = powerChangeForRpm(inst, targetRpm);
-    return pct === null ? { gainRpm, targetRpm, status: 'unreachable' } : { gainRpm, targetRpm, status: 'ok', powerChangePct: pct };
-  });
   return {
     kind: 'boat',
     boatId: boat.id,
@@ -161,10 +139,10 @@ export function analyseBoat(args: { boat: Boat; project: Project }): BoatResult 
     limits: limitsResult(boat.engine.limits),
     conditions: conditionsResult(boat),
     wot,
-    cruise: boat.cruise.map((c, i) => cruiseRow(c, inst, wot.nominal.speedRpm, estimates.cruise[i])),
+    cruise: nominal.cruise,
     alternatives,
-    upgrade,
-    rpmGains,
+    upgrade: nominal.upgrade,
+    rpmGains: nominal.rpmGains,
     estimates,
     speedGains: estimates.speedGains,
     ...(calibrated ? { calibrated } : {}),

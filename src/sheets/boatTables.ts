@@ -1,10 +1,14 @@
-/** Tables shared by the boat sheets: fitted combination, cruise settings, alternative impellers. */
+/**
+ * Tables shared by the boat sheets: fitted combination, cruise settings, alternative impellers. A boat with
+ * usable sea trials gets its figures on the calibrated model first and the data-sheet figure beside them in
+ * a narrower, softer column, so the difference is visible.
+ */
 import type { Boat, PowerUnit, SpeedUnit } from '../data/types.ts';
-import { isWarning, toleranceNote, type BoatResult, type CruiseRow } from '../analysis/index.ts';
+import { isWarning, toleranceNote, type BandResult, type BoatResult, type CruiseRow } from '../analysis/index.ts';
 import { knToKmh, knToMph } from '../units.ts';
 import { numberText, powerBothText, powerText, rpmBandText, rpmText } from './kit/format.ts';
 import type { Cell, Column } from './kit/table.ts';
-import { INK, WARN } from './kit/style.ts';
+import { INK, INK_SOFT, WARN } from './kit/style.ts';
 import { conditionsText } from './words.ts';
 
 const left = (header: string): Column => ({ header, align: 'left' });
@@ -17,8 +21,7 @@ export function fittedRows(boat: Boat, result: BoatResult, unit: PowerUnit): { c
     columns: [left('Fitted'), left('')],
     rows: [
       ['Engine', `${boat.engine.label} (${boat.engine.fuel}), max ${rpmText(result.limits.maxRpm)} rpm, WOT window ${rpmText(result.limits.windowLowRpm)}–${rpmText(result.limits.windowHighRpm)} rpm`],
-      ['Jet unit', boat.jet.label],
-      ['Impeller', `${result.impellerLabel}${imp ? `, rated ${powerText(imp.ratingKw, unit)} at ${rpmText(boat.jet.family.referenceSpeedRpm)} rpm ± ${boat.jet.family.tolerancePct} %` : ''}`],
+      ['Jet unit, impeller', `${boat.jet.label}, impeller ${result.impellerLabel}${imp ? ` rated ${powerText(imp.ratingKw, unit)} at ${rpmText(boat.jet.family.referenceSpeedRpm)} rpm ± ${boat.jet.family.tolerancePct} %` : ''}`],
       ['Conditions', conditionsText(result.conditions)],
     ],
   };
@@ -49,14 +52,37 @@ export function speedHeader(unit: SpeedUnit, what = 'Speed'): string {
   return `${what} (${unit}, est.)`;
 }
 
-/** Cruise settings: what was asked, engine rpm and power, estimated speed and fuel, a note. */
-export function cruiseRows(boat: Boat, result: BoatResult, unit: PowerUnit, speedUnit: SpeedUnit = 'kn'): { columns: Column[]; rows: Cell[][] } {
+/** A data-sheet figure printed beside a calibrated one: softer ink, never bold. */
+const soft = (text: string): Cell => ({ text, colour: INK_SOFT });
+/** Header of the data-sheet columns. */
+export const DATA_SHEET_HEADER = 'Data sheet';
+
+/** Most trial dates listed one by one; more are given as a count and a date range. */
+const MAX_LISTED_DATES = 3;
+
+/** "sea trials of 2026-03-14, 2026-03-21" (or "6 sea trials, 2026-04-10 to 2026-04-15"), '' without a calibration. */
+export function trialDatesText(result: BoatResult): string {
+  const dates = [...(result.calibrated?.calibration.trialDates ?? [])].sort();
+  if (dates.length === 0) return '';
+  if (dates.length > MAX_LISTED_DATES) return `${dates.length} sea trials, ${dates[0]} to ${dates[dates.length - 1]}`;
+  return `sea trial${dates.length > 1 ? 's' : ''} of ${dates.join(', ')}`;
+}
+
+/** Cruise settings: what was asked, engine rpm (calibrated, with the data-sheet rpm where it differs) and power, estimated speed and fuel, a note. */
+export function cruiseRows(boat: Boat, result: BoatResult, unit: PowerUnit, speedUnit: SpeedUnit = 'kn'): { columns: Column[]; rows: Cell[][]; sameRpmAsDataSheet: boolean } {
+  const shown = result.calibrated?.cruise ?? result.cruise;
+  // The data-sheet column earns its room only where calibration moved a printed rpm (a fitted engine factor
+  // alone leaves every cruise rpm where it was: the impeller's law sets rpm at a given power).
+  const rpmOf = (row: CruiseRow) => (row.speedRpm !== undefined ? rpmText(row.speedRpm) : '–');
+  const cal = shown !== result.cruise && shown.some((row, i) => rpmOf(row) !== rpmOf(result.cruise[i]));
   return {
-    columns: [left('Cruise setting'), right('Asked'), right('Engine rpm'), right(`Power (${unit})`), right(speedHeader(speedUnit)), right('Fuel (L/h, est.)'), left('Note')],
-    rows: result.cruise.map((row) => [
+    sameRpmAsDataSheet: shown !== result.cruise && !cal,
+    columns: [left('Cruise setting'), right('Asked'), right('Engine rpm'), ...(cal ? [right(DATA_SHEET_HEADER)] : []), right(`Power (${unit})`), right(speedHeader(speedUnit)), right('Fuel (L/h, est.)'), left('Note')],
+    rows: shown.map((row, i) => [
       row.label,
       cruiseAsked(row, boat, unit),
-      row.speedRpm !== undefined ? rpmText(row.speedRpm) : '–',
+      rpmOf(row),
+      ...(cal ? [soft(rpmOf(result.cruise[i]))] : []),
       row.powerKw !== undefined ? powerText(row.powerKw, unit).replace(` ${unit}`, '') : '–',
       row.speedKn !== undefined ? speedText(row.speedKn, speedUnit) : '–',
       row.fuelLPerH !== undefined ? numberText(row.fuelLPerH, 0, 'fuel flow') : '–',
@@ -72,29 +98,70 @@ export function estimatesNote(result: BoatResult): string {
   return `Speed and fuel are estimates. Speed: Crouch’s planing formula on shaft power and ${Math.round(e.hull.displacementKg)} kg loaded. ${e.hull.note} Fuel: ${bsfc} and ${e.fuelKgPerL} kg/L (typical).`;
 }
 
-/** Every impeller of the jet with its predicted WOT band, status and estimated top speed. */
+/** A band whose ends share its most likely status, in words. */
+const SAME_ACROSS: Readonly<Record<BandResult['nominal']['status'], string>> = {
+  matched: 'stays in the window',
+  aboveWindow: 'stays above the window',
+  belowWindow: 'lugs throughout',
+  revLimited: 'over-revs throughout',
+  noCrossing: 'no point throughout',
+};
+
+/** What the band's ends add to the most likely status, in a technician's words. */
+export function acrossBandText(band: BandResult): string {
+  const note = toleranceNote({ nominal: band.nominal.status, low: band.low.status, high: band.high.status });
+  return note !== '' ? note : SAME_ACROSS[band.nominal.status];
+}
+
+/** Every impeller of the jet with its WOT band (calibrated first when there are trials), status and estimated top speed. */
 export function alternativeRows(result: BoatResult, unit: PowerUnit, speedUnit: SpeedUnit = 'kn'): { columns: Column[]; rows: Cell[][] } {
+  const cal = result.calibrated !== undefined;
   return {
-    columns: [left('Impeller'), right('WOT band'), right('Nominal'), right(`Power (${unit})`), right(speedHeader(speedUnit, 'Top')), left('Status'), left('Within tolerance')],
+    columns: [
+      left('Impeller'),
+      right('WOT band'),
+      right('Most likely'),
+      ...(cal ? [right(DATA_SHEET_HEADER)] : []),
+      right(`Power (${unit})`),
+      right(speedHeader(speedUnit, 'Top')),
+      left('Status'),
+      left('Across the band'),
+    ],
     rows: result.alternatives.map((a) => {
-      const b = a.band;
+      const b = a.calibratedBand ?? a.band;
+      const top = a.calibratedTopSpeedKn ?? a.topSpeedKn;
       const warn = isWarning(b.nominal.status);
       const bold = a.fitted === 'yes' ? ('bold' as const) : ('regular' as const);
       return [
         { text: a.fitted === 'yes' ? `${a.label} (fitted)` : a.label, weight: bold },
         { text: rpmBandText(b.low.speedRpm, b.high.speedRpm), weight: bold },
         { text: rpmText(b.nominal.speedRpm), weight: bold },
+        ...(cal ? [soft(rpmText(a.band.nominal.speedRpm))] : []),
         { text: powerText(b.nominal.powerKw, unit).replace(` ${unit}`, ''), weight: bold },
-        { text: a.topSpeedKn !== undefined ? speedText(a.topSpeedKn, speedUnit) : '–', weight: bold },
+        { text: top !== undefined ? speedText(top, speedUnit) : '–', weight: bold },
         { text: b.nominal.statusText, weight: warn ? 'bold' : bold, colour: warn ? WARN : INK },
-        toleranceNote({ nominal: b.nominal.status, low: b.low.status, high: b.high.status }) || '–',
+        acrossBandText(b),
       ];
     }),
   };
 }
 
-/** "Predicted WOT 5070 rpm (4910–5220 rpm), 154 kW (207 hp): Good match". */
+/** "Predicted WOT 5070 rpm (band 4910–5220 rpm), 154 kW (207 hp): Good match", or "Calibrated WOT …" on the calibrated model. */
 export function wotHeadline(result: BoatResult, unit: PowerUnit): string {
-  const b = result.wot;
-  return `Predicted WOT ${rpmText(b.nominal.speedRpm)} rpm (band ${rpmBandText(b.low.speedRpm, b.high.speedRpm)}), ${powerBothText(b.nominal.powerKw, unit)}: ${b.nominal.statusText}`;
+  const b = result.calibrated?.wot ?? result.wot;
+  return `${result.calibrated ? 'Calibrated' : 'Predicted'} WOT ${rpmText(b.nominal.speedRpm)} rpm (band ${rpmBandText(b.low.speedRpm, b.high.speedRpm)}), ${powerBothText(b.nominal.powerKw, unit)}: ${b.nominal.statusText}`;
+}
+
+/** Under the headline: the verdict and, with trials, where the calibration comes from and the data-sheet figure (body); what the band covers (small). */
+export function wotSubLines(result: BoatResult, tolerances: { impellerPct: number; enginePct: number }, unit: PowerUnit): { body: string; small: string } {
+  const nominalCovers = `impeller rating ± ${tolerances.impellerPct} % and engine power ± ${tolerances.enginePct} %`;
+  const cal = result.calibrated;
+  // The headline already ends in the status: repeat the verdict only when the band's ends add to it.
+  const verdict = (b: BandResult) => (b.verdict === b.nominal.statusText ? '' : `${b.verdict}. `);
+  if (!cal) return { body: `${verdict(result.wot)}The band covers ${nominalCovers}.`, small: '' };
+  const n = result.wot;
+  return {
+    body: `${verdict(cal.wot)}Calibrated to ${trialDatesText(result)}; data-sheet model ${rpmText(n.nominal.speedRpm)} rpm (band ${rpmBandText(n.low.speedRpm, n.high.speedRpm)}), ${powerText(n.nominal.powerKw, unit)}.`,
+    small: `${cal.bandNote} The data-sheet band covers ${nominalCovers}.`,
+  };
 }

@@ -14,7 +14,8 @@ import { stack, type Part } from './kit/stack.ts';
 import { INK, typeScale } from './kit/style.ts';
 import { table } from './kit/table.ts';
 import { findBoat, type SheetContext } from './context.ts';
-import { speedText } from './boatTables.ts';
+import { speedText, trialDatesText } from './boatTables.ts';
+import { exactRpmText } from './trialTables.ts';
 import { LayoutError } from './kit/errors.ts';
 
 type BoatRequest = Extract<SheetRequest, { kind: 'consoleCard' }>;
@@ -39,53 +40,73 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
   const type = typeScale(request.paper);
   const frame = sheetFrame({ paper: request.paper, site, title: boat.name, subtitle: `Console card · impeller ${result.impellerLabel}`, dateIso: ctx.dateIso, type, marginMm: CARD_MARGIN_MM, where });
   const box = frame.contentBox;
-  const b = result.wot;
+  const b = result.calibrated?.wot ?? result.wot;
+  const measured = result.calibrated?.fittedMeasured;
+  const calibratedTo = trialDatesText(result);
   const rangeText = rpmBandText(b.low.speedRpm, b.high.speedRpm);
   const speedUnit = site.speedUnit;
-  const cruiseRows = result.cruise
+  const cruiseRows = (result.calibrated?.cruise ?? result.cruise)
     .filter((c) => c.speedRpm !== undefined && c.status === 'ok')
     .map((c) => [c.label, { text: `${rpmText(c.speedRpm as number)} rpm`, weight: 'bold' as const }, c.speedKn !== undefined ? `~${speedText(c.speedKn, speedUnit)} ${speedUnit}` : '–']);
-  const figures: Part[] = [
-    ({ x, y, widthMm }): Block => {
-      const head = label({ x, y: y + ascentMm(type.heading, 'bold'), text: 'Expected WOT rpm', sizePt: type.heading, weight: 'bold', role: 'heading', where });
-      // The big figure shrinks only as far as it must to fit the card; below the heading size is an error.
-      let sizePt = type.display;
-      const big = () => label({ x, y: y + linePitchMm(type.heading, 'bold') + ascentMm(sizePt, 'bold'), text: rangeText, sizePt, weight: 'bold', colour: INK, role: 'wot-range', where });
-      let node = big();
-      if (node.widthMm > widthMm) {
-        sizePt = Math.floor(((sizePt * widthMm) / node.widthMm) * 10) / 10;
-        if (sizePt < type.heading) throw new LayoutError(where, `the WOT range "${rangeText}" does not fit the card; use a larger card`);
-        node = big();
-      }
-      const sub = paragraph({ x, y: y + linePitchMm(type.heading, 'bold') + linePitchMm(sizePt, 'bold'), widthMm, text: `Most likely ${rpmText(b.nominal.speedRpm)} rpm. Never above ${rpmText(result.limits.maxRpm)} rpm.`, sizePt: type.body, weight: 'bold', role: 'wot-note', where });
-      return { nodes: [head, node, ...sub.nodes], heightMm: linePitchMm(type.heading, 'bold') + linePitchMm(sizePt, 'bold') + sub.heightMm };
-    },
-    ...(cruiseRows.length > 0
-      ? [({ x, y, widthMm }: { x: number; y: number; widthMm: number }): Block => table({ x, y, maxWidthMm: widthMm, columns: [{ header: 'Cruise', align: 'left' }, { header: 'Engine', align: 'right' }, { header: 'Speed (est.)', align: 'right' }], rows: cruiseRows, sizePt: type.body + 1, minSizePt: type.min, fullWidth: true, role: 'cruise-table', where })]
-      : []),
-  ];
-  const advice: Part[] = [
-    ({ x, y, widthMm }): Block => {
-      const head = paragraph({ x, y, widthMm, text: 'WOT rpm outside the range? Check:', sizePt: type.body, weight: 'bold', role: 'heading', where });
-      let cursor = y + head.heightMm;
-      const nodes = [...head.nodes];
-      for (const item of OFF_RANGE_CHECKS) {
-        const p = paragraph({ x: x + 3, y: cursor, widthMm: widthMm - 3, text: item, sizePt: type.small, role: 'check-item', where });
-        nodes.push(label({ x, y: cursor + ascentMm(type.small), text: '•', sizePt: type.small, role: 'bullet', where }), ...p.nodes);
-        cursor += p.heightMm;
-      }
-      return { nodes, heightMm: cursor - y };
-    },
-    ({ x, y, widthMm }) => cautionsBlock({ site, x, y, widthMm, sizePt: type.small, headingPt: type.body, where }),
-  ];
-  // Landscape cards read as two columns (figures | advice); portrait cards as one.
-  const gapMm = 2.5;
-  const columns = box.width > box.height
-    ? [
-        stack({ x: box.x, y: box.y, widthMm: (box.width - 5) / 2, gapMm, parts: figures }),
-        stack({ x: box.x + (box.width + 5) / 2, y: box.y, widthMm: (box.width - 5) / 2, gapMm, parts: advice }),
-      ]
-    : [stack({ x: box.x, y: box.y, widthMm: box.width, gapMm, parts: [...figures, ...advice] })];
+  // A card first tries its full layout; a full card then closes its gaps and folds the calibration line into the measured one.
+  const build = (compact: boolean) => {
+    const figures: Part[] = [
+      ({ x, y, widthMm }): Block => {
+        const head = label({ x, y: y + ascentMm(type.heading, 'bold'), text: 'Expected WOT rpm', sizePt: type.heading, weight: 'bold', role: 'heading', where });
+        // The big figure shrinks only as far as it must to fit the card; below the heading size is an error.
+        let sizePt = type.display;
+        const big = () => label({ x, y: y + linePitchMm(type.heading, 'bold') + ascentMm(sizePt, 'bold'), text: rangeText, sizePt, weight: 'bold', colour: INK, role: 'wot-range', where });
+        let node = big();
+        if (node.widthMm > widthMm) {
+          sizePt = Math.floor(((sizePt * widthMm) / node.widthMm) * 10) / 10;
+          if (sizePt < type.heading) throw new LayoutError(where, `the WOT range "${rangeText}" does not fit the card; use a larger card`);
+          node = big();
+        }
+        const subY = y + linePitchMm(type.heading, 'bold') + linePitchMm(sizePt, 'bold');
+        // With sea trials: the tachometer reading of the fitted impeller first (what the owner compares with), then where the range comes from.
+        const lines = [
+          ...(measured ? [{ text: `Measured ${exactRpmText(measured.wotRpm)} rpm on ${measured.date}${compact ? ' (sea trial)' : ''}.`, sizePt: type.body + 1, role: 'wot-measured' }] : []),
+          { text: `Most likely ${rpmText(b.nominal.speedRpm)} rpm. Never above ${rpmText(result.limits.maxRpm)} rpm.`, sizePt: type.body, role: 'wot-note' },
+          ...(calibratedTo && !(compact && measured) ? [{ text: `Range calibrated to ${calibratedTo}.`, sizePt: type.small, role: 'wot-calibration' }] : []),
+        ];
+        let cursor = subY;
+        const subNodes = lines.flatMap((l) => {
+          const p = paragraph({ x, y: cursor, widthMm, text: l.text, sizePt: l.sizePt, weight: l.role === 'wot-calibration' ? 'regular' : 'bold', role: l.role, where });
+          cursor += p.heightMm;
+          return p.nodes;
+        });
+        return { nodes: [head, node, ...subNodes], heightMm: cursor - y };
+      },
+      ...(cruiseRows.length > 0
+        ? [({ x, y, widthMm }: { x: number; y: number; widthMm: number }): Block => table({ x, y, maxWidthMm: widthMm, columns: [{ header: 'Cruise', align: 'left' }, { header: 'Engine', align: 'right' }, { header: 'Speed (est.)', align: 'right' }], rows: cruiseRows, sizePt: type.body + 1, minSizePt: type.min, fullWidth: true, role: 'cruise-table', where })]
+        : []),
+    ];
+    const advice: Part[] = [
+      ({ x, y, widthMm }): Block => {
+        const head = paragraph({ x, y, widthMm, text: 'WOT rpm outside the range? Check:', sizePt: type.body, weight: 'bold', role: 'heading', where });
+        let cursor = y + head.heightMm;
+        const nodes = [...head.nodes];
+        for (const item of OFF_RANGE_CHECKS) {
+          const p = paragraph({ x: x + 3, y: cursor, widthMm: widthMm - 3, text: item, sizePt: type.small, role: 'check-item', where });
+          nodes.push(label({ x, y: cursor + ascentMm(type.small), text: '•', sizePt: type.small, role: 'bullet', where }), ...p.nodes);
+          cursor += p.heightMm;
+        }
+        return { nodes, heightMm: cursor - y };
+      },
+      ({ x, y, widthMm }) => cautionsBlock({ site, x, y, widthMm, sizePt: type.small, headingPt: type.body, where }),
+    ];
+    // Landscape cards read as two columns (figures | advice); portrait cards as one.
+    const gapMm = compact ? 1.5 : 2.5;
+    return box.width > box.height
+      ? [
+          stack({ x: box.x, y: box.y, widthMm: (box.width - 5) / 2, gapMm, parts: figures }),
+          stack({ x: box.x + (box.width + 5) / 2, y: box.y, widthMm: (box.width - 5) / 2, gapMm, parts: advice }),
+        ]
+      : [stack({ x: box.x, y: box.y, widthMm: box.width, gapMm, parts: [...figures, ...advice] })];
+  };
+  const fits = (cols: ReturnType<typeof build>) => cols.every((c) => c.bottomMm <= box.y + box.height + 1e-6);
+  const full = build(false);
+  const columns = fits(full) ? full : build(true);
   for (const c of columns) assertFits(box, c.bottomMm, where);
   const laid = { nodes: columns.flatMap((c) => c.nodes) };
   return assembleScene({

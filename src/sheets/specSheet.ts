@@ -6,7 +6,8 @@ import type { SheetRequest } from '../data/types.ts';
 import type { Scene } from '../scene/types.ts';
 import { analyseBoat, isWarning } from '../analysis/index.ts';
 import { boatChart } from './chart/boatChart.ts';
-import { alternativeRows, cruiseRows, estimatesNote, fittedRows, wotHeadline } from './boatTables.ts';
+import { alternativeRows, cruiseRows, estimatesNote, fittedRows, trialDatesText, wotHeadline, wotSubLines } from './boatTables.ts';
+import { calibratedChartView } from './calibratedView.ts';
 import { calibrationText, MAX_TRIAL_ROWS, trialRows } from './trialTables.ts';
 import { assembleScene, assertFits } from './kit/assemble.ts';
 import { paragraph, type Block } from './kit/block.ts';
@@ -22,6 +23,9 @@ type BoatRequest = Extract<SheetRequest, { kind: 'specSheet' | 'consoleCard' | '
 /** Match-chart height: as designed, and the least it may shrink to for sea trials and notes. */
 const CHART_MAX_MM = 82;
 const CHART_MIN_MM = 45;
+/** Gap between the sheet's parts, and the least it closes to when the page is full. */
+const GAP_MM = 4;
+const TIGHT_GAP_MM = 2.5;
 
 /** A heading followed by a table, as one part. */
 export function tablePart(args: { heading: string; columns: Column[]; rows: Cell[][]; header?: boolean; sizePt: number; minSizePt: number; headingPt: number; role: string; where: string }): Part {
@@ -42,28 +46,40 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
   const type = typeScale(request.paper);
   const frame = sheetFrame({ paper: request.paper, site, title: `${boat.name}: spec sheet`, subtitle: `${boat.engine.label} · ${boat.jet.label} · impeller ${result.impellerLabel}`, dateIso: ctx.dateIso, type, where });
   const box = frame.contentBox;
-  const warn = isWarning(result.wot.nominal.status);
+  const shownWot = result.calibrated?.wot ?? result.wot;
+  const warn = isWarning(shownWot.nominal.status);
+  const view = calibratedChartView(boat, result);
+  const calibratedTo = trialDatesText(result);
+  const subLines = wotSubLines(result, { impellerPct: boat.jet.family.tolerancePct, enginePct: boat.engine.powerTolerancePct }, unit);
   const common = { sizePt: type.body, minSizePt: type.min, headingPt: type.heading, where };
   const fitted = fittedRows(boat, result, unit);
   const speedUnit = site.speedUnit;
   const cruise = cruiseRows(boat, result, unit, speedUnit);
+  const cruiseHeading = !calibratedTo ? 'Cruise settings' : `Cruise settings, calibrated to ${calibratedTo}${cruise.sameRpmAsDataSheet ? ' (rpm as on the data sheet)' : ''}`;
   const alts = alternativeRows(result, unit, speedUnit);
   const trialCount = result.calibrated?.calibration.trials.length ?? 0;
   const parts = (chartMm: number, trials: ReturnType<typeof trialRows>): Part[] => [
     tablePart({ heading: 'Fitted combination', ...fitted, header: false, ...common, role: 'fitted-table' }),
     ({ x, y, widthMm }) => {
       const head = paragraph({ x, y, widthMm, text: wotHeadline(result, unit), sizePt: type.heading, weight: 'bold', colour: warn ? WARN : INK, role: 'wot-headline', where });
-      const why = paragraph({ x, y: y + head.heightMm + 0.5, widthMm, text: `${result.wot.verdict}. The band covers impeller rating ± ${boat.jet.family.tolerancePct} % and engine power ± ${boat.engine.powerTolerancePct} %.`, sizePt: type.body, role: 'wot-verdict', where });
-      return { nodes: [...head.nodes, ...why.nodes], heightMm: head.heightMm + 0.5 + why.heightMm };
+      let cursor = y + head.heightMm + 0.5;
+      const nodes = [...head.nodes];
+      for (const [text, sizePt] of [[subLines.body, type.body], [subLines.small, type.small]] as const) {
+        if (text === '') continue;
+        const line = paragraph({ x, y: cursor, widthMm, text, sizePt, role: 'wot-verdict', where });
+        nodes.push(...line.nodes);
+        cursor += line.heightMm;
+      }
+      return { nodes, heightMm: cursor - y };
     },
     ({ x, y, widthMm }) => {
-      const chart = boatChart({ boat, result, box: { x, y, width: widthMm, height: chartMm }, sizePt: type.small, powerUnitFirst: unit, where });
+      const chart = boatChart({ ...(view ?? { boat, result }), box: { x, y, width: widthMm, height: chartMm }, sizePt: type.small, powerUnitFirst: unit, where });
       const notes = chart.notes.map((n) => `(${n.number}) ${n.text}`).join('  ');
       const note = notes ? paragraph({ x, y: y + chartMm + 1, widthMm, text: notes, sizePt: type.small, where }) : { nodes: [], heightMm: 0 };
       return { nodes: [chart.node, ...note.nodes], heightMm: chartMm + 1 + note.heightMm };
     },
-    tablePart({ heading: 'Cruise settings', ...cruise, ...common, role: 'cruise-table' }),
-    tablePart({ heading: 'Every impeller of this jet on this boat', ...alts, ...common, role: 'alternatives-table' }),
+    tablePart({ heading: cruiseHeading, columns: cruise.columns, rows: cruise.rows, ...common, role: 'cruise-table' }),
+    tablePart({ heading: calibratedTo ? `Every impeller of this jet on this boat, calibrated to ${calibratedTo}` : 'Every impeller of this jet on this boat', ...alts, ...common, role: 'alternatives-table' }),
     ...(trials.rows.length > 0
       ? [
           tablePart({ heading: 'Sea trials', columns: trials.columns, rows: trials.rows, ...common, role: 'trials-table' }),
@@ -71,20 +87,23 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
       : []),
     ({ x, y, widthMm }) => {
       const hidden = trials.hidden > 0 ? ` ${trials.hidden} older trial(s) not listed.` : '';
-      const calibration = trials.rows.length > 0 ? `${calibrationText(result, speedUnit)}${hidden} ` : '';
+      const calibration = trials.rows.length > 0 ? `${calibrationText(result)}${hidden} ` : '';
       return paragraph({ x, y, widthMm, text: `${calibration}${estimatesNote(result)}`, sizePt: type.small, role: 'estimates-note', where });
     },
     ({ x, y, widthMm }) => cautionsBlock({ site, x, y, widthMm, sizePt: type.body, headingPt: type.heading, where }),
   ];
   // The chart gives up height when the tables, sea trials and notes need it (its figures are in the tables
-  // too), down to CHART_MIN_MM; then older sea trials leave the table (down to the latest one); below that
-  // the sheet needs larger paper.
+  // too), down to CHART_MIN_MM, while the gaps between parts close from GAP_MM to TIGHT_GAP_MM; then older
+  // sea trials leave the table (down to the latest one); below that the sheet needs larger paper.
   const layout = (shownTrials: number) => {
     const trials = trialRows(result, boat.jet.family.tolerancePct, { maxRows: shownTrials });
-    const at = (chartMm: number) => stack({ x: box.x, y: box.y, widthMm: box.width, gapMm: 4, parts: parts(chartMm, trials) });
-    const first = at(CHART_MAX_MM);
+    const at = (chartMm: number, gapMm: number) => stack({ x: box.x, y: box.y, widthMm: box.width, gapMm, parts: parts(chartMm, trials) });
+    const first = at(CHART_MAX_MM, GAP_MM);
     const over = first.bottomMm - (box.y + box.height);
-    return over > 0 ? at(Math.max(CHART_MIN_MM, CHART_MAX_MM - over)) : first;
+    if (over <= 0) return first;
+    const tight = at(CHART_MAX_MM, TIGHT_GAP_MM);
+    const overTight = tight.bottomMm - (box.y + box.height);
+    return at(Math.max(CHART_MIN_MM, CHART_MAX_MM - overTight), TIGHT_GAP_MM);
   };
   let shown = Math.min(trialCount, MAX_TRIAL_ROWS);
   let laid = layout(shown);

@@ -5,22 +5,31 @@
  */
 import type { SheetRequest } from '../data/types.ts';
 import type { Scene } from '../scene/types.ts';
-import { analyseBoat, isWarning } from '../analysis/index.ts';
+import { analyseBoat, isWarning, type WindowPlace } from '../analysis/index.ts';
 import { engineCurve } from '../model/index.ts';
 import { boatChart } from './chart/boatChart.ts';
 import type { EngineSeries } from './chart/matchChart.ts';
 import { assembleScene, assertFits } from './kit/assemble.ts';
 import { paragraph } from './kit/block.ts';
 import { cautionsBlock } from './kit/cautions.ts';
-import { percentText, powerText, rpmText } from './kit/format.ts';
+import { numberText, percentText, powerText, rpmText } from './kit/format.ts';
 import { sheetFrame } from './kit/frame.ts';
 import { stack, type Part } from './kit/stack.ts';
 import { INK, STROKE, WARN, typeScale } from './kit/style.ts';
 import { findBoat, type SheetContext } from './context.ts';
 import { tablePart } from './specSheet.ts';
-import { speedHeader, speedText } from './boatTables.ts';
+import { speedHeader, speedText, trialDatesText } from './boatTables.ts';
+import { calibratedChartView } from './calibratedView.ts';
 
 type BoatRequest = Extract<SheetRequest, { kind: 'upgradeSheet' }>;
+
+/** A target rpm against the engine's window, in words: only the first is a goal. */
+export const TARGET_WORDS: Readonly<Record<WindowPlace, string>> = {
+  withinWindow: 'Within window',
+  belowWindow: 'Below window: still lugs',
+  aboveWindow: 'Above window: not a target',
+  beyondMax: 'Beyond max rpm: never',
+};
 
 /** Power changes drawn on the chart (a subset of the table, so the curves stay apart). */
 const CHART_STEPS_PCT: readonly number[] = [0, 25, 50];
@@ -42,17 +51,30 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
   const common = { sizePt: type.body, minSizePt: type.min, headingPt: type.heading, where };
   const speedUnit = site.speedUnit;
   const label = (id: string) => result.alternatives.find((a) => a.impellerId === id)?.label ?? id;
-  const fittedTop = result.alternatives.find((a) => a.fitted === 'yes')?.topSpeedKn;
+  // With sea trials every figure rests on the calibrated model (view: its engine, exponent and ratings).
+  const cal = result.calibrated;
+  const view = calibratedChartView(boat, result);
+  const calibratedTo = trialDatesText(result);
+  const onModel = calibratedTo ? `, calibrated to ${calibratedTo}` : '';
+  const wot = cal?.wot ?? result.wot;
+  const upgrade = cal?.upgrade ?? result.upgrade;
+  const rpmGains = cal?.rpmGains ?? result.rpmGains;
+  const speedGains = cal?.estimates.speedGains ?? result.speedGains;
+  const exponent = cal?.calibration.exponent ?? boat.jet.family.exponent;
+  const kText = Number.isInteger(exponent) ? String(exponent) : numberText(exponent, 2, 'exponent');
+  const fitted = result.alternatives.find((a) => a.fitted === 'yes');
+  const fittedTop = fitted?.calibratedTopSpeedKn ?? fitted?.topSpeedKn;
+  const chartEngine = view?.boat.engine ?? boat.engine;
   const engines: EngineSeries[] = CHART_STEPS_PCT.map((pct, i) => ({
     id: `plus-${pct}`,
-    label: pct === 0 ? 'As now' : `${percentText(pct)} power`,
-    site: engineCurve(boat.engine, { ambient: boat.site.ambient, powerFactor: 1 + pct / 100 }),
+    label: pct === 0 ? (view ? 'As now (calibrated)' : 'As now') : `${percentText(pct)} power`,
+    site: engineCurve(chartEngine, { ambient: boat.site.ambient, powerFactor: 1 + pct / 100 }),
     widthMm: pct === 0 ? STROKE.emphasis : STROKE.series,
     dashMm: CHART_DASHES[i],
   }));
   const upgradeRows = [
-    ['As now', rpmText(result.wot.nominal.speedRpm), powerText(result.wot.nominal.powerKw, unit), fittedTop !== undefined ? speedText(fittedTop, speedUnit) : '–', result.wot.nominal.statusText, '–'],
-    ...result.upgrade.map((u) => [
+    ['As now', rpmText(wot.nominal.speedRpm), powerText(wot.nominal.powerKw, unit), fittedTop !== undefined ? speedText(fittedTop, speedUnit) : '–', wot.nominal.statusText, '–'],
+    ...upgrade.map((u) => [
       percentText(u.changePct),
       rpmText(u.wot.speedRpm),
       powerText(u.wot.powerKw, unit),
@@ -62,7 +84,7 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
     ]),
   ];
   // One sentence per speed gain: the power change with the fitted impeller, and with the best re-match.
-  const speedGainText = result.speedGains
+  const speedGainText = speedGains
     .map((g) => {
       const status = g.fittedStatus && g.fittedStatus !== 'matched' ? ` (${g.fittedStatusText?.toLowerCase()})` : '';
       const kept = g.fittedChangePct !== undefined ? `${percentText(g.fittedChangePct, { digits: 0 })} power with ${result.impellerLabel}${status}` : `not reachable with ${result.impellerLabel} below max rpm`;
@@ -70,22 +92,27 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
       return `${percentText(g.gainPct)} top speed: ${kept}, or ${rematched}.`;
     })
     .join(' ');
-  const gainRows = result.rpmGains.map((g) => [
-    `+${g.gainRpm} rpm`,
-    `${rpmText(g.targetRpm)} rpm`,
-    g.status === 'ok' && g.powerChangePct !== undefined ? percentText(g.powerChangePct, { digits: 0 }) : { text: 'not reachable below max rpm', weight: 'bold' as const, colour: WARN },
-  ]);
+  // Only a target inside the window is one to aim for; the others say so in words beside the figure.
+  const gainRows = rpmGains.map((g) => {
+    const aim = g.window === 'withinWindow';
+    return [
+      g.kind === 'windowTop' ? `+${rpmText(g.gainRpm)} rpm (window top)` : `+${g.gainRpm} rpm`,
+      `${rpmText(g.targetRpm)} rpm`,
+      g.status === 'ok' && g.powerChangePct !== undefined && g.window !== 'beyondMax' ? percentText(g.powerChangePct, { digits: 0 }) : '–',
+      { text: TARGET_WORDS[g.window], weight: aim ? ('regular' as const) : ('bold' as const), colour: aim ? INK : WARN },
+    ];
+  });
   const parts = (chartMm: number): Part[] => [
     ({ x, y, widthMm }) =>
-      paragraph({ x, y, widthMm, text: `With the same impeller, more engine power raises WOT rpm only a little: the impeller takes power as rpm to the power ${boat.jet.family.exponent}, so x % more power gives roughly x/${boat.jet.family.exponent} % more rpm, less where the engine curve is flat. Check the new WOT rpm against the maximum (${rpmText(result.limits.maxRpm)} rpm).`, sizePt: type.body, where }),
+      paragraph({ x, y, widthMm, text: `Same impeller, more power: WOT rpm rises only a little, as the impeller takes power as rpm to the power ${kText} (x % more power, about x/${kText} % more rpm). Aim only for WOT inside the window (${rpmText(result.limits.windowLowRpm)}–${rpmText(result.limits.windowHighRpm)} rpm); never past the maximum (${rpmText(result.limits.maxRpm)} rpm).`, sizePt: type.body, where }),
     ({ x, y, widthMm }) => {
-      const chart = boatChart({ boat, result, box: { x, y, width: widthMm, height: chartMm }, sizePt: type.small, powerUnitFirst: unit, engines, points: 'fitted', where });
+      const chart = boatChart({ ...(view ?? { boat, result }), box: { x, y, width: widthMm, height: chartMm }, sizePt: type.small, powerUnitFirst: unit, engines, points: 'fitted', where });
       const notes = chart.notes.map((n) => `(${n.number}) ${n.text}`).join('  ');
       const note = notes ? paragraph({ x, y: y + chartMm + 1, widthMm, text: notes, sizePt: type.small, where }) : { nodes: [], heightMm: 0 };
       return { nodes: [chart.node, ...note.nodes], heightMm: chartMm + 1 + note.heightMm };
     },
     tablePart({
-      heading: `Engine power change with impeller ${result.impellerLabel}`,
+      heading: `Engine power change with impeller ${result.impellerLabel}${onModel}`,
       columns: [
         { header: 'Power change', align: 'left' },
         { header: 'WOT rpm', align: 'right' },
@@ -98,7 +125,13 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
       ...common,
       role: 'upgrade-table',
     }),
-    tablePart({ heading: 'Power needed for more WOT rpm', columns: [{ header: 'Gain', align: 'left' }, { header: 'Target WOT', align: 'right' }, { header: 'Power change needed', align: 'right' }], rows: gainRows, ...common, role: 'rpm-gain-table' }),
+    tablePart({
+      heading: 'Power needed for more WOT rpm',
+      columns: [{ header: 'Gain', align: 'left' }, { header: 'Target WOT', align: 'right' }, { header: 'Power change needed', align: 'right' }, { header: 'Target against the window', align: 'left' }],
+      rows: gainRows,
+      ...common,
+      role: 'rpm-gain-table',
+    }),
     ({ x, y, widthMm }) =>
       paragraph({ x, y, widthMm, text: `Speeds are estimates (Crouch’s planing formula, hull constant ${Math.round(result.estimates.hull.crouchConstant)}, ${result.estimates.hull.source}). ${speedGainText}`, sizePt: type.small, role: 'speed-gain-note', where }),
     ({ x, y, widthMm }) => cautionsBlock({ site, x, y, widthMm, sizePt: type.body, headingPt: type.heading, where }),
