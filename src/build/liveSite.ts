@@ -10,6 +10,7 @@ import { OUTPUT_MARKER } from './atomicDir.ts';
 import { formatDataErrors } from './buildSite.ts';
 import { buildDateIso } from './dateIso.ts';
 import { SheetDrawError } from './errors.ts';
+import { unprintableText } from './unprintable.ts';
 import { createBuildCache } from './renderCache.ts';
 import { writeSiteFiles } from './siteFiles.ts';
 import type { SiteData } from './siteView.ts';
@@ -34,6 +35,11 @@ export function liveSiteData(opts: LiveSiteOptions): () => Promise<SiteData> {
     if (!loaded.ok) {
       report(formatDataErrors(loaded.errors, 'problem'));
       throw new InvalidDataError('the data has problems; fix them and save again');
+    }
+    const unprintable = unprintableText(loaded.project, { dataDir: opts.dataDir });
+    if (unprintable.length > 0) {
+      report(formatDataErrors(unprintable, 'problem'));
+      throw new InvalidDataError('the data has text the sheets cannot print; fix it and save again');
     }
     const dateIso = buildDateIso({ sourceDateEpoch: process.env.SOURCE_DATE_EPOCH, issueDate: loaded.project.site.issueDate });
     mkdirSync(opts.outDir, { recursive: true });
