@@ -1,0 +1,133 @@
+import { describe, expect, it } from 'vitest';
+import { analyseBoat, boatInstallation } from '../../src/analysis/index.ts';
+import type { Boat, Paper, Project, SheetRequest } from '../../src/data/types.ts';
+import { solveInstallation } from '../../src/model/index.ts';
+import type { Scene, SceneNode, TextNode } from '../../src/scene/types.ts';
+import { sheetScene } from '../../src/sheets/index.ts';
+import { rpmBandText, rpmText } from '../../src/sheets/kit/format.ts';
+import { RESIDUAL_HEADER } from '../../src/sheets/trialTables.ts';
+import { TARGET_WORDS } from '../../src/sheets/upgradeSheet.ts';
+import { boat, project } from './fixtures/demoProject.ts';
+import { texts } from './sceneWalk.ts';
+
+/** The demo boat with two trials the model gives with the engine 4 % down, tachometer readings off by +37 and −23 rpm (invented data). */
+function trialBoat(): Boat {
+  const runs = [
+    { impellerId: 'b', date: '2026-06-02', offsetRpm: 37 },
+    { impellerId: 'd', date: '2026-06-09', offsetRpm: -23 },
+  ].map((t) => {
+    const inst = boatInstallation(boat, boat.jet.impellers.find((x) => x.id === t.impellerId));
+    const p = solveInstallation({ ...inst, engine: { ...inst.engine, conditionFactor: 0.96 } });
+    return { date: t.date, impellerId: t.impellerId, wotRpm: Math.round(p.speedRpm) + t.offsetRpm, ambient: boat.site.ambient, water: boat.water };
+  });
+  return { ...boat, trials: runs };
+}
+
+const A4: Paper = { size: 'A4', orientation: 'portrait', bleedMm: 0 };
+const CARD: Paper = { size: 'Card4x6', orientation: 'landscape', bleedMm: 3 };
+const ctxFor = (b: Boat) => ({ project: { ...project, boats: [b] } as Project, dateIso: '2026-11-02' });
+const sheet = (b: Boat, kind: SheetRequest['kind'], paper: Paper) => sheetScene({ kind, boatId: b.id, paper } as SheetRequest, ctxFor(b));
+const textOf = (scene: Scene, role?: string) => texts(scene).filter((t) => role === undefined || t.role === role).map((t) => t.text).join(' ');
+
+/** The text rows of the table whose group has this role: cells grouped by baseline, left to right. */
+function tableRows(scene: Scene, role: string): string[][] {
+  const find = (n: SceneNode): SceneNode | undefined => (n.role === role ? n : n.type === 'group' ? n.children.map(find).find((x) => x) : undefined);
+  const group = find(scene.root);
+  if (!group || group.type !== 'group') throw new Error(`no table "${role}"`);
+  const cells = group.children.filter((n): n is TextNode => n.type === 'text');
+  const rows = new Map<number, TextNode[]>();
+  for (const c of cells) rows.set(Math.round(c.y * 100), [...(rows.get(Math.round(c.y * 100)) ?? []), c]);
+  return [...rows.entries()].sort(([a], [b]) => a - b).map(([, r]) => r.sort((p, q) => p.x - q.x).map((c) => c.text));
+}
+
+/** "−23 rpm" / "+6 rpm" / "4821 rpm" → number (true minus sign). */
+const rpmValue = (s: string) => Number(s.replace(' rpm', '').replace('−', '-').replace('+', ''));
+
+describe('boat sheets of a boat with sea trials', () => {
+  const b = trialBoat();
+  const result = analyseBoat({ boat: b, project: ctxFor(b).project });
+  const cal = result.calibrated!;
+
+  it('headline the spec sheet with the calibrated WOT, the trial dates and the data-sheet figure beside it', () => {
+    const scene = sheet(b, 'specSheet', A4);
+    expect(textOf(scene, 'wot-headline')).toBe(
+      `Calibrated WOT ${rpmText(cal.wot.nominal.speedRpm)} rpm (band ${rpmBandText(cal.wot.low.speedRpm, cal.wot.high.speedRpm)}), ${Math.round(cal.wot.nominal.powerKw)} kW (${Math.round(cal.wot.nominal.powerKw / 0.7456998715822702)} hp): ${cal.wot.nominal.statusText}`,
+    );
+    const under = textOf(scene, 'wot-verdict');
+    expect(under).toContain('Calibrated to sea trials of 2026-06-02, 2026-06-09');
+    expect(under).toContain(`data-sheet model ${rpmText(result.wot.nominal.speedRpm)} rpm`);
+    expect(under).toContain('Calibrated bands cover');
+    // The engine is 4 % down on its data sheet: calibration moves the fitted impeller's WOT below the data-sheet figure.
+    expect(cal.wot.nominal.speedRpm).toBeLessThan(result.wot.nominal.speedRpm - 10);
+  });
+
+  it('prints the alternatives on the calibrated model, the data-sheet rpm beside them and an "Across the band" column', () => {
+    const rows = tableRows(sheet(b, 'specSheet', A4), 'alternatives-table');
+    expect(rows[0]).toEqual(['Impeller', 'WOT band', 'Most likely', 'Data sheet', 'Power (kW)', 'Top (kn, est.)', 'Status', 'Across the band']);
+    for (const [i, a] of result.alternatives.entries()) {
+      expect(rows[i + 1][1]).toBe(rpmBandText(a.calibratedBand!.low.speedRpm, a.calibratedBand!.high.speedRpm));
+      expect(rows[i + 1][2]).toBe(rpmText(a.calibratedBand!.nominal.speedRpm));
+      expect(rows[i + 1][3]).toBe(rpmText(a.band.nominal.speedRpm));
+    }
+  });
+
+  it('states the residual convention in the trial table header and prints residuals that equal model − measured as shown', () => {
+    const rows = tableRows(sheet(b, 'specSheet', A4), 'trials-table');
+    const header = rows[0];
+    expect(header).toContain(RESIDUAL_HEADER);
+    expect(RESIDUAL_HEADER).toBe('Model − measured');
+    const [measured, model, residual] = ['Measured WOT', 'Calibrated model', RESIDUAL_HEADER].map((h) => header.indexOf(h));
+    expect(rows.slice(1)).toHaveLength(2);
+    for (const [i, row] of rows.slice(1).entries()) {
+      // Every rpm to 1 rpm, and the residual adds up from the two printed figures.
+      expect(row[measured]).toMatch(/^\d+ rpm$/);
+      expect(row[model]).toMatch(/^\d+ rpm$/);
+      expect(rpmValue(row[residual])).toBe(rpmValue(row[model]) - rpmValue(row[measured]));
+      // Same sign as the analysis's predicted − measured (the readings were offset by +37 and −23 rpm).
+      const t = cal.calibration.trials[i];
+      expect(Math.sign(rpmValue(row[residual]))).toBe(Math.sign(Math.round(t.predictedRpm) - Math.round(t.wotRpm)));
+    }
+    expect(rows.slice(1).map((r) => Math.sign(rpmValue(r[residual])))).toEqual([-1, 1]);
+  });
+
+  it('puts the calibrated range and the measured rpm with its date on the console card, numbers large', () => {
+    const scene = sheet(b, 'consoleCard', CARD);
+    const range = texts(scene).find((t) => t.role === 'wot-range')!;
+    expect(range.text).toBe(rpmBandText(cal.wot.low.speedRpm, cal.wot.high.speedRpm));
+    expect(range.sizePt).toBeGreaterThanOrEqual(24);
+    const measured = texts(scene).find((t) => t.role === 'wot-measured')!;
+    expect(measured.text).toBe(`Measured ${b.trials[0].wotRpm} rpm on 2026-06-02.`);
+    expect(textOf(scene)).toContain('calibrated to sea trials of 2026-06-02, 2026-06-09');
+    expect(textOf(scene, 'table-cell')).toContain(`${rpmText(cal.cruise[0].speedRpm!)} rpm`);
+  });
+
+  it('rests the upgrade sheet on the calibrated model and marks rpm targets above the window', () => {
+    const scene = sheet(b, 'upgradeSheet', A4);
+    const upgrade = tableRows(scene, 'upgrade-table');
+    expect(upgrade[1].slice(0, 2)).toEqual(['As now', rpmText(cal.wot.nominal.speedRpm)]);
+    const gains = tableRows(scene, 'rpm-gain-table');
+    expect(gains[0]).toEqual(['Gain', 'Target WOT', 'Power change needed', 'Target against the window']);
+    expect(gains.slice(1)).toHaveLength(cal.rpmGains.length);
+    for (const [i, g] of cal.rpmGains.entries()) {
+      const row = gains[i + 1];
+      expect(row[3]).toBe(TARGET_WORDS[g.window]);
+      if (g.targetRpm > b.engine.limits.windowHighRpm) expect(row[3]).not.toBe('Within window');
+      if (g.window === 'beyondMax') expect(row[2]).toBe('–');
+    }
+    expect(gains.some((r) => r[3] === 'Above window: not a target')).toBe(true);
+    expect(gains.some((r) => r[0].endsWith('(window top)') && r[1] === `${rpmText(b.engine.limits.windowHighRpm)} rpm` && r[3] === 'Within window')).toBe(true);
+  });
+});
+
+describe('boat sheets of a boat without sea trials', () => {
+  it.each([
+    ['specSheet', A4],
+    ['consoleCard', CARD],
+    ['upgradeSheet', A4],
+  ] as const)('%s mentions no calibration and prints the data-sheet headline', (kind, paper) => {
+    const scene = sheet(boat, kind, paper);
+    const all = textOf(scene);
+    expect(all).not.toMatch(/calibrated to|Calibrated WOT|Calibrated bands|data-sheet model|Data sheet|Measured \d+ rpm on/);
+    if (kind === 'specSheet') expect(textOf(scene, 'wot-headline')).toMatch(/^Predicted WOT /);
+  });
+});
