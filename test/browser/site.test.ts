@@ -132,13 +132,36 @@ describe('the built demo site in Chromium', { timeout: 600_000 }, () => {
         const keys = await charts
           .nth(i)
           .locator('svg [data-role="absorption-curve"]')
-          .evaluateAll((els) => [...new Set(els.map((e) => e.getAttribute('data-key')))].sort());
-        const expected = results.charts[i].impellers.map((imp: { impellerId: string }) => `impeller:${imp.impellerId}`).sort();
-        expect(keys, `${href} chart ${i}`).toEqual(expected);
+          .evaluateAll((els) => els.map((e) => e.getAttribute('data-key') as string));
+        // One absorption curve per impeller in each engine variant's panel.
+        const chart = results.charts[i];
+        const expected = chart.impellers.flatMap((imp: { impellerId: string }) =>
+          chart.variants.map(() => `impeller:${imp.impellerId}`),
+        );
+        expect(keys.sort(), `${href} chart ${i}`).toEqual(expected.sort());
         // Text alternative beside the chart.
         expect((await charts.nth(i).locator('.text-alternative p').textContent())?.length ?? 0).toBeGreaterThan(40);
       }
       await family.close();
+    }
+  });
+
+  it('draws every alternative impeller on each boat\'s spec sheet', async () => {
+    const { page: index } = await open('index.html');
+    const boatHrefs = await index.$$eval('#boats a', (as) => as.map((a) => a.getAttribute('href') as string));
+    await index.close();
+    expect(boatHrefs.length).toBeGreaterThan(0);
+    for (const href of boatHrefs) {
+      const results = JSON.parse(readFileSync(join(outDir, 'results', 'boats', `${href.split('/')[1]}.json`), 'utf8'));
+      const { page } = await open(href);
+      const kinds = await page.$$eval('figure.sheet', (fs) => fs.map((f) => f.getAttribute('data-sheet-kind')));
+      expect(kinds, href).toEqual(['specSheet', 'consoleCard', 'upgradeSheet']);
+      const keys = await page
+        .locator('figure.sheet[data-sheet-kind="specSheet"] svg [data-role="absorption-curve"]')
+        .evaluateAll((els) => els.map((e) => e.getAttribute('data-key')));
+      const expected = results.alternatives.map((a: { impellerId: string }) => `impeller:${a.impellerId}`);
+      expect(keys.sort(), href).toEqual(expected.sort());
+      await page.close();
     }
   });
 
