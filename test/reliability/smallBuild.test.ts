@@ -4,6 +4,7 @@
  * located error naming the code point; over-revving and lugging fits are warned about on every sheet of
  * the boat; a failing build leaves the previous output untouched and a removed boat leaves no files.
  */
+import { spawnSync } from 'node:child_process';
 import { readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { findAll, textContent } from 'domutils';
@@ -73,6 +74,13 @@ describe('hostile text in names and notes', () => {
   it('prints in the PDF with the embedded font: accented and Greek letters, quotes and markup characters come back as text', () => {
     const text = folded(pdfPages(join(out, 'sheets/spec-greyling.pdf')).join(' '));
     for (const s of [HOSTILE.boatName, HOSTILE.shopName, HOSTILE.cruiseLabel]) expect(text).toContain(s);
+    // Every font embedded, and only the sheet font (poppler's pdffonts: name, type, encoding, emb, sub, uni, …).
+    const fonts = spawnSync('pdffonts', [join(out, 'sheets/spec-greyling.pdf')], { encoding: 'utf8' }).stdout.split('\n').slice(2).filter(Boolean);
+    expect(fonts.length).toBeGreaterThan(0);
+    for (const row of fonts) {
+      expect(row).toMatch(/\+SourceSans3-(Regular|Bold)\s/);
+      expect(row.split(/\s+/).slice(-5, -2), row).toEqual(['yes', 'yes', 'yes']);
+    }
   });
 
   it.each([
