@@ -8,7 +8,7 @@ import type { DataError } from '../data/types.ts';
 import { checkOutputFolder, createStaging, discardStaging, swapIn } from './atomicDir.ts';
 import { buildDateIso } from './dateIso.ts';
 import type { BuildCache } from './renderCache.ts';
-import { createRenderPool } from './renderPool.ts';
+import { createRenderPool, type SheetRenderer } from './renderPool.ts';
 import { writePages } from './runEleventy.ts';
 import { writeSiteFiles, type SiteCounts } from './siteFiles.ts';
 import { unprintableText } from './unprintable.ts';
@@ -21,6 +21,8 @@ export interface BuildOptions {
   readonly onProgress?: (done: number, total: number) => void;
   /** Reuse rendered sheets across builds in one process (dev server, benchmarks). */
   readonly cache?: BuildCache;
+  /** A long-lived render pool to use (and leave running); by default one is started and closed. */
+  readonly renderer?: SheetRenderer;
 }
 
 export type BuildOutcome =
@@ -44,7 +46,7 @@ export async function buildSite(opts: BuildOptions): Promise<BuildOutcome> {
   if (unprintable.length > 0) return { ok: false, errorsText: formatDataErrors(unprintable, 'problem'), warningsText };
   const dateIso = buildDateIso({ sourceDateEpoch: opts.sourceDateEpoch, issueDate: loaded.project.site.issueDate });
   const staging = createStaging(opts.outDir);
-  const renderer = createRenderPool();
+  const renderer = opts.renderer ?? createRenderPool();
   try {
     const { site, counts } = await writeSiteFiles({
       project: loaded.project,
@@ -61,6 +63,6 @@ export async function buildSite(opts: BuildOptions): Promise<BuildOutcome> {
     discardStaging(staging);
     throw error;
   } finally {
-    await renderer.close();
+    if (!opts.renderer) await renderer.close();
   }
 }

@@ -7,10 +7,13 @@ import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
 import type { Scene } from '../scene/types.ts';
 import type { RenderedSheet } from './renderCache.ts';
-import type { RenderReply } from './renderWorker.ts';
+import type { PdfOptions } from '../render/index.ts';
+import type { RenderJob, RenderReply, RenderTask } from './renderWorker.ts';
 
 export interface SheetRenderer {
   render(scene: Scene): Promise<RenderedSheet>;
+  /** One PDF of many scenes (a book). */
+  renderBook(scenes: readonly Scene[], options: PdfOptions): Promise<Uint8Array>;
   close(): Promise<void>;
 }
 
@@ -19,41 +22,48 @@ interface Pending {
   readonly reject: (e: Error) => void;
 }
 
-/** Starts `size` render workers (default: the number of cores). */
+/** A pool of `size` render workers (default: the number of cores), started on the first render. */
 export function createRenderPool(opts: { size?: number } = {}): SheetRenderer {
   const size = Math.max(1, opts.size ?? availableParallelism());
   const pending = new Map<number, Pending>();
   const load = new Map<Worker, number>();
   let nextId = 0;
-  for (let i = 0; i < size; i += 1) {
-    // A plain-JS boot file registers tsx inside the thread (worker threads do not inherit it).
-    const worker = new Worker(new URL('./renderWorkerBoot.js', import.meta.url));
-    worker.on('message', (reply: RenderReply) => {
-      load.set(worker, (load.get(worker) ?? 1) - 1);
-      const job = pending.get(reply.id);
-      pending.delete(reply.id);
-      if (!job) return;
-      if (reply.ok) job.resolve({ svg: reply.svg, pdf: reply.pdf, png: reply.png });
-      else job.reject(Object.assign(new Error(reply.message), { name: reply.name }));
-    });
-    worker.on('error', (error) => {
-      for (const job of pending.values()) job.reject(error);
-      pending.clear();
-    });
-    load.set(worker, 0);
-  }
-  return {
-    render(scene) {
-      const [worker] = [...load.entries()].sort((a, b) => a[1] - b[1])[0];
-      const id = (nextId += 1);
-      load.set(worker, (load.get(worker) ?? 0) + 1);
-      return new Promise<RenderedSheet>((resolve, reject) => {
-        pending.set(id, { resolve, reject });
-        worker.postMessage({ id, scene });
+  const start = () => {
+    for (let i = 0; i < size; i += 1) {
+      // A plain-JS boot file registers tsx inside the thread (worker threads do not inherit it).
+      const worker = new Worker(new URL('./renderWorkerBoot.js', import.meta.url));
+      worker.on('message', (reply: RenderReply) => {
+        load.set(worker, (load.get(worker) ?? 1) - 1);
+        const job = pending.get(reply.id);
+        pending.delete(reply.id);
+        if (!job) return;
+        if (reply.ok) job.resolve({ svg: reply.svg, pdf: reply.pdf, png: reply.png });
+        else job.reject(Object.assign(new Error(reply.message), { name: reply.name }));
       });
-    },
+      worker.on('error', (error) => {
+        for (const job of pending.values()) job.reject(error);
+        pending.clear();
+      });
+      load.set(worker, 0);
+    }
+  };
+  const submit = (task: RenderTask): Promise<RenderedSheet> => {
+    if (load.size === 0) start();
+    const [worker] = [...load.entries()].sort((a, b) => a[1] - b[1])[0];
+    const id = (nextId += 1);
+    load.set(worker, (load.get(worker) ?? 0) + 1);
+    return new Promise<RenderedSheet>((resolve, reject) => {
+      pending.set(id, { resolve, reject });
+      const job: RenderJob = { ...task, id };
+      worker.postMessage(job);
+    });
+  };
+  return {
+    render: (scene) => submit({ kind: 'sheet', scene }),
+    renderBook: async (scenes, options) => (await submit({ kind: 'book', scenes, options })).pdf,
     async close() {
       await Promise.all([...load.keys()].map((w) => w.terminate()));
+      load.clear();
     },
   };
 }

@@ -6,7 +6,7 @@
 import { join } from 'node:path';
 import { analyseBoat, analyseWallChart } from '../analysis/index.ts';
 import type { Book, Project } from '../data/types.ts';
-import { renderPdf } from '../render/index.ts';
+import { renderPdf, type PdfOptions } from '../render/index.ts';
 import { FONT_FILES } from '../scene/fonts.ts';
 import type { Scene } from '../scene/types.ts';
 import { PACKAGE_ROOT } from './eleventySetup.ts';
@@ -40,18 +40,25 @@ export interface SiteFilesArgs {
 }
 
 /** One PDF for the whole book, a bookmark per sheet; reused while its scenes and title are unchanged. */
-async function bookPdf(args: { book: Book; scenes: readonly Scene[]; dateIso: string; cache?: BuildCache }): Promise<Uint8Array> {
+async function bookPdf(args: {
+  book: Book;
+  scenes: readonly Scene[];
+  dateIso: string;
+  cache?: BuildCache;
+  renderer?: SheetRenderer;
+}): Promise<Uint8Array> {
   const { book, scenes } = args;
   const key = args.cache ? jsonHash({ title: book.title, audience: book.audience, scenes: scenes.map(sceneHash) }) : '';
   const cached = args.cache?.books.get(key);
   if (cached) return cached;
-  const pdf = await renderPdf(scenes, {
+  const options: PdfOptions = {
     title: book.title,
     subject: `Impeller matching chart book for the ${book.audience}`,
     keywords: ['waterjet', 'impeller', 'matching', book.audience],
     dateIso: args.dateIso,
     outline: scenes.map((s) => s.title),
-  });
+  };
+  const pdf = args.renderer ? await args.renderer.renderBook(scenes, options) : await renderPdf(scenes, options);
   args.cache?.books.set(key, pdf);
   return pdf;
 }
@@ -66,11 +73,12 @@ export async function writeSiteFiles(args: SiteFilesArgs): Promise<{ site: SiteD
   const sheets = drawn.views;
   const bookScenes = drawn.scenes;
 
-  for (const book of project.books) {
-    const scenes = (plan.byBook.get(book.id) ?? []).map((slug) => bookScenes.get(slug) as Scene);
-    if (scenes.length === 0) continue;
-    files.write(`books/${book.id}.pdf`, await bookPdf({ book, scenes, dateIso, cache: args.cache }));
-  }
+  // Books render side by side in the pool; files are written in book order.
+  const books = project.books
+    .map((book) => ({ book, scenes: (plan.byBook.get(book.id) ?? []).map((slug) => bookScenes.get(slug) as Scene) }))
+    .filter((b) => b.scenes.length > 0);
+  const pdfs = await Promise.all(books.map((b) => bookPdf({ ...b, dateIso, cache: args.cache, renderer: args.renderer })));
+  books.forEach((b, i) => files.write(`books/${b.book.id}.pdf`, pdfs[i]));
 
   const boatResults = new Map(project.boats.map((boat) => [boat.id, analyseBoat({ boat, project })]));
   for (const [id, result] of boatResults) files.write(`results/boats/${id}.json`, stableJson(result));
