@@ -69,8 +69,9 @@ export function calibratedBand(args: { inst: Installation; cal: Calibration; imp
   const limits = base.engine.limits;
   const tol = base.family.tolerancePct / 100;
   const ratings = triedImpellerIds(cal).has(impeller.id) ? [1] : [1 - tol, 1 + tol];
-  // Power factors relative to the calibrated engine (its condition factor already holds the fitted one).
-  const powers = spread(1, cal.powerFactorSe === null ? null : cal.powerFactorSe / cal.powerFactor);
+  // Power factors relative to the calibrated engine (its condition factor already holds the fitted one). The
+  // factor was fitted as ln γ with standard error SE/γ, so its corners are γ·e^(± 2·SE/γ): always positive.
+  const powers = cal.powerFactorSe === null ? [1] : spread(0, cal.powerFactorSe / cal.powerFactor).map(Math.exp);
   const exponents = spread(cal.exponent, cal.mode === 'exponentAndCondition' || cal.mode === 'exponentAndRatings' ? cal.exponentSe : null);
   const corners = exponents.flatMap((exponent) =>
     ratings.flatMap((ratingFactor) =>
