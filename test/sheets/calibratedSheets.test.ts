@@ -1,9 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { analyseBoat, boatInstallation } from '../../src/analysis/index.ts';
 import type { Boat, Paper, Project, SheetRequest } from '../../src/data/types.ts';
-import { solveInstallation } from '../../src/model/index.ts';
+import { solveInstallation, type MatchStatus } from '../../src/model/index.ts';
 import type { Scene, SceneNode, TextNode } from '../../src/scene/types.ts';
 import { sheetScene } from '../../src/sheets/index.ts';
+import { cardWarning } from '../../src/sheets/consoleCard.ts';
 import { rpmBandText, rpmText } from '../../src/sheets/kit/format.ts';
 import { RESIDUAL_HEADER } from '../../src/sheets/trialTables.ts';
 import { TARGET_WORDS } from '../../src/sheets/upgradeSheet.ts';
@@ -131,5 +132,22 @@ describe('boat sheets of a boat without sea trials', () => {
     const all = textOf(scene);
     expect(all).not.toMatch(/calibrated to|Calibrated WOT|Calibrated bands|data-sheet model|Data sheet|Measured \d+ rpm on/);
     if (kind === 'specSheet') expect(textOf(scene, 'wot-headline')).toMatch(/^Predicted WOT /);
+  });
+});
+
+describe('cardWarning()', () => {
+  const limits = { idleRpm: 700, windowLowRpm: 4800, windowHighRpm: 5200, maxRpm: 5400 };
+  const point = (speedRpm: number, status: MatchStatus) => ({ speedRpm, powerKw: 100, status, statusText: '', unusedPowerKw: 0 });
+  const band = (low: MatchStatus, nominal: MatchStatus, high: MatchStatus) => ({ low: point(4700, low), nominal: point(5000, nominal), high: point(5300, high), worstStatus: nominal, verdict: '' });
+
+  it('warns firmly when the most likely WOT over-revs or lugs, naming the limiter or the window', () => {
+    expect(cardWarning(band('revLimited', 'revLimited', 'revLimited'), limits)).toBe('Warning: over-revs, runs into the 5400 rpm limiter. Have a heavier impeller fitted.');
+    expect(cardWarning(band('belowWindow', 'belowWindow', 'matched'), limits)).toBe('Warning: lugs below the WOT window (4800–5200 rpm). Have a lighter impeller fitted.');
+  });
+
+  it('cautions when only an end of the range may, and stays silent for a good fit', () => {
+    expect(cardWarning(band('matched', 'matched', 'revLimited'), limits)).toMatch(/^Caution: may over-rev/);
+    expect(cardWarning(band('belowWindow', 'matched', 'aboveWindow'), limits)).toBe('Caution: may lug at the low end (window 4800–5200 rpm).');
+    expect(cardWarning(band('matched', 'matched', 'aboveWindow'), limits)).toBe('');
   });
 });
