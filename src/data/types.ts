@@ -165,8 +165,8 @@ export interface SiteConfig {
   readonly contactLine: string;
   readonly powerUnitFirst: PowerUnit;
   readonly speedUnit: SpeedUnit;
-  /** Replaces the built-in cautions when a shop must use its own (each entry one sentence). */
-  readonly cautions?: readonly string[];
+  /** The shop's own cautions (site.yaml `cautions`), printed after the built-in ones, which always print. */
+  readonly extraCautions?: readonly string[];
   /** Shown on every sheet as the data revision ("2026-11 rev 3"). */
   readonly dataRevision: string;
   /** ISO date printed on sheets when SOURCE_DATE_EPOCH is not set. */

@@ -9,6 +9,7 @@ import { wallChartScene } from './wallChart.ts';
 
 export { sheetSlug } from './slug.ts';
 export { LayoutError } from './kit/errors.ts';
+export { BUILT_IN_CAUTIONS, cautionsFor } from './kit/cautions.ts';
 export type { SheetContext } from './context.ts';
 
 /** The scene (mm) of one requested sheet; dates come from ctx.dateIso. Throws LayoutError when it cannot be laid out. */

@@ -9,7 +9,7 @@ export function normaliseSite(raw: RawSiteFile): SiteConfig {
     contactLine: raw.contact_line,
     powerUnitFirst: raw.units.power,
     speedUnit: raw.units.speed,
-    ...(raw.cautions !== undefined ? { cautions: raw.cautions } : {}),
+    ...(raw.cautions !== undefined ? { extraCautions: raw.cautions } : {}),
     dataRevision: raw.data_revision,
     issueDate: raw.issue_date,
   };

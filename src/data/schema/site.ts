@@ -15,7 +15,11 @@ export const siteFile = () =>
         .default({ power: 'kW', speed: 'kn' }),
       data_revision: text(),
       issue_date: isoDate(),
-      cautions: z.array(text(), { error: 'must be a list of sentences' }).min(1, { error: 'must list at least one caution, or be left out' }).optional(),
+      cautions: z
+        .array(text(), { error: 'must be a list of sentences' })
+        .min(1, { error: 'must list at least one caution, or be left out' })
+        .optional()
+        .describe("Extra cautions, printed after the built-in ones (sea trial, maker's maximum rpm, qualified marine technician), which always print; one sentence each"),
     })
     .meta({ title: 'matchbook site settings', description: 'Shop name, units and data revision: data/site.yaml' });
 

@@ -1,22 +1,32 @@
 /**
- * The cautions every sheet carries. Built-in wording is our own; a shop's SiteConfig.cautions replaces it
- * (each entry one sentence).
+ * The cautions every sheet and page carries. The built-in safety points always print, first; a shop's
+ * SiteConfig.extraCautions (site.yaml `cautions`) are added after them, never instead of them.
  */
 import type { SiteConfig } from '../../data/types.ts';
 import type { SceneNode } from '../../scene/types.ts';
 import { type Block, linePitchMm, paragraph, label, ascentMm } from './block.ts';
 import { STROKE, WARN, INK, stroke } from './style.ts';
 
-/** Built-in cautions, in the order printed. */
+/** Built-in cautions, in the order printed: sea-trial confirmation, maximum rpm, who does the work. */
 export const BUILT_IN_CAUTIONS: readonly string[] = [
   'These figures are predictions from published data and a physical model: estimates only. Confirm them by a sea trial before relying on them.',
   "Never run the engine past its maker's maximum rpm.",
   "Impeller changes and engine work belong to a qualified marine technician following the engine and jet makers' instructions and local regulations.",
 ];
 
-/** The cautions a sheet prints: the shop's own when it set them, else the built-in ones. */
+/**
+ * The cautions a sheet or page prints: the built-in ones, then the shop's extra ones in their order
+ * (an extra caution that repeats a built-in one word for word is printed once).
+ */
 export function cautionsFor(site: SiteConfig): readonly string[] {
-  return site.cautions && site.cautions.length > 0 ? site.cautions : BUILT_IN_CAUTIONS;
+  const builtIn = new Set(BUILT_IN_CAUTIONS.map(sameWords));
+  const extra = (site.extraCautions ?? []).filter((c) => !builtIn.has(sameWords(c)));
+  return [...BUILT_IN_CAUTIONS, ...extra];
+}
+
+/** Compares sentences by their words, ignoring case and spacing. */
+function sameWords(sentence: string): string {
+  return sentence.trim().replace(/\s+/g, ' ').toLowerCase();
 }
 
 /** Cautions block: a heading and one paragraph per caution, with a warning bar at the left edge. */
