@@ -32,13 +32,13 @@ function printPageName(scene: Scene): string {
   return `p${Math.round(scene.widthMm * 10)}x${Math.round(scene.heightMm * 10)}`;
 }
 
-function sheetView(slug: string, request: SheetRequest, scene: Scene, svg: string): SheetView {
+function sheetView(slug: string, request: SheetRequest, scene: Scene, files: OutputFiles): SheetView {
   return {
     slug,
     kind: request.kind,
     title: scene.title,
     description: scene.description,
-    svgInline: inlineSvg(svg, slug),
+    svgInline: () => inlineSvg(files.readText(`sheets/${slug}.svg`), slug),
     printPage: printPageName(scene),
     widthMm: scene.widthMm,
     heightMm: scene.heightMm,
@@ -72,7 +72,7 @@ export async function drawSheets(args: DrawArgs): Promise<{ views: Map<string, S
         args.files.write(`sheets/${slug}.svg`, rendered.svg);
         args.files.write(`sheets/${slug}.pdf`, rendered.pdf);
         args.files.write(`sheets/${slug}.png`, rendered.png);
-        views.set(slug, sheetView(slug, request, scene, rendered.svg));
+        views.set(slug, sheetView(slug, request, scene, args.files));
         args.onProgress?.(views.size, total);
       },
       (error: unknown) => {

@@ -1,5 +1,5 @@
 /** Writes files under one output folder, creating folders as needed and counting what it wrote. */
-import { copyFileSync, existsSync, mkdirSync, readdirSync, writeFileSync } from 'node:fs';
+import { copyFileSync, existsSync, mkdirSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 
 export interface OutputFiles {
@@ -9,6 +9,8 @@ export interface OutputFiles {
   copyDir(srcDir: string, relDir: string, suffix: string): string[];
   /** Copies one file when it exists; returns whether it did. */
   copyFile(src: string, relPath: string): boolean;
+  /** Reads back a text file written earlier. */
+  readText(relPath: string): string;
   /** Files written so far. */
   count(): number;
 }
@@ -35,6 +37,7 @@ export function outputFiles(root: string): OutputFiles {
       copyFileSync(src, target(relPath));
       return true;
     },
+    readText: (relPath) => readFileSync(join(root, relPath), 'utf8'),
     count: () => written,
   };
 }

@@ -29,8 +29,11 @@ export interface SheetView {
   readonly title: string;
   /** Text alternative of the whole chart (Scene.description). */
   readonly description: string;
-  /** The sheet's SVG, ready to inline (no XML prolog, ids made unique per sheet). */
-  readonly svgInline: string;
+  /**
+   * The sheet's SVG, ready to inline (no XML prolog, ids made unique per sheet). Read from the written
+   * file when a page asks, so a thousand-boat build does not hold every SVG in memory.
+   */
+  readonly svgInline: () => string;
   /** CSS page name for printing at paper size, e.g. "A4-landscape". */
   readonly printPage: string;
   readonly widthMm: number;

@@ -8,7 +8,7 @@ const sheet: SheetView = {
   kind: 'specSheet',
   title: 'Boat A: spec sheet',
   description: 'A chart of power against engine speed.',
-  svgInline: '<svg xmlns="http://www.w3.org/2000/svg" width="210mm" height="297mm" viewBox="0 0 210 297"></svg>',
+  svgInline: () => '<svg xmlns="http://www.w3.org/2000/svg" width="210mm" height="297mm" viewBox="0 0 210 297"></svg>',
   printPage: 'p2100x2970',
   widthMm: 210,
   heightMm: 297,
@@ -55,6 +55,7 @@ describe('pages', () => {
     expect(out).toContain('@page p2100x2970 { size: 210mm 297mm; margin: 0; }');
     expect(out).toContain('style="page: p2100x2970"');
     expect(out).toContain('<p id="desc-spec-a">A chart of power against engine speed.</p>');
+    expect(out).toContain('<div class="sheet-art"><svg xmlns="http://www.w3.org/2000/svg" width="210mm"');
     for (const ext of ['pdf', 'svg', 'png']) expect(out).toContain(`href="../../sheets/spec-a.${ext}" download`);
     expect(out).toContain('href="../../results/boats/a.json" download');
     expect(out).toContain('href="../../assets/site.css"');

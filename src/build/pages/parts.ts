@@ -45,9 +45,9 @@ export function downloads(sheet: SheetView, root: string): SafeHtml {
  */
 export function sheetFigure(sheet: SheetView, root: string): SafeHtml {
   const descId = `desc-${sheet.slug}`;
-  return html`<figure class="sheet" id="sheet-${sheet.slug}" data-sheet-kind="${sheet.kind}" style="page: ${sheet.printPage}">
-<div class="sheet-art" role="img" aria-labelledby="title-${sheet.slug}" aria-describedby="${descId}">${trustedHtml(sheet.svgInline)}</div>
-<figcaption><span id="title-${sheet.slug}" class="sheet-title">${sheet.title}</span>
+  return html`<figure class="sheet" id="sheet-${sheet.slug}" data-sheet-kind="${sheet.kind}" style="page: ${sheet.printPage}" aria-describedby="${descId}">
+<div class="sheet-art">${trustedHtml(sheet.svgInline())}</div>
+<figcaption><span class="sheet-title">${sheet.title}</span>
 <details class="text-alternative"><summary>Chart in words</summary><p id="${descId}">${sheet.description}</p></details>
 ${downloads(sheet, root)}</figcaption>
 </figure>`;
