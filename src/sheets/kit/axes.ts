@@ -8,7 +8,7 @@ import { measureTextMm } from '../../scene/text.ts';
 import { ascentMm, label, linePitchMm } from './block.ts';
 import { LayoutError } from './errors.ts';
 import type { PlotScales } from './scales.ts';
-import { xTickCount, yTickCount } from './scales.ts';
+import { xTickCount } from './scales.ts';
 import { GRID, INK, INK_SOFT, STROKE, stroke } from './style.ts';
 
 const TICK_MM = 1.5;
@@ -55,7 +55,7 @@ export function chartGrid(scales: PlotScales): SceneNode {
     const x = scales.x(t);
     nodes.push({ type: 'path', role: 'grid', segments: [{ op: 'M', x, y: area.y }, { op: 'L', x, y: area.y + area.height }], stroke: stroke(GRID, STROKE.grid) });
   }
-  for (const t of scales.yLeft.ticks(yTickCount(area))) {
+  for (const t of scales.yLeft.ticks(scales.yTicks)) {
     const y = scales.yLeft(t);
     nodes.push({ type: 'path', role: 'grid', segments: [{ op: 'M', x: area.x, y }, { op: 'L', x: area.x + area.width, y }], stroke: stroke(GRID, STROKE.grid) });
   }
@@ -81,7 +81,7 @@ export function chartAxes(scales: PlotScales, args: { sizePt: number; where: str
   const room = yLabelRoomMm(sizePt);
   const yAxis = (scale: PlotScales['yLeft'], side: 'left' | 'right'): void => {
     if (side === 'right' && !sides.right) return;
-    for (const t of scale.ticks(yTickCount(area))) {
+    for (const t of scale.ticks(scales.yTicks)) {
       const y = scale(t);
       if (y < area.y - 0.01 || y > bottom + 0.01) continue;
       const x = side === 'left' ? area.x : right;
