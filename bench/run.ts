@@ -21,8 +21,8 @@ const build = await runBuildBench();
 const report = [
   '# Performance',
   '',
-  'Measured by `npm run bench` (this file is rewritten by it). Goals from the project brief; timings',
-  'vary between runs by roughly ±10 %. Tests never time anything; speed lives here.',
+  'Measured by `npm run bench` (this file is rewritten by it). Goals from the project brief. Wall times',
+  'on a shared machine vary by a factor of two between runs. Tests never time anything; speed lives here.',
   '',
   `Machine: ${machine}.`,
   '',
