@@ -9,11 +9,44 @@ import fontkit from '@pdf-lib/fontkit';
 import { PDFDocument, PDFHexString, PDFName, PDFString } from 'pdf-lib';
 import type { PDFFont } from 'pdf-lib';
 import { FONT_FILES, SHAPING_FEATURES } from '../scene/fonts.ts';
+import { memoiseLayout } from '../scene/shapingCache.ts';
 import type { FontWeight, Scene, SceneNode } from '../scene/types.ts';
 import { addOutline } from './pdfOutline.ts';
 import { drawScene } from './pdfPage.ts';
 
 const PT_PER_MM = 72 / 25.4;
+
+/**
+ * pdf-lib asks fontkit to open the font for every document and shapes every string twice (width and
+ * encoding). Opening each weight once and remembering its layouts makes a sheet's PDF several times
+ * faster; each document still takes its own subset (createSubset is per embedder).
+ */
+const sharedFontkit = (() => {
+  const opened = new Map<string, ReturnType<typeof fontkit.create>>();
+  return {
+    create(data: Uint8Array, postscriptName?: string) {
+      const key = createHash('sha256').update(data).digest('hex');
+      let font = opened.get(key);
+      if (!font) {
+        font = memoiseLayout(fontkit.create(data, postscriptName));
+        opened.set(key, font);
+      }
+      return font;
+    },
+  };
+})();
+
+const fontBytes = (() => {
+  const read = new Map<FontWeight, Uint8Array>();
+  return (weight: FontWeight): Uint8Array => {
+    let bytes = read.get(weight);
+    if (!bytes) {
+      bytes = readFileSync(FONT_FILES[weight]);
+      read.set(weight, bytes);
+    }
+    return bytes;
+  };
+})();
 // Subset fonts carry a six-letter tag and '+' before the name (ISO 32000-1 §9.6.4); fixed per weight.
 const SUBSET_NAMES: Readonly<Record<FontWeight, string>> = { regular: 'MBKREG+SourceSans3-Regular', bold: 'MBKBLD+SourceSans3-Bold' };
 
@@ -47,13 +80,13 @@ export async function renderPdf(scenes: readonly Scene[], opts: PdfOptions): Pro
   const date = parseDate(opts.dateIso);
   if (scenes.length === 0) throw new RangeError(`the PDF "${opts.title}" has no pages; give it at least one sheet`);
   const doc = await PDFDocument.create({ updateMetadata: false });
-  doc.registerFontkit(fontkit);
+  doc.registerFontkit(sharedFontkit as unknown as typeof fontkit);
   const used = new Set<FontWeight>();
   for (const scene of scenes) weightsUsed(scene.root, used);
   const fonts: Record<FontWeight, PDFFont | undefined> = { regular: undefined, bold: undefined };
   for (const weight of ['regular', 'bold'] as const) {
     if (!used.has(weight)) continue;
-    fonts[weight] = await doc.embedFont(readFileSync(FONT_FILES[weight]), {
+    fonts[weight] = await doc.embedFont(fontBytes(weight), {
       subset: true,
       customName: SUBSET_NAMES[weight],
       // A fresh object each time: the shaping engine writes its defaults into the object it is given.

@@ -6,6 +6,7 @@
 import { readFileSync } from 'node:fs';
 import * as fontkit from 'fontkit';
 import { FONT_FILES, SHAPING_FEATURES } from './fonts.ts';
+import { memoiseLayout } from './shapingCache.ts';
 import type { Box, Colour, FontWeight, TextNode } from './types.ts';
 
 /** Millimetres per PostScript point (1 pt = 1/72 in, 1 in = 25.4 mm exactly). */
@@ -25,7 +26,7 @@ const fontFor = (() => {
     if (cached) return cached;
     const opened = fontkit.create(readFileSync(FONT_FILES[weight]));
     if (!('unitsPerEm' in opened)) throw new Error(`${FONT_FILES[weight]} is a font collection, expected one TrueType font`);
-    const font = opened as fontkit.Font;
+    const font = memoiseLayout(opened as fontkit.Font);
     cache.set(weight, font);
     return font;
   };
@@ -43,7 +44,7 @@ export function printableText(text: string): string {
 /** Advance width of a run of text in mm (sum of glyph advances, no kerning). */
 export function measureTextMm(args: TextArgs): number {
   const font = fontFor(args.weight);
-  const glyphs = font.layout(printableText(args.text), { ...SHAPING_FEATURES }).glyphs;
+  const glyphs = font.layout(printableText(args.text), SHAPING_FEATURES).glyphs;
   let advanceUnits = 0;
   for (const glyph of glyphs) advanceUnits += glyph.advanceWidth;
   return (advanceUnits / font.unitsPerEm) * args.sizePt * MM_PER_PT;
