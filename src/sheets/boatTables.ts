@@ -77,7 +77,7 @@ export function cruiseRows(boat: Boat, result: BoatResult, unit: PowerUnit, spee
   const cal = shown !== result.cruise && shown.some((row, i) => rpmOf(row) !== rpmOf(result.cruise[i]));
   return {
     sameRpmAsDataSheet: shown !== result.cruise && !cal,
-    columns: [left('Cruise setting'), right('Asked'), right('Engine rpm'), ...(cal ? [right(DATA_SHEET_HEADER)] : []), right(`Power (${unit})`), right(speedHeader(speedUnit)), right('Fuel (L/h, est.)'), left('Note')],
+    columns: [{ ...left('Cruise setting'), shorten: true }, right('Asked'), right('Engine rpm'), ...(cal ? [{ ...right(DATA_SHEET_HEADER), optional: true }] : []), right(`Power (${unit})`), right(speedHeader(speedUnit)), right('Fuel (L/h, est.)'), left('Note')],
     rows: shown.map((row, i) => [
       row.label,
       cruiseAsked(row, boat, unit),
@@ -121,7 +121,7 @@ export function alternativeRows(result: BoatResult, unit: PowerUnit, speedUnit: 
       left('Impeller'),
       right('WOT band'),
       right('Most likely'),
-      ...(cal ? [right(DATA_SHEET_HEADER)] : []),
+      ...(cal ? [{ ...right(DATA_SHEET_HEADER), optional: true }] : []),
       right(`Power (${unit})`),
       right(speedHeader(speedUnit, 'Top')),
       left('Status'),

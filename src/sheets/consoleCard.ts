@@ -67,8 +67,10 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
     .map((c) => [c.label, { text: `${rpmText(c.speedRpm as number)} rpm`, weight: 'bold' as const }, c.speedKn !== undefined ? `~${speedText(c.speedKn, speedUnit)} ${speedUnit}` : '–']);
   // A card first tries its full layout (level 0); a full card then closes its gaps and leaves out the line
   // naming the trials when it shows the measured rpm (1); then it sets the big range a tenth smaller and the
-  // cruise table at body size, and runs the checks on as one paragraph (2).
-  const build = (level: 0 | 1 | 2) => {
+  // cruise table at body size, and runs the checks on as one paragraph (2); then it drops cruise rows from
+  // the end, with a note saying how many are left for the spec sheet.
+  const build = (level: 0 | 1 | 2, shownCruise = cruiseRows.length) => {
+    const hiddenCruise = cruiseRows.length - shownCruise;
     const figures: Part[] = [
       ({ x, y, widthMm }): Block => {
         const head = label({ x, y: y + ascentMm(type.heading, 'bold'), text: 'Expected WOT rpm', sizePt: type.heading, weight: 'bold', role: 'heading', where });
@@ -97,8 +99,11 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
         });
         return { nodes: [head, node, ...subNodes], heightMm: cursor - y };
       },
-      ...(cruiseRows.length > 0
-        ? [({ x, y, widthMm }: { x: number; y: number; widthMm: number }): Block => table({ x, y, maxWidthMm: widthMm, columns: [{ header: 'Cruise', align: 'left' }, { header: 'Engine', align: 'right' }, { header: 'Speed (est.)', align: 'right' }], rows: cruiseRows, sizePt: level === 2 ? type.body : type.body + 1, minSizePt: type.min, fullWidth: true, role: 'cruise-table', where })]
+      ...(shownCruise > 0
+        ? [({ x, y, widthMm }: { x: number; y: number; widthMm: number }): Block => table({ x, y, maxWidthMm: widthMm, columns: [{ header: 'Cruise', align: 'left', shorten: true }, { header: 'Engine', align: 'right' }, { header: 'Speed (est.)', align: 'right' }], rows: cruiseRows.slice(0, shownCruise), sizePt: level === 2 ? type.body : type.body + 1, minSizePt: type.min, fullWidth: true, role: 'cruise-table', where })]
+        : []),
+      ...(hiddenCruise > 0
+        ? [({ x, y, widthMm }: { x: number; y: number; widthMm: number }): Block => paragraph({ x, y, widthMm, text: `${hiddenCruise} more cruise setting${hiddenCruise > 1 ? 's' : ''} on the spec sheet.`, sizePt: type.small, role: 'cruise-hidden-note', where })]
         : []),
     ];
     const advice: Part[] = [
@@ -130,7 +135,13 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
       : [stack({ x: box.x, y: box.y, widthMm: box.width, gapMm, parts: [...figures, ...advice] })];
   };
   const fits = (cols: ReturnType<typeof build>) => cols.every((c) => c.bottomMm <= box.y + box.height + 1e-6);
-  const columns = [build(0), build(1)].find(fits) ?? build(2);
+  // Last, the cruise table keeps its first rows only (a note counts the rest) rather than fail.
+  const tries = [() => build(0), () => build(1), ...Array.from({ length: cruiseRows.length + 1 }, (_, i) => () => build(2, cruiseRows.length - i))];
+  let columns = tries[0]();
+  for (const t of tries.slice(1)) {
+    if (fits(columns)) break;
+    columns = t();
+  }
   for (const c of columns) assertFits(box, c.bottomMm, where);
   const laid = { nodes: columns.flatMap((c) => c.nodes) };
   return assembleScene({

@@ -26,6 +26,8 @@ const CHART_MIN_MM = 45;
 /** Gap between the sheet's parts, and the least it closes to when the page is full. */
 const GAP_MM = 4;
 const TIGHT_GAP_MM = 2.5;
+/** The estimates note of a full sheet: the figures stay marked as estimates, the working is left out. */
+const COMPACT_NOTE = 'Speed and fuel are estimates; band and estimate explanations left out for room.';
 
 /** A heading followed by a table, as one part. */
 export function tablePart(args: { heading: string; columns: Column[]; rows: Cell[][]; header?: boolean; sizePt: number; minSizePt: number; headingPt: number; role: string; where: string }): Part {
@@ -44,7 +46,7 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
   const unit = site.powerUnitFirst;
   const result = analyseBoat({ boat, project: ctx.project });
   const type = typeScale(request.paper);
-  const frame = sheetFrame({ paper: request.paper, site, title: `${boat.name}: spec sheet`, subtitle: `${boat.engine.label} · ${boat.jet.label} · impeller ${result.impellerLabel}`, dateIso: ctx.dateIso, type, where });
+  const frame = sheetFrame({ paper: request.paper, site, title: boat.name, titleSuffix: ': spec sheet', subtitle: `${boat.engine.label} · ${boat.jet.label} · impeller ${result.impellerLabel}`, dateIso: ctx.dateIso, type, where });
   const box = frame.contentBox;
   const shownWot = result.calibrated?.wot ?? result.wot;
   const warn = isWarning(shownWot.nominal.status);
@@ -58,13 +60,13 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
   const cruiseHeading = !calibratedTo ? 'Cruise settings' : `Cruise settings, calibrated to ${calibratedTo}${cruise.sameRpmAsDataSheet ? ' (rpm as on the data sheet)' : ''}`;
   const alts = alternativeRows(result, unit, speedUnit);
   const trialCount = result.calibrated?.calibration.trials.length ?? 0;
-  const parts = (chartMm: number, trials: ReturnType<typeof trialRows>): Part[] => [
+  const parts = (chartMm: number, trials: ReturnType<typeof trialRows>, compact: boolean): Part[] => [
     tablePart({ heading: 'Fitted combination', ...fitted, header: false, ...common, role: 'fitted-table' }),
     ({ x, y, widthMm }) => {
       const head = paragraph({ x, y, widthMm, text: wotHeadline(result, unit), sizePt: type.heading, weight: 'bold', colour: warn ? WARN : INK, role: 'wot-headline', where });
       let cursor = y + head.heightMm + 0.5;
       const nodes = [...head.nodes];
-      for (const [text, sizePt] of [[subLines.body, type.body], [subLines.small, type.small]] as const) {
+      for (const [text, sizePt] of [[subLines.body, type.body], [compact ? '' : subLines.small, type.small]] as const) {
         if (text === '') continue;
         const line = paragraph({ x, y: cursor, widthMm, text, sizePt, role: 'wot-verdict', where });
         nodes.push(...line.nodes);
@@ -86,18 +88,20 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
         ]
       : []),
     ({ x, y, widthMm }) => {
-      const hidden = trials.hidden > 0 ? ` ${trials.hidden} older trial(s) not listed.` : '';
-      const calibration = trials.rows.length > 0 ? `${calibrationText(result)}${hidden} ` : '';
-      return paragraph({ x, y, widthMm, text: `${calibration}${estimatesNote(result)}`, sizePt: type.small, role: 'estimates-note', where });
+      const hidden = trials.hidden > 0 ? (trials.rows.length > 0 ? ` ${trials.hidden} older trial(s) not listed.` : ` The ${trials.hidden} sea trial(s) are not listed, for room.`) : '';
+      const calibration = trialCount > 0 ? `${compact ? '' : calibrationText(result)}${hidden} ` : '';
+      const estimates = compact ? COMPACT_NOTE : estimatesNote(result);
+      return paragraph({ x, y, widthMm, text: `${calibration}${estimates}`.trim(), sizePt: type.small, role: 'estimates-note', where });
     },
     ({ x, y, widthMm }) => cautionsBlock({ site, x, y, widthMm, sizePt: type.body, headingPt: type.heading, where }),
   ];
   // The chart gives up height when the tables, sea trials and notes need it (its figures are in the tables
   // too), down to CHART_MIN_MM, while the gaps between parts close from GAP_MM to TIGHT_GAP_MM; then older
-  // sea trials leave the table (down to the latest one); below that the sheet needs larger paper.
-  const layout = (shownTrials: number) => {
+  // sea trials leave the table (down to the latest one); then the band and estimate explanations shrink to
+  // one line saying so; then the trial table goes (the note counts it); below that the sheet needs larger paper.
+  const layout = (shownTrials: number, compact: boolean) => {
     const trials = trialRows(result, boat.jet.family.tolerancePct, { maxRows: shownTrials });
-    const at = (chartMm: number, gapMm: number) => stack({ x: box.x, y: box.y, widthMm: box.width, gapMm, parts: parts(chartMm, trials) });
+    const at = (chartMm: number, gapMm: number) => stack({ x: box.x, y: box.y, widthMm: box.width, gapMm, parts: parts(chartMm, trials, compact) });
     const first = at(CHART_MAX_MM, GAP_MM);
     const over = first.bottomMm - (box.y + box.height);
     if (over <= 0) return first;
@@ -105,9 +109,17 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
     const overTight = tight.bottomMm - (box.y + box.height);
     return at(Math.max(CHART_MIN_MM, CHART_MAX_MM - overTight), TIGHT_GAP_MM);
   };
-  let shown = Math.min(trialCount, MAX_TRIAL_ROWS);
-  let laid = layout(shown);
-  while (laid.bottomMm > box.y + box.height + 1e-6 && shown > 1) laid = layout(--shown);
+  const most = Math.min(trialCount, MAX_TRIAL_ROWS);
+  const steps: { shown: number; compact: boolean }[] = [
+    ...Array.from({ length: Math.max(1, most) }, (_, i) => ({ shown: most - i, compact: false })),
+    { shown: Math.min(most, 1), compact: true },
+    { shown: 0, compact: true },
+  ];
+  let laid = layout(steps[0].shown, steps[0].compact);
+  for (const step of steps.slice(1)) {
+    if (laid.bottomMm <= box.y + box.height + 1e-6) break;
+    laid = layout(step.shown, step.compact);
+  }
   assertFits(box, laid.bottomMm, where);
   return assembleScene({
     frame,

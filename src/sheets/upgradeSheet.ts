@@ -36,7 +36,10 @@ const CHART_STEPS_PCT: readonly number[] = [0, 25, 50];
 const CHART_DASHES: readonly (readonly number[])[] = [[], [6, 1.6], [1.2, 1.2]];
 /** Chart height as designed, and the least it may shrink to when the tables and notes need the room. */
 const CHART_MAX_MM = 88;
-const CHART_MIN_MM = 60;
+const CHART_MIN_MM = 45;
+/** Gap between the sheet's parts, and the least it closes to when the page is full. */
+const GAP_MM = 4;
+const TIGHT_GAP_MM = 2.5;
 
 /** Builds the upgrade-sheet scene. */
 export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
@@ -46,7 +49,7 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
   const unit = site.powerUnitFirst;
   const result = analyseBoat({ boat, project: ctx.project });
   const type = typeScale(request.paper);
-  const frame = sheetFrame({ paper: request.paper, site, title: `${boat.name}: engine upgrade`, subtitle: `${boat.engine.label} · ${boat.jet.label} · impeller ${result.impellerLabel} kept`, dateIso: ctx.dateIso, type, where });
+  const frame = sheetFrame({ paper: request.paper, site, title: boat.name, titleSuffix: ': engine upgrade', subtitle: `${boat.engine.label} · ${boat.jet.label} · impeller ${result.impellerLabel} kept`, dateIso: ctx.dateIso, type, where });
   const box = frame.contentBox;
   const common = { sizePt: type.body, minSizePt: type.min, headingPt: type.heading, where };
   const speedUnit = site.speedUnit;
@@ -102,7 +105,7 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
       { text: TARGET_WORDS[g.window], weight: aim ? ('regular' as const) : ('bold' as const), colour: aim ? INK : WARN },
     ];
   });
-  const parts = (chartMm: number): Part[] => [
+  const parts = (chartMm: number, compact: boolean): Part[] => [
     ({ x, y, widthMm }) =>
       paragraph({ x, y, widthMm, text: `Same impeller, more power: WOT rpm rises only a little, as the impeller takes power as rpm to the power ${kText} (x % more power, about x/${kText} % more rpm). Aim only for WOT inside the window (${rpmText(result.limits.windowLowRpm)}–${rpmText(result.limits.windowHighRpm)} rpm); never past the maximum (${rpmText(result.limits.maxRpm)} rpm).`, sizePt: type.body, where }),
     ({ x, y, widthMm }) => {
@@ -133,14 +136,20 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
       role: 'rpm-gain-table',
     }),
     ({ x, y, widthMm }) =>
-      paragraph({ x, y, widthMm, text: `Speeds are estimates (Crouch’s planing formula, hull constant ${Math.round(result.estimates.hull.crouchConstant)}, ${result.estimates.hull.source}). ${speedGainText}`, sizePt: type.small, role: 'speed-gain-note', where }),
+      paragraph({ x, y, widthMm, text: `Speeds are estimates (Crouch’s planing formula, hull constant ${Math.round(result.estimates.hull.crouchConstant)}, ${result.estimates.hull.source}). ${compact ? 'Power needed for more top speed left out for room.' : speedGainText}`, sizePt: type.small, role: 'speed-gain-note', where }),
     ({ x, y, widthMm }) => cautionsBlock({ site, x, y, widthMm, sizePt: type.body, headingPt: type.heading, where }),
   ];
-  // The chart gives up height first (its figures are in the table too); below CHART_MIN_MM the sheet needs larger paper.
-  const layout = (chartMm: number) => stack({ x: box.x, y: box.y, widthMm: box.width, gapMm: 4, parts: parts(chartMm) });
-  const first = layout(CHART_MAX_MM);
-  const over = first.bottomMm - (box.y + box.height);
-  const laid = over > 0 ? layout(Math.max(CHART_MIN_MM, CHART_MAX_MM - over)) : first;
+  // The chart gives up height first (its figures are in the table too) down to CHART_MIN_MM while the gaps
+  // close; then the speed-gain sentences give way to a note saying so; below that the sheet needs larger paper.
+  const layout = (compact: boolean) => {
+    const at = (chartMm: number, gapMm: number) => stack({ x: box.x, y: box.y, widthMm: box.width, gapMm, parts: parts(chartMm, compact) });
+    const first = at(CHART_MAX_MM, GAP_MM);
+    if (first.bottomMm <= box.y + box.height) return first;
+    const tight = at(CHART_MAX_MM, TIGHT_GAP_MM);
+    return at(Math.max(CHART_MIN_MM, CHART_MAX_MM - (tight.bottomMm - (box.y + box.height))), TIGHT_GAP_MM);
+  };
+  const full = layout(false);
+  const laid = full.bottomMm <= box.y + box.height + 1e-6 ? full : layout(true);
   assertFits(box, laid.bottomMm, where);
   return assembleScene({
     frame,

@@ -21,7 +21,7 @@ describe("the upgrade sheet's chart", () => {
   it('keeps its power range as tight when it shrinks below 70 mm (fewer ticks, not a wider range)', () => {
     const full = plotPowerRange(upgrade([]));
     const long = 'Shop caution: check the intake grate, the steering cables and the reverse bucket linkage before every trip, and after any grounding.';
-    const squeezed = plotPowerRange(upgrade([long, long.replace('Shop', 'Second shop')]));
+    const squeezed = plotPowerRange(upgrade([long, long.replace('Shop', 'Second shop'), long.replace('Shop', 'Third shop')]));
     expect(squeezed.heightMm).toBeLessThan(full.heightMm - 10);
     expect(squeezed.heightMm).toBeLessThan(50);
     // Each range holds the same curves; rounding may widen either by at most a quarter of what was asked.

@@ -5,20 +5,37 @@
 import type { Boat, PowerUnit } from '../../data/types.ts';
 import type { Box } from '../../scene/types.ts';
 import type { BoatResult } from '../../analysis/index.ts';
+import type { EngineCurve } from '../../model/index.ts';
 import { isWarning } from '../../analysis/index.ts';
 import { rpmText } from '../kit/format.ts';
 import { matchChart, type EngineSeries, type MatchChart } from './matchChart.ts';
 import { engineSeries, impellerSeries } from './series.ts';
 import { pointSuffix } from '../words.ts';
 
-/** Rpm and power ranges around a boat's WOT points and cruise settings. */
-export function boatDomains(result: BoatResult, extraPeakKw = 0): { rpm: [number, number]; powerKw: [number, number] } {
+/**
+ * Rpm and power ranges around a boat's WOT points and cruise settings. The power range also holds every
+ * engine curve drawn (site and published) across the rpm range, so no curve leaves the plot (never clipped).
+ */
+export function boatDomains(result: BoatResult, curves: readonly EngineCurve[] = []): { rpm: [number, number]; powerKw: [number, number] } {
   const rpms = result.alternatives.flatMap((a) => [a.band.low.speedRpm, a.band.high.speedRpm]);
   const cruiseRpms = result.cruise.flatMap((c) => (c.speedRpm !== undefined ? [c.speedRpm] : []));
-  const lo = Math.min(result.limits.windowLowRpm * 0.8, ...rpms, ...cruiseRpms) * 0.95;
+  const lo = Math.floor((Math.min(result.limits.windowLowRpm * 0.8, ...rpms, ...cruiseRpms) * 0.95) / 100) * 100;
+  const hi = result.limits.maxRpm * 1.04;
   const powers = result.alternatives.flatMap((a) => [a.band.low.powerKw, a.band.high.powerKw]);
-  const peak = Math.max(...powers, extraPeakKw);
-  return { rpm: [Math.floor(lo / 100) * 100, result.limits.maxRpm * 1.04], powerKw: [peak * 0.4, peak * 1.08] };
+  const drawn = curves.flatMap((c) => curveValuesKw(c, lo, hi));
+  const peak = Math.max(...powers, ...drawn);
+  return { rpm: [lo, hi], powerKw: [Math.min(peak * 0.4, ...drawn.map((kw) => kw * 0.96)), peak * 1.08] };
+}
+
+/**
+ * The values (kW) that bound an engine curve over [loRpm, hiRpm]: its ends there and its knots inside.
+ * The curve is monotone between knots (monotone Hermite pieces), so its extremes are among these.
+ */
+function curveValuesKw(curve: EngineCurve, loRpm: number, hiRpm: number): number[] {
+  const a = Math.min(Math.max(loRpm, curve.minRpm), curve.maxRpm);
+  const b = Math.min(Math.max(hiRpm, curve.minRpm), curve.maxRpm);
+  const knots = curve.pieces.map((p) => p.x0).filter((x) => x > a && x < b);
+  return [a, b, ...knots].map((x) => curve.powerKwUnchecked(x));
 }
 
 /** Match chart for one boat in a box. `engines` overrides the site curve (upgrade sheets). */
@@ -27,8 +44,7 @@ export function boatChart(args: { boat: Boat; result: BoatResult; box: Box; size
   const engines = args.engines ?? engineSeries({ family: boatFamily(boat), ambient: boat.site.ambient });
   const impellers = impellerSeries({ jet: boat.jet, driveLine: boat.driveLine, waterDensityKgM3: boat.water.densityKgM3 });
   const shown = args.points === 'fitted' ? result.alternatives.filter((a) => a.fitted === 'yes') : result.alternatives;
-  const peakKw = Math.max(...engines.map((e) => Math.max(...e.site.pieces.map((p) => Math.max(p.y0, p.y1)))));
-  const d = boatDomains(result, peakKw);
+  const d = boatDomains(result, engines.flatMap((e) => [e.site, ...(e.reference ? [e.reference] : [])]));
   return matchChart({
     box: args.box,
     sizePt: args.sizePt,

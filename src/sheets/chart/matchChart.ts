@@ -129,6 +129,8 @@ export function matchChart(args: MatchChartArgs): MatchChart {
   for (const { point: p, imp, cx, cy } of pointsOnChart(scales, args.points, args.impellers)) {
     data.push(marker({ shape: imp.style.marker, cx, cy, sizeMm: args.markerMm, colour: p.warn ? WARN : INK, fill: p.filled ? imp.style.colour : PAPER_WHITE, role: 'operating-point', key: p.key }));
     obstacles.push(markerBox(cx, cy, args.markerMm));
+    // Points that pile up (every impeller at the rev limit) and say the same thing share one label.
+    if (pointLabels.some((l) => l.text === p.text && Math.hypot(l.x - cx, l.y - cy) < args.markerMm)) continue;
     pointLabels.push({ key: p.key, x: cx, y: cy, text: p.text, sizePt, weight: p.warn ? 'bold' : 'regular', colour: p.warn ? WARN : INK, prefer: [[-1, -1], [1, 1]] });
   }
 

@@ -7,7 +7,7 @@ import type { Paper, SiteConfig } from '../../data/types.ts';
 import type { Box, SceneNode } from '../../scene/types.ts';
 import { cropMarks, pageFrame, type PageFrame } from '../../scene/paper.ts';
 import { fitText, measureTextMm } from '../../scene/text.ts';
-import { ascentMm, label, linePitchMm } from './block.ts';
+import { ascentMm, label, linePitchMm, paragraph } from './block.ts';
 import { LayoutError } from './errors.ts';
 import { INK, INK_SOFT, STROKE, stroke, type TypeScale } from './style.ts';
 
@@ -26,7 +26,10 @@ export const PAGE_SLOT_WIDTH_MM = 28;
 export function sheetFrame(args: {
   paper: Paper;
   site: SiteConfig;
+  /** The title's name part (a boat's name): shortened with an ellipsis and a "Full name" line when too long. */
   title: string;
+  /** Kept whole after the name (": spec sheet"). */
+  titleSuffix?: string;
   subtitle: string;
   dateIso: string;
   type: TypeScale;
@@ -43,28 +46,28 @@ export function sheetFrame(args: {
   // Shop block at the top right (name over contact); on narrow sheets it goes under the title instead.
   const shopName = { text: args.site.shopName, sizePt: type.heading, weight: 'bold' as const };
   const shopWidth = Math.max(measureTextMm(shopName), measureTextMm({ text: args.site.contactLine, sizePt: type.small, weight: 'regular' }));
-  const titleWidth = measureTextMm({ text: args.title, sizePt: type.title, weight: 'bold' });
+  const suffix = args.titleSuffix ?? '';
+  const fullTitle = `${args.title}${suffix}`;
+  const titleWidth = measureTextMm({ text: fullTitle, sizePt: type.title, weight: 'bold' });
   const sideBySide = titleWidth + shopWidth + 6 <= safe.width;
   const titleRoom = sideBySide ? safe.width - shopWidth - 6 : safe.width;
-  const fitted = fitText({ text: args.title, sizePt: type.title, weight: 'bold', maxWidthMm: titleRoom, minSizePt: type.heading });
-  if (fitted.shortened) {
-    throw new LayoutError(args.where, `the title "${args.title}" does not fit in ${titleRoom.toFixed(0)} mm; shorten the name or use wider paper`);
-  }
-  nodes.push(label({ x: safe.x, y: safe.y + ascentMm(fitted.sizePt, 'bold'), text: args.title, sizePt: fitted.sizePt, weight: 'bold', role: 'sheet-title', where: args.where }));
-  let cursor = safe.y + linePitchMm(fitted.sizePt, 'bold');
-  const line = (text: string, sizePt: number, weight: 'regular' | 'bold', role: string, colour: string): void => {
-    const fit = fitText({ text, sizePt, weight, maxWidthMm: titleRoom, minSizePt: type.min });
-    if (fit.shortened) throw new LayoutError(args.where, `"${text}" does not fit in ${titleRoom.toFixed(0)} mm; shorten it`);
-    nodes.push(label({ x: safe.x, y: cursor + ascentMm(fit.sizePt, weight), text, sizePt: fit.sizePt, weight, colour, role, where: args.where }));
-    cursor += linePitchMm(fit.sizePt, weight);
+  const title = fitTitle({ title: args.title, suffix, type, roomMm: titleRoom, where: args.where });
+  nodes.push(label({ x: safe.x, y: safe.y + ascentMm(title.sizePt, 'bold'), text: title.text, sizePt: title.sizePt, weight: 'bold', role: 'sheet-title', where: args.where }));
+  let cursor = safe.y + linePitchMm(title.sizePt, 'bold');
+  // Lines under the title wrap rather than fail: long engine, jet and shop names take a second line.
+  const lines = (text: string, sizePt: number, role: string): void => {
+    const p = paragraph({ x: safe.x, y: cursor, widthMm: titleRoom, text, sizePt, colour: INK_SOFT, role, where: args.where });
+    nodes.push(...p.nodes);
+    cursor += p.heightMm;
   };
-  line(args.subtitle, type.body, 'regular', 'sheet-subtitle', INK_SOFT);
+  if (title.shortened) lines(`Full name: ${args.title}`, type.small, 'full-name-note');
+  lines(args.subtitle, type.body, 'sheet-subtitle');
   if (sideBySide) {
     nodes.push(label({ x: right, y: safe.y + ascentMm(type.heading, 'bold'), ...shopName, anchor: 'end', role: 'shop-name', where: args.where }));
     nodes.push(label({ x: right, y: safe.y + linePitchMm(type.heading, 'bold') + ascentMm(type.small), text: args.site.contactLine, sizePt: type.small, anchor: 'end', colour: INK_SOFT, role: 'shop-contact', where: args.where }));
     cursor = Math.max(cursor, safe.y + linePitchMm(type.heading, 'bold') + linePitchMm(type.small));
   } else {
-    line(`${args.site.shopName} · ${args.site.contactLine}`, type.small, 'regular', 'shop-name', INK_SOFT);
+    lines(`${args.site.shopName} · ${args.site.contactLine}`, type.small, 'shop-name');
   }
   const headerBottom = cursor + 1.5;
   nodes.push(rule(safe.x, right, headerBottom, 'header-rule'));
@@ -97,6 +100,22 @@ export function sheetFrame(args: {
   const contentTop = headerBottom + 4;
   const contentBox = { x: safe.x, y: contentTop, width: safe.width, height: footerRuleY - 4 - contentTop };
   return { page, nodes, contentBox };
+}
+
+/**
+ * The title at its size, else shrunk to the heading size, else with the name part shortened by an
+ * ellipsis (the suffix kept whole); a title whose suffix alone cannot fit is a LayoutError.
+ */
+function fitTitle(args: { title: string; suffix: string; type: TypeScale; roomMm: number; where: string }): { text: string; sizePt: number; shortened: boolean } {
+  const { type, suffix } = args;
+  const whole = fitText({ text: `${args.title}${suffix}`, sizePt: type.title, weight: 'bold', maxWidthMm: args.roomMm, minSizePt: type.heading });
+  if (!whole.shortened) return { text: whole.text, sizePt: whole.sizePt, shortened: false };
+  const suffixMm = measureTextMm({ text: suffix, sizePt: type.heading, weight: 'bold' });
+  const name = fitText({ text: args.title, sizePt: type.heading, weight: 'bold', maxWidthMm: args.roomMm - suffixMm, minSizePt: type.heading });
+  if (name.text === '\u2026') {
+    throw new LayoutError(args.where, `the title "${args.title}${suffix}" does not fit in ${args.roomMm.toFixed(0)} mm even shortened; use wider paper`);
+  }
+  return { text: `${name.text}${suffix}`, sizePt: type.heading, shortened: true };
 }
 
 function rule(x0: number, x1: number, y: number, role: string): SceneNode {

@@ -2,8 +2,9 @@
  * Direct labels placed without collisions. Every label is measured with the font; candidate positions
  * are tried around its anchor point, nearest ring first (8 directions per ring). The first box that stays
  * inside the bounds and clears every placed label and obstacle wins; rings further out get a leader line.
- * When no ring fits, the label becomes a numbered callout (a small number placed the same way) and its
- * text goes into a note the sheet prints; when even the number finds no room, LayoutError.
+ * When no ring fits, the label becomes a numbered callout (a small number placed the same way, else at the
+ * nearest free spot anywhere in the bounds, with a leader) and its text goes into a note the sheet prints;
+ * when even the number finds no room anywhere, LayoutError.
  */
 import type { Box, Colour, FontWeight, SceneNode } from '../../scene/types.ts';
 import { fontExtentMm, measureTextMm } from '../../scene/text.ts';
@@ -59,6 +60,28 @@ function findSpot(args: { x: number; y: number; w: number; h: number; prefer: re
   return null;
 }
 
+/** Grid step (mm) of the last search for a callout number's spot anywhere in the bounds. */
+const FAR_STEP_MM = 1.5;
+
+/**
+ * The free spot nearest the anchor anywhere in the bounds (a leader line points home), for a callout
+ * number the rings could not place: a crowded corner of a chart still leaves room elsewhere.
+ */
+function farSpot(args: { x: number; y: number; w: number; h: number; bounds: Box; occupied: readonly Box[] }): { box: Box; ring: number } | null {
+  const { bounds, w, h } = args;
+  let best: { box: Box; ring: number; d: number } | null = null;
+  for (let y = bounds.y; y + h <= bounds.y + bounds.height; y += FAR_STEP_MM) {
+    for (let x = bounds.x; x + w <= bounds.x + bounds.width; x += FAR_STEP_MM) {
+      const box = { x, y, width: w, height: h };
+      const d = Math.hypot(x + w / 2 - args.x, y + h / 2 - args.y);
+      if (best && d >= best.d) continue;
+      if (args.occupied.some((o) => boxesOverlap(box, o, PAD_MM))) continue;
+      best = { box, ring: RINGS_MM.length, d };
+    }
+  }
+  return best && { box: best.box, ring: best.ring };
+}
+
 /** Places labels in order (earlier = higher priority); see the file comment for the rules. */
 export function placeLabels(requests: readonly LabelRequest[], opts: { bounds: Box; obstacles: readonly Box[]; where: string }): PlacedLabels {
   const occupied: Box[] = [...opts.obstacles];
@@ -92,7 +115,7 @@ export function placeLabels(requests: readonly LabelRequest[], opts: { bounds: B
     const number = notes.length + 1;
     const numText = String(number);
     const nw = measureTextMm({ text: numText, sizePt: req.sizePt, weight: 'bold' });
-    const numSpot = findSpot({ x: req.x, y: req.y, w: nw, h, prefer, bounds: opts.bounds, occupied });
+    const numSpot = findSpot({ x: req.x, y: req.y, w: nw, h, prefer, bounds: opts.bounds, occupied }) ?? farSpot({ x: req.x, y: req.y, w: nw, h, bounds: opts.bounds, occupied });
     if (!numSpot) {
       throw new LayoutError(opts.where, `no room for the label "${req.text}" or a callout number near (${req.x.toFixed(1)}, ${req.y.toFixed(1)}) mm; use larger paper or fewer series`);
     }

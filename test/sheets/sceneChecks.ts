@@ -1,0 +1,29 @@
+/** The print rules every sheet keeps, as one list of problems (empty when the scene passes). */
+import type { Paper } from '../../src/data/types.ts';
+import type { Scene } from '../../src/scene/types.ts';
+import { boxesOverlap, boxInside } from '../../src/sheets/kit/boxes.ts';
+import { MIN_STROKE_MM } from '../../src/sheets/kit/style.ts';
+import { leaves, markBox, texts } from './sceneWalk.ts';
+
+/** Marks outside the safe area, overlapping text boxes, type or strokes under the minimum, NaN-like text. */
+export function sceneProblems(scene: Scene, paper: Paper): string[] {
+  const problems: string[] = [];
+  for (const n of leaves(scene)) {
+    if (n.role === 'crop-mark') continue;
+    const box = markBox(n);
+    if (box && !boxInside(box, scene.safeBox, 0.01)) problems.push(`outside the safe area: ${n.role} ${n.type === 'text' ? n.text : ''}`);
+    if (n.type !== 'text' && n.type !== 'group' && n.stroke && n.stroke.widthMm < MIN_STROKE_MM) problems.push(`stroke under 0.5 pt: ${n.role}`);
+  }
+  const minPt = paper.size === 'A3' || paper.size === 'Tabloid' ? 10 : 8;
+  const boxes = texts(scene).map((t) => ({ t, box: markBox(t)! }));
+  for (const { t } of boxes) {
+    if (t.sizePt < minPt) problems.push(`type under ${minPt} pt: "${t.text}"`);
+    if (/NaN|Infinity|undefined|null/.test(t.text)) problems.push(`bad value in "${t.text}"`);
+  }
+  for (let i = 0; i < boxes.length; i++) {
+    for (let j = i + 1; j < boxes.length; j++) {
+      if (boxesOverlap(boxes[i].box, boxes[j].box, -0.01)) problems.push(`text overlaps: "${boxes[i].t.text}" / "${boxes[j].t.text}"`);
+    }
+  }
+  return problems;
+}
