@@ -23,6 +23,16 @@ export interface SiteViewArgs {
   readonly hasResultsDoc: boolean;
 }
 
+/** "boats/x.yaml": where a definition lives inside the data folder, the same wherever that folder is. */
+function dataPath(file: string): string {
+  return file.split(/[\\/]/).slice(-2).join('/');
+}
+
+/** A drive ratio as written: up to three decimals, no trailing zeros ("1", "1.55"). */
+function ratioText(ratio: number): string {
+  return String(Number(ratio.toFixed(3)));
+}
+
 function pick(sheets: ReadonlyMap<string, SheetView>, slugs: readonly string[] | undefined): SheetView[] {
   return (slugs ?? []).map((slug) => sheets.get(slug)).filter((s): s is SheetView => s !== undefined);
 }
@@ -39,7 +49,7 @@ function familyView(args: SiteViewArgs, family: EngineFamily): FamilyView {
       ['Maker', family.maker],
       ['Fuel', family.fuel],
       ['Variants', family.variants.map((v) => v.label).join('; ')],
-      ['Defined in', family.source.file],
+      ['Defined in', dataPath(family.source.file)],
     ],
     charts: pick(args.sheets, args.plan.byFamily.get(family.id)),
     tables: (args.familyResults.get(family.id) ?? []).flatMap((r) => wallChartTables(r, unit)),
@@ -64,12 +74,12 @@ function boatView(args: SiteViewArgs, boat: Boat): BoatView {
       ['Engine', result.engineLabel],
       ['Jet unit', result.jetLabel],
       ['Fitted impeller', result.impellerLabel],
-      ['Drive line', `ratio ${boat.driveLine.ratio.toFixed(3)}, efficiency ${(boat.driveLine.efficiency * 100).toFixed(1)} %`],
+      ['Drive line', `ratio ${ratioText(boat.driveLine.ratio)}, efficiency ${(boat.driveLine.efficiency * 100).toFixed(1)} %`],
       ['Water', `${boat.water.kind}, ${boat.water.densityKgM3.toFixed(1)} kg/m³`],
       ['Site', boat.site.label],
       ['Predicted WOT', `${rpmWithUnit(wot.nominal.speedRpm)} (${rpmRangeText(wot.low.speedRpm, wot.high.speedRpm)}), ${powerText(wot.nominal.powerKw, unit)}`],
       ['Verdict', wot.verdict],
-      ['Defined in', boat.source.file],
+      ['Defined in', dataPath(boat.source.file)],
     ],
     links: [
       { label: `Engine family: ${boat.engine.label}`, href: `families/${boat.engineFamilyId}/index.html` },

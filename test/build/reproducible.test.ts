@@ -30,14 +30,17 @@ function sandbox(): string {
 const EPOCH = { SOURCE_DATE_EPOCH: '1767225600' };
 
 describe('build output', () => {
-  it('is byte-identical for two builds of the same data in different folders', { timeout: 600_000 }, async () => {
+  it('is byte-identical for two builds of the same data in different folders, naming no folder of this machine', { timeout: 600_000 }, async () => {
+    // The same data copied to two places, built into two places, a second apart.
+    const [dataA, dataB] = [join(sandbox(), 'data'), join(sandbox(), 'copy', 'of-data')];
+    for (const dir of [dataA, dataB]) cpSync(join(REPO, 'data'), dir, { recursive: true });
     const a = join(sandbox(), 'site-a');
     const b = join(sandbox(), 'elsewhere', 'site-b');
-    const first = matchbook(['build', '--out', a], EPOCH);
+    const first = matchbook(['build', '--data', dataA, '--out', a], EPOCH);
     expect(first.status, first.stderr).toBe(0);
     await new Promise((done) => setTimeout(done, 1100)); // a different second on the clock
     // A folder that does not exist yet, two levels down.
-    const second = matchbook(['build', '--out', b], EPOCH);
+    const second = matchbook(['build', '--data', dataB, '--out', b], EPOCH);
     expect(second.status, second.stderr).toBe(0);
     const ta = tree(a);
     const tb = tree(b);
@@ -46,6 +49,7 @@ describe('build output', () => {
     for (const [path, bytes] of ta) expect(Buffer.compare(bytes, tb.get(path) as Buffer), path).toBe(0);
     // The printed date is the one SOURCE_DATE_EPOCH gives (1767225600 s = 2026-01-01 UTC).
     expect(ta.get('index.html')?.toString('utf8')).toContain('issued 2026-01-01');
+    for (const [path, bytes] of ta) expect(bytes.includes(dataA), path).toBe(false);
   });
 
   it('stays as it was when a data file breaks between two builds, and drops a removed boat', { timeout: 600_000 }, () => {
