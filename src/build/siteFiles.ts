@@ -100,11 +100,12 @@ export async function writeSiteFiles(args: SiteFilesArgs): Promise<{ site: SiteD
 
   const schemas = files.copyDir(join(PACKAGE_ROOT, 'schema'), 'schema', '.schema.json');
   const hasResultsDoc = files.copyFile(join(PACKAGE_ROOT, 'docs', 'results.md'), 'docs/results.md');
+  const hasDataFormatDoc = files.copyFile(join(PACKAGE_ROOT, 'docs', 'data-format.md'), 'docs/data-format.md');
   // The sheets' own font, so inline SVG and the pages look as the PDFs do on any machine.
   files.copyFile(FONT_FILES.regular, 'assets/fonts/SourceSans3-Regular.ttf');
   files.copyFile(FONT_FILES.bold, 'assets/fonts/SourceSans3-Bold.ttf');
 
-  const view = siteView({ project, dateIso, plan, sheets, boatResults, familyResults, schemas, hasResultsDoc });
+  const view = siteView({ project, dateIso, plan, sheets, boatResults, familyResults, schemas, hasResultsDoc, hasDataFormatDoc });
   const counts = {
     sheets: plan.sheets.length,
     books: project.books.length,

@@ -100,6 +100,8 @@ export interface SiteView {
   readonly schemas: readonly LinkView[];
   /** Where the results JSON shape is documented (docs/results.md copied into the site), if present. */
   readonly resultsDocHref?: string;
+  /** The full description of the data files (docs/data-format.md copied into the site), if present. */
+  readonly dataFormatDocHref?: string;
 }
 
 /**

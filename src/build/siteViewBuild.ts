@@ -19,8 +19,9 @@ export interface SiteViewArgs {
   readonly familyResults: ReadonlyMap<string, readonly WallChartResult[]>;
   /** File names of the JSON Schemas copied to schema/. */
   readonly schemas: readonly string[];
-  /** Whether docs/results.md was copied into the site. */
+  /** Whether docs/results.md and docs/data-format.md were copied into the site. */
   readonly hasResultsDoc: boolean;
+  readonly hasDataFormatDoc: boolean;
 }
 
 /** "boats/x.yaml": where a definition lives inside the data folder, the same wherever that folder is. */
@@ -135,5 +136,6 @@ export function siteView(args: SiteViewArgs): SiteView {
     })),
     schemas: args.schemas.map((name) => ({ label: name, href: `schema/${name}` })),
     resultsDocHref: args.hasResultsDoc ? 'docs/results.md' : undefined,
+    dataFormatDocHref: args.hasDataFormatDoc ? 'docs/data-format.md' : undefined,
   };
 }

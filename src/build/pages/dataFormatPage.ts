@@ -19,6 +19,7 @@ site conditions, cruise settings and sea-trial records.</li>
 <li><code>books/</code>: one file per chart book: the list of sheets to print together.</li>
 <li><code>site.yaml</code>: shop name, contact line, units shown first, data revision and issue date.</li>
 </ul>
+${site.dataFormatDocHref ? html`<p>Every field, its unit and its default: <a href="${root}${site.dataFormatDocHref}">data-format.md</a>.</p>` : ''}
 <h2>JSON Schemas</h2>
 ${site.schemas.length === 0
     ? html`<p>No schemas were found.</p>`
