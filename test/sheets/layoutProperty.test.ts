@@ -6,7 +6,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { Paper, PaperSize, Project, SheetRequest } from '../../src/data/types.ts';
-import { sheetScene } from '../../src/sheets/index.ts';
+import { LayoutError, sheetScene } from '../../src/sheets/index.ts';
 import { boatVariation, demoProject, variedBoat } from './fixtures/boatVariation.ts';
 import { sceneProblems } from './sceneChecks.ts';
 
@@ -24,6 +24,9 @@ function paper(size: PaperSize, orientation: 'portrait' | 'landscape' = 'portrai
   return { size, orientation, bleedMm: 0 };
 }
 
+/** Papers a page-sized sheet is not made for: it lays out, or refuses in words. */
+const OTHER_PAPERS: readonly Paper[] = [paper('A5'), paper('A6'), paper('Card4x6'), paper('A4', 'landscape'), paper('Letter', 'landscape'), paper('A5', 'landscape')];
+
 const kinds = ['specSheet', 'upgradeSheet', 'consoleCard'] as const;
 
 describe('boat sheets lay out for plausible boats (seeded property)', () => {
@@ -39,7 +42,25 @@ describe('boat sheets lay out for plausible boats (seeded property)', () => {
           expect(sceneProblems(scene, request.paper), `${kind} on ${request.paper.size} ${request.paper.orientation}`).toEqual([]);
         }
       }),
-      { seed: 20261103, numRuns: Number(process.env.MATCHBOOK_LAYOUT_RUNS ?? 150), endOnFailure: true },
+      { seed: Number(process.env.MATCHBOOK_LAYOUT_SEED ?? 20261103), numRuns: Number(process.env.MATCHBOOK_LAYOUT_RUNS ?? 150), endOnFailure: true },
+    );
+  });
+
+  it('on papers too small for a spec or upgrade sheet, it lays out or raises a LayoutError naming the boat and the fix', () => {
+    fc.assert(
+      fc.property(variation, fc.constantFrom('specSheet' as const, 'upgradeSheet' as const), (v, kind) => {
+        const boat = variedBoat(demo, v);
+        const project: Project = { ...demo, boats: demo.boats.map((b) => (b.id === boat.id ? boat : b)) };
+        const request = { kind, boatId: boat.id, paper: OTHER_PAPERS[v.paper % OTHER_PAPERS.length] } as SheetRequest;
+        try {
+          expect(sceneProblems(sheetScene(request, { project, dateIso: '2026-11-02' }), request.paper)).toEqual([]);
+        } catch (e) {
+          expect(e).toBeInstanceOf(LayoutError);
+          expect((e as Error).message).toContain(boat.id);
+          expect((e as Error).message).toMatch(/use (larger|wider) paper|shorten/);
+        }
+      }),
+      { seed: 20261104, numRuns: 40, endOnFailure: true },
     );
   });
 });
