@@ -1,18 +1,25 @@
 /**
  * Scene → SVG text. Translation only: every position and width comes from the scene.
  * The font is NOT embedded (a base64 @font-face would add ~300 kB per file); text is set in
- * 'Source Sans 3' with kerning off, so a viewer with the font (the PNG renderer is
- * handed our TTFs) draws runs exactly as wide as the widths measured in src/scene/text.ts.
+ * 'Source Sans 3' with kerning off, so a viewer with the font draws runs exactly as wide as the
+ * widths measured in src/scene/text.ts. For rasterising, text can instead be written as glyph
+ * outlines (`text: 'outlines'`), which a rasteriser draws without laying out any text.
  */
 import { FONT_FAMILY } from '../scene/fonts.ts';
 import { MM_PER_PT, printableText } from '../scene/text.ts';
 import type { ClipRect, Fill, PathSegment, Scene, SceneNode, Stroke, Tagged, TextNode } from '../scene/types.ts';
 import { assertDrawable } from './errors.ts';
+import { num } from './svgNumbers.ts';
+import { outlinedText } from './svgTextOutline.ts';
 
-/** Fixed precision for mm values (3 decimals = 1 µm) so snapshots are stable. */
-export function num(value: number): string {
-  const fixed = Number(value.toFixed(3));
-  return Object.is(fixed, -0) ? '0' : String(fixed);
+export { num };
+
+/** How text is written: real <text> elements (selectable, needs the font) or glyph outlines as paths. */
+export type SvgTextMode = 'text' | 'outlines';
+
+export interface SvgOptions {
+  /** Default 'text'. 'outlines' is for rasterising: no font needed, nothing to lay out. */
+  readonly text?: SvgTextMode;
 }
 
 // Beyond control characters, XML 1.0 forbids lone surrogates and U+FFFE/U+FFFF.
@@ -27,6 +34,7 @@ export function escapeXml(text: string): string {
 /** Per-render state: clip ids count up in document order, so ids are stable between runs. */
 interface Context {
   readonly defs: string[];
+  readonly textMode: SvgTextMode;
   clipCount: number;
 }
 
@@ -93,6 +101,14 @@ function textElement(node: TextNode): string {
   return `<text${a}>${escapeXml(node.text)}</text>`;
 }
 
+/** The text node as one filled path of its glyph outlines (an empty group when it has no ink). */
+function outlinedTextElement(node: TextNode): string {
+  assertDrawable(node);
+  const outline = outlinedText(node);
+  if (!outline) return `<g${attrs(tagAttrs(node))}/>`;
+  return `<path${attrs([['d', outline.d], ['transform', outline.transform], ['fill', escapeXml(node.colour)], ...tagAttrs(node)])}/>`;
+}
+
 function clipAttr(clip: ClipRect | undefined, ctx: Context): string | undefined {
   if (!clip) return undefined;
   ctx.clipCount += 1;
@@ -119,13 +135,13 @@ function element(node: SceneNode, ctx: Context): string {
       return `<circle${attrs([...geometry, ...paintAttrs(node.stroke, node.fill), ...tagAttrs(node)])}/>`;
     }
     case 'text':
-      return textElement(node);
+      return ctx.textMode === 'outlines' ? outlinedTextElement(node) : textElement(node);
   }
 }
 
 /** A self-contained SVG document of the scene, sized in mm with a mm viewBox. */
-export function renderSvg(scene: Scene): string {
-  const ctx: Context = { defs: [], clipCount: 0 };
+export function renderSvg(scene: Scene, opts: SvgOptions = {}): string {
+  const ctx: Context = { defs: [], textMode: opts.text ?? 'text', clipCount: 0 };
   const body = element(scene.root, ctx);
   const w = num(scene.widthMm);
   const h = num(scene.heightMm);
