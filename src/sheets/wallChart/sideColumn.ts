@@ -16,9 +16,18 @@ import { pointMarker } from './pointMarker.ts';
 /** Where the key's line samples end and its words start (mm), as in kit/legend.ts. */
 const SAMPLE_MM = 14;
 
-/** "Ember Reach, Swiftwater Two and Tarn Hollow": boat names without their bracketed descriptions. */
-function boatList(boats: readonly Boat[]): string {
+/** Most boats named in "(as fitted in …)"; a shop with a fleet on one pairing gets a count, not a wall of names. */
+export const MAX_NAMED_BOATS = 3;
+
+/**
+ * "Ember Reach, Swiftwater Two and Tarn Hollow": boat names without their bracketed descriptions; past
+ * MAX_NAMED_BOATS the first ones (in the data's order) and "and N more", so the side column holds any fleet.
+ */
+export function boatList(boats: readonly Boat[]): string {
   const names = boats.map((b) => b.name.replace(/\s*\(.*\)\s*$/, ''));
+  if (names.length > MAX_NAMED_BOATS) {
+    return `${names.slice(0, MAX_NAMED_BOATS).join(', ')} and ${names.length - MAX_NAMED_BOATS} more`;
+  }
   return names.length < 2 ? names.join('') : `${names.slice(0, -1).join(', ')} and ${names[names.length - 1]}`;
 }
 
