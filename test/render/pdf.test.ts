@@ -9,9 +9,9 @@ import { renderPdf } from '../../src/render/pdf.ts';
 import { renderPng } from '../../src/render/png.ts';
 import { textBox, textNode } from '../../src/scene/text.ts';
 import type { Scene } from '../../src/scene/types.ts';
-import { decodePng } from './pngPixels.ts';
+import { decodePng, differingPixels } from './pngPixels.ts';
 import type { Pixels } from './pngPixels.ts';
-import { everyNodeKindScene, sceneOf } from './scenes.ts';
+import { everyNodeKindScene, sceneOf, textRunsScene } from './scenes.ts';
 
 const OPTIONS = { title: 'Demo chart book', subject: 'Invented demo data', keywords: ['waterjet', 'impeller'], dateIso: '2024-05-01' };
 // 1 pt = 1/72 in, 1 in = 25.4 mm: A4 210 × 297 mm = 595.276 × 841.890 pt (ISO 216 sizes).
@@ -26,17 +26,7 @@ function poppler(tool: string, bytes: Uint8Array, args: readonly string[]): stri
   return execFileSync(`/usr/bin/${tool}`, [...args, file, ...output], { encoding: 'utf8' });
 }
 
-const TEXT_SCENE: Scene = sceneOf({
-  title: 'Text page',
-  children: [
-    textNode({ text: 'Predicted WOT 5450–5700 rpm', sizePt: 20, weight: 'bold', x: 20, y: 40 }),
-    textNode({ text: 'office fluff · Ωμέγα · Crème brûlée', sizePt: 16, weight: 'regular', x: 20, y: 70 }),
-    textNode({ text: 'Engine speed (rpm)', sizePt: 12, weight: 'regular', x: 15, y: 200, rotateDeg: 90 }),
-    textNode({ text: 'Right-aligned 5600 rpm', sizePt: 14, weight: 'regular', x: 190, y: 100, anchor: 'end' }),
-    textNode({ text: 'Centred caution', sizePt: 14, weight: 'bold', x: 105, y: 130, anchor: 'middle' }),
-    textNode({ text: 'Centred upright', sizePt: 14, weight: 'bold', x: 60, y: 250, anchor: 'middle', rotateDeg: 90 }),
-  ],
-});
+const TEXT_SCENE: Scene = textRunsScene();
 
 describe('renderPdf()', () => {
   let book: Uint8Array;
@@ -151,11 +141,7 @@ describe('renderPdf() as drawn by a PDF viewer', () => {
     const scene = everyNodeKindScene();
     const shapes = { ...scene, root: { ...scene.root, children: scene.root.children.filter((n) => n.type !== 'text') } };
     const { fromPdf, fromSvg } = await popplerAndResvg(shapes);
-    let differing = 0;
-    for (let i = 0; i < fromPdf.data.length; i += 4) {
-      const delta = Math.max(...[0, 1, 2].map((c) => Math.abs(fromPdf.data[i + c] - fromSvg.data[i + c])));
-      if (delta > 96) differing++;
-    }
+    const differing = differingPixels(fromPdf, fromSvg, { toleranceLevels: 96 });
     // Anti-aliasing differs along edges only; a flipped or unclipped shape differs by thousands of pixels.
     expect(differing).toBeLessThan(1200); // measured 442 when right; a missing clip or dashes gives about 3500
   });

@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { Resvg } from '@resvg/resvg-js';
 import * as fontkit from 'fontkit';
 import { describe, expect, it } from 'vitest';
-import { renderPng } from '../../src/render/png.ts';
+import { rasteriseSvg, renderPng } from '../../src/render/png.ts';
 import { renderSvg } from '../../src/render/svg.ts';
 import { FONT_FILES } from '../../src/scene/fonts.ts';
 import { MM_PER_PT, textBox, textNode } from '../../src/scene/text.ts';
@@ -12,6 +12,11 @@ import { everyNodeKindScene, sceneOf } from './scenes.ts';
 const PX_PER_MM_300 = 300 / 25.4;
 const label = textNode({ text: 'AVAV To Wa WOT 5600', sizePt: 24, weight: 'regular', x: 30, y: 60 });
 const TEXT_ONLY = sceneOf({ children: [label] });
+/** Both ways text reaches the raster: glyph outlines (renderPng) and real <text> laid out by resvg. */
+const AT_300_DPI = [
+  ['glyph outlines (renderPng)', () => renderPng(TEXT_ONLY, { dpi: 300 })],
+  ['real <text> (rasteriseSvg)', () => rasteriseSvg(renderSvg(TEXT_ONLY), { widthPx: 2480 })],
+] as const;
 
 /** Pixel rectangle of a mm box at 300 dpi, grown by `padPx`. */
 function pxBox(box: { x: number; y: number; width: number; height: number }, padPx = 0) {
@@ -40,8 +45,8 @@ describe('renderPng()', () => {
     expect(Buffer.from(renderPng(everyNodeKindScene(), { dpi: 100 })).equals(Buffer.from(first))).toBe(true);
   });
 
-  it('draws text: dark pixels inside the text box and none outside it', () => {
-    const pixels = decodePng(renderPng(TEXT_ONLY, { dpi: 300 }));
+  it.each(AT_300_DPI)('draws text from %s: dark pixels inside the text box and none outside it', (_, png) => {
+    const pixels = decodePng(png());
     const box = pxBox(textBox(label));
     expect(darkPixels(pixels, box)).toBeGreaterThan(2000);
     const everywhere = darkPixels(pixels, { x0: 0, y0: 0, x1: pixels.width, y1: pixels.height });
@@ -55,7 +60,7 @@ describe('renderPng()', () => {
     expect(darkPixels(pixels, pxBox(textBox(label)))).toBe(0);
   });
 
-  it('sets text without kerning, so its ink ends where the measured advances say (±1.5 px at 300 dpi)', () => {
+  it.each(AT_300_DPI)('sets text from %s without kerning, so its ink ends where the measured advances say (±1.5 px at 300 dpi)', (_, png) => {
     // Predicted ink: from the anchor + left bearing of the first glyph to the advance sum less the
     // last glyph's right bearing (glyph outlines read with fontkit, independently of resvg).
     const font = fontkit.create(readFileSync(FONT_FILES.regular)) as fontkit.Font;
@@ -64,7 +69,7 @@ describe('renderPng()', () => {
     const last = glyphs[glyphs.length - 1];
     const inkLeftMm = label.x + glyphs[0].bbox.minX * mmPerUnit;
     const inkRightMm = label.x + label.widthMm - (last.advanceWidth - last.bbox.maxX) * mmPerUnit;
-    const pixels = decodePng(renderPng(TEXT_ONLY, { dpi: 300 }));
+    const pixels = decodePng(png());
     const columns: number[] = [];
     for (let x = 0; x < pixels.width; x++) {
       if (darkPixels(pixels, { x0: x, y0: 0, x1: x + 1, y1: pixels.height }) > 0) columns.push(x);

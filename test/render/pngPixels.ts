@@ -69,3 +69,14 @@ export function darkPixels(pixels: Pixels, box: { x0: number; y0: number; x1: nu
   }
   return count;
 }
+
+/** Counts pixels of two same-sized images whose R, G or B differ by more than `toleranceLevels` (0–255). */
+export function differingPixels(a: Pixels, b: Pixels, opts: { toleranceLevels: number }): number {
+  if (a.width !== b.width || a.height !== b.height) throw new Error(`sizes differ: ${a.width}×${a.height} and ${b.width}×${b.height}`);
+  let count = 0;
+  for (let i = 0; i < a.data.length; i += 4) {
+    const delta = Math.max(Math.abs(a.data[i] - b.data[i]), Math.abs(a.data[i + 1] - b.data[i + 1]), Math.abs(a.data[i + 2] - b.data[i + 2]));
+    if (delta > opts.toleranceLevels) count++;
+  }
+  return count;
+}

@@ -51,3 +51,18 @@ export function everyNodeKindScene(): Scene {
     ],
   });
 }
+
+/** Text runs of every kind: both weights, every anchor, upright and rotated, a ligature, accents, Greek, a colour. */
+export function textRunsScene(): Scene {
+  return sceneOf({
+    title: 'Text page',
+    children: [
+      textNode({ text: 'Predicted WOT 5450–5700 rpm', sizePt: 20, weight: 'bold', x: 20, y: 40 }),
+      textNode({ text: 'office fluff · Ωμέγα · Crème brûlée', sizePt: 16, weight: 'regular', x: 20, y: 70 }),
+      textNode({ text: 'Engine speed (rpm)', sizePt: 12, weight: 'regular', x: 15, y: 200, rotateDeg: 90 }),
+      textNode({ text: 'Right-aligned 5600 rpm', sizePt: 14, weight: 'regular', x: 190, y: 100, anchor: 'end', colour: '#003366' }),
+      textNode({ text: 'Centred caution', sizePt: 14, weight: 'bold', x: 105, y: 130, anchor: 'middle' }),
+      textNode({ text: 'Centred upright', sizePt: 14, weight: 'bold', x: 60, y: 250, anchor: 'middle', rotateDeg: 90 }),
+    ],
+  });
+}
