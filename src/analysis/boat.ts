@@ -67,6 +67,8 @@ export interface BoatResult {
   readonly speedGains: readonly SpeedGainRow[];
   /** Present when the boat has usable sea trials: the calibration and every figure on the calibrated model. */
   readonly calibrated?: CalibratedFigures;
+  /** Present when the boat has sea trials the calibration refused (implausible factors): why, in words. */
+  readonly trialsNotUsed?: string;
 }
 
 /** The boat's installation with a given impeller (its fitted one by default). */
@@ -146,5 +148,6 @@ export function analyseBoat(args: { boat: Boat; project: Project }): BoatResult 
     estimates,
     speedGains: estimates.speedGains,
     ...(calibrated ? { calibrated } : {}),
+    ...(!usable && boat.trials.length > 0 ? { trialsNotUsed: calibration.notes.join(' ') } : {}),
   };
 }

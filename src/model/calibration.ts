@@ -53,6 +53,14 @@ export const MIN_RPM_SPAN = 1.03;
 export const MAX_EXPONENT_SE = 0.3;
 /** Range an absorption exponent must lie in to be believed (as in the family data). */
 const EXPONENT_RANGE = [2, 4] as const;
+/**
+ * Engine power factors and impeller rating factors a sea trial may plausibly show (common practice, no
+ * source: a healthy engine within its ± tolerance and a sound impeller within its manufacturing tolerance,
+ * with generous room for wear and reading errors). Outside these the trials say something is wrong (a
+ * tachometer reading, a slipping drive, a damaged impeller, an engine fault, a data error), so the model is
+ * not bent to fit them.
+ */
+export const PLAUSIBLE_FACTOR_RANGE = [0.6, 1.25] as const;
 
 /** Calibrated installation: fitted exponent and engine factor, and the impeller's fitted rating when it was tried. */
 export function calibratedInstallation(inst: Installation, cal: Calibration, impeller: ImpellerSpec = inst.impeller): Installation {
@@ -81,7 +89,7 @@ export function calibrate(args: { inst: Installation; impellers: readonly Impell
     .map((trial, i) => ({ trial, impeller: impellerOf(trial), rating: trialRatings[i] }))
     .filter((row) => row.rating.status === 'measured');
   const anchoredConstantTorque = inst.engine.curve.kind === 'knownPoint';
-  const fitted = chooseFit({ inst, usable, leftOut: args.trials.length - usable.length });
+  const fitted = withinPlausibleFactors(chooseFit({ inst, usable, leftOut: args.trials.length - usable.length }), inst.family.exponent);
   const partial = { ...fitted, trialRatings, anchoredConstantTorque, residuals: [] as TrialResidual[] };
   const residuals = args.trials.map((t, i) => {
     const at = calibratedInstallation({ ...inst, ambient: t.ambient, waterDensityKgM3: t.waterDensityKgM3 }, partial, impellerOf(t));
@@ -144,6 +152,30 @@ function chooseFit(args: { inst: Installation; usable: readonly Row[]; leftOut: 
   const fit = fitLogLinear(usable.map((r) => point(r, '', true)), { slope: k0 });
   const notes = [...leftNote, ...reasons];
   return { mode: 'conditionOnly', exponent: k0, exponentSe: null, ...factorOf(fit), ratingFactors: {}, notes };
+}
+
+/** A fit whose engine or rating factors lie outside PLAUSIBLE_FACTOR_RANGE is refused, with a note saying why. */
+function withinPlausibleFactors(fit: FitPart, familyExponent: number): FitPart {
+  const [lo, hi] = PLAUSIBLE_FACTOR_RANGE;
+  const outside = (f: number) => !(f >= lo && f <= hi);
+  const pct = (f: number) => `${Math.round(f * 100)} %`;
+  const problems: string[] = [];
+  if (outside(fit.powerFactor)) problems.push(`the engine would make ${pct(fit.powerFactor)} of its published power`);
+  for (const [id, f] of Object.entries(fit.ratingFactors)) if (outside(f)) problems.push(`impeller ${id} would absorb ${pct(f)} of its rating`);
+  if (problems.length === 0) return fit;
+  return {
+    mode: 'none',
+    exponent: familyExponent,
+    exponentSe: null,
+    powerFactor: 1,
+    powerFactorSe: null,
+    ratingFactors: {},
+    notes: [
+      ...fit.notes,
+      `The sea trials were not used: to fit them ${problems.join(' and ')}, outside the plausible ${pct(lo)}–${pct(hi)}. ` +
+        'Check the tachometer, the trial records and the data, and have the engine, drive and impeller inspected by a qualified marine technician; the model stays as published.',
+    ],
+  };
 }
 
 /** γ = e^(−b); its standard error by the delta method, γ·SE(b). */

@@ -90,7 +90,8 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
     ({ x, y, widthMm }) => {
       const hidden = trials.hidden > 0 ? (trials.rows.length > 0 ? ` ${trials.hidden} older trial(s) not listed.` : ` The ${trials.hidden} sea trial(s) are not listed, for room.`) : '';
       const calibration = trialCount > 0 ? `${compact ? '' : calibrationText(result)}${hidden} ` : '';
-      const estimates = compact ? COMPACT_NOTE : estimatesNote(result);
+      const refused = result.trialsNotUsed ? `${result.trialsNotUsed} ` : '';
+      const estimates = `${refused}${compact ? COMPACT_NOTE : estimatesNote(result)}`;
       return paragraph({ x, y, widthMm, text: `${calibration}${estimates}`.trim(), sizePt: type.small, role: 'estimates-note', where });
     },
     ({ x, y, widthMm }) => cautionsBlock({ site, x, y, widthMm, sizePt: type.body, headingPt: type.heading, where }),

@@ -142,3 +142,23 @@ describe('calibrate()', () => {
     expect(() => calibrate({ inst: INST, impellers: IMPELLERS, trials: [trial] })).toThrow(/sea trial 2026-08-02: impeller "zz".*a26, b29/);
   });
 });
+
+describe('calibrate() on implausible trials', () => {
+  // Plausibility bounds are common practice, no source (PLAUSIBLE_FACTOR_RANGE in calibration.ts).
+  it('refuses trials that would need the engine at 40 % of its published power, and says why', () => {
+    const truth: Truth = { exponent: 3, conditionFactor: 0.4 };
+    const cal = calibrate({ inst: INST, impellers: IMPELLERS, trials: makeTrials({ truth, runs: ALL }) });
+    expect(cal.mode).toBe('none');
+    expect(cal.powerFactor).toBe(1);
+    expect(cal.exponent).toBe(INST.family.exponent);
+    expect(cal.notes.join(' ')).toMatch(/engine would make 40 % of its published power, outside the plausible 60 %–125 %/);
+    expect(cal.notes.join(' ')).toMatch(/qualified marine technician/);
+  });
+
+  it('still fits an engine at 70 % of its published power (a worn engine)', () => {
+    const truth: Truth = { exponent: 3, conditionFactor: 0.7 };
+    const cal = calibrate({ inst: INST, impellers: IMPELLERS, trials: makeTrials({ truth, runs: ALL }) });
+    expect(cal.mode).not.toBe('none');
+    expect(Math.abs(cal.powerFactor - 0.7)).toBeLessThan(1e-6);
+  });
+});

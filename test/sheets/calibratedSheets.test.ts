@@ -151,3 +151,25 @@ describe('cardWarning()', () => {
     expect(cardWarning(band('matched', 'matched', 'aboveWindow'), limits)).toBe('');
   });
 });
+
+describe('sea trials the calibration refuses', () => {
+  /** Trials that would need the engine at about a third of its published power (invented data). */
+  function implausibleBoat(): Boat {
+    const runs = ['b', 'd'].map((impellerId, i) => {
+      const inst = boatInstallation(boat, boat.jet.impellers.find((x) => x.id === impellerId));
+      const p = solveInstallation({ ...inst, engine: { ...inst.engine, conditionFactor: 0.35 } });
+      return { date: `2026-06-0${i + 2}`, impellerId, wotRpm: Math.round(p.speedRpm), ambient: boat.site.ambient, water: boat.water };
+    });
+    return { ...boat, trials: runs };
+  }
+
+  it('leave the figures as published and say on the spec sheet why the trials were not used', () => {
+    const b = implausibleBoat();
+    const result = analyseBoat({ boat: b, project: { ...project, boats: [b] } as Project });
+    expect(result.calibrated).toBeUndefined();
+    expect(result.trialsNotUsed).toMatch(/sea trials were not used/);
+    const words = textOf(sheet(b, 'specSheet', A4), 'estimates-note');
+    expect(words).toMatch(/sea trials were not used/);
+    expect(words).toMatch(/qualified marine/);
+  });
+});
