@@ -30,6 +30,16 @@ describe("renderSvg(scene, { text: 'outlines' })", () => {
     expect(renderSvg(scene).match(/<text /g)).toHaveLength(6);
   });
 
+  it('stays well-formed with markup in the text, tags and colour, and still refuses a character the font lacks', () => {
+    const hostile = `<b a="1">'x' & ]]>`;
+    const [node] = textNodes(textRunsScene());
+    const svg = renderSvg(sceneOf({ children: [{ ...node, text: hostile, role: hostile, key: hostile, colour: `#000" onload="x` }] }), { text: 'outlines' });
+    expect(xmlProblems(svg)).toEqual([]);
+    expect(svg).not.toContain('<b ');
+    expect(svg).toContain('fill="#000&quot; onload=&quot;x"');
+    expect(() => renderSvg(sceneOf({ children: [{ ...node, text: 'Motor מנוע' }] }), { text: 'outlines' })).toThrow(/U\+05DE/);
+  });
+
   it('places a rotated, middle-anchored run as the <text> element does: baseline up the page from its centre', () => {
     const [node] = textNodes(textRunsScene()).filter((n) => n.rotateDeg === 90 && n.anchor === 'middle');
     const svg = renderSvg(sceneOf({ children: [node] }), { text: 'outlines' });
