@@ -1,12 +1,11 @@
 /** One sheet's three files (SVG, PDF, PNG at 150 dpi), rendered once and reused from the cache. */
-import { rasteriseSvg, renderPdf, renderSvg } from '../render/index.ts';
+import { renderPdf, renderPng, renderSvg } from '../render/index.ts';
 import type { Scene } from '../scene/types.ts';
 import { sceneHash, type BuildCache, type RenderedSheet } from './renderCache.ts';
 import type { SheetRenderer } from './renderPool.ts';
 
 /** Resolution of the PNG downloads, dots per inch. */
 export const PNG_DPI = 150;
-const MM_PER_IN = 25.4;
 
 /** Renders the scene to SVG, PDF and PNG in this thread. */
 export async function renderSheetNow(scene: Scene): Promise<RenderedSheet> {
@@ -17,8 +16,8 @@ export async function renderSheetNow(scene: Scene): Promise<RenderedSheet> {
     keywords: scene.keywords,
     dateIso: scene.dateIso,
   });
-  // Rasterise the SVG we already have rather than rendering the scene twice.
-  const png = rasteriseSvg(svg, { widthPx: Math.round((scene.widthMm / MM_PER_IN) * PNG_DPI) });
+  // The PNG is drawn from glyph outlines (no text for resvg to lay out): about twice as fast as the text SVG.
+  const png = renderPng(scene, { dpi: PNG_DPI });
   return { svg, pdf, png };
 }
 

@@ -3,10 +3,8 @@
  * wide a run of text is. Widths are the sum of glyph advances after shaping with SHAPING_FEATURES
  * (ligatures yes, kerning no): exactly what pdf-lib's widthOfTextAtSize returns for the same font.
  */
-import { readFileSync } from 'node:fs';
-import * as fontkit from 'fontkit';
-import { FONT_FILES, SHAPING_FEATURES } from './fonts.ts';
-import { memoiseLayout } from './shapingCache.ts';
+import { SHAPING_FEATURES } from './fonts.ts';
+import { openFont } from './openFont.ts';
 import type { Box, Colour, FontWeight, TextNode } from './types.ts';
 
 /** Millimetres per PostScript point (1 pt = 1/72 in, 1 in = 25.4 mm exactly). */
@@ -18,19 +16,7 @@ export interface TextArgs {
   readonly weight: FontWeight;
 }
 
-/** Lazily opens one font per weight; the cache holds immutable font objects only. */
-const fontFor = (() => {
-  const cache = new Map<FontWeight, fontkit.Font>();
-  return (weight: FontWeight): fontkit.Font => {
-    const cached = cache.get(weight);
-    if (cached) return cached;
-    const opened = fontkit.create(readFileSync(FONT_FILES[weight]));
-    if (!('unitsPerEm' in opened)) throw new Error(`${FONT_FILES[weight]} is a font collection, expected one TrueType font`);
-    const font = memoiseLayout(opened as fontkit.Font);
-    cache.set(weight, font);
-    return font;
-  };
-})();
+const fontFor = openFont; // one font object (and one layout cache) per weight, shared with the glyph outlines
 
 // C0 and C1 control characters (tab, newline, NUL…) have no place in a one-line run of text, and
 // bidirectional marks, embeddings, overrides and isolates could make a label display reversed.
