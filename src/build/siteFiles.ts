@@ -4,7 +4,6 @@
  * afterwards by Eleventy from the SiteData this returns.
  */
 import { join } from 'node:path';
-import { analyseBoat, analyseWallChart } from '../analysis/index.ts';
 import type { Book, Project } from '../data/types.ts';
 import { renderPdf, type PdfOptions } from '../render/index.ts';
 import { FONT_FILES } from '../scene/fonts.ts';
@@ -15,6 +14,7 @@ import { planSheets } from './planSheets.ts';
 import { jsonHash, sceneHash, type BuildCache } from './renderCache.ts';
 import type { SheetRenderer } from './renderPool.ts';
 import { drawSheets } from './drawSheets.ts';
+import { siteResults } from './siteResults.ts';
 import { siteView } from './siteViewBuild.ts';
 import { SiteData } from './siteView.ts';
 import { stableJson } from './stableJson.ts';
@@ -80,20 +80,8 @@ export async function writeSiteFiles(args: SiteFilesArgs): Promise<{ site: SiteD
   const pdfs = await Promise.all(books.map((b) => bookPdf({ ...b, dateIso, cache: args.cache, renderer: args.renderer })));
   books.forEach((b, i) => files.write(`books/${b.book.id}.pdf`, pdfs[i]));
 
-  const boatResults = new Map(project.boats.map((boat) => [boat.id, analyseBoat({ boat, project })]));
+  const { boatResults, familyResults } = siteResults(project, plan);
   for (const [id, result] of boatResults) files.write(`results/boats/${id}.json`, stableJson(result));
-  // A family's results are those of the wall charts on its page, in the same order.
-  const requests = new Map(plan.sheets.map((p) => [p.slug, p.request]));
-  const familyResults = new Map(
-    project.engines.map((family) => [
-      family.id,
-      (plan.byFamily.get(family.id) ?? []).flatMap((slug) => {
-        const r = requests.get(slug);
-        const jet = project.jets.find((j) => r?.kind === 'wallChart' && j.id === r.jetId);
-        return r?.kind === 'wallChart' && jet ? [analyseWallChart({ family, jet, conditions: r.conditions })] : [];
-      }),
-    ]),
-  );
   for (const [id, charts] of familyResults) {
     files.write(`results/families/${id}.json`, stableJson({ kind: 'engineFamily', engineFamilyId: id, charts }));
   }

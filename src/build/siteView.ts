@@ -5,11 +5,19 @@
  * opened from disk.
  */
 
+/**
+ * One table cell or fact value: plain text, or text with a link (relative to the site root) or a mark.
+ * 'warn' is a status the engine must be protected from (lugs, over-revs, no operating point, cruise
+ * beyond WOT): printed in bold words in a barred, tinted cell, so it never rests on colour alone.
+ * 'dataSheet' is a data-sheet figure printed beside a sea-trial-calibrated one, in softer ink.
+ */
+export type CellView = string | { readonly text: string; readonly href?: string; readonly mark?: 'warn' | 'dataSheet' };
+
 /** A table of already-formatted cells; numbers right-aligned by column. */
 export interface TableView {
   readonly caption: string;
   readonly head: readonly string[];
-  readonly rows: readonly (readonly string[])[];
+  readonly rows: readonly (readonly CellView[])[];
   /** Columns (by index) that hold numbers. */
   readonly numeric: readonly number[];
   /** Optional plain sentence under the table. */
@@ -59,15 +67,25 @@ export interface FamilyView {
   readonly resultsHref: string;
 }
 
+/** A boat's sea trials and what they calibrated (only for boats with usable trials). */
+export interface CalibrationView {
+  readonly heading: string;
+  readonly trials: TableView;
+  /** What was fitted, what the calibrated bands cover: one sentence or a few each. */
+  readonly paragraphs: readonly string[];
+}
+
 export interface BoatView {
   readonly id: string;
   readonly name: string;
   readonly href: string;
   readonly notes?: string;
-  readonly facts: readonly (readonly [string, string])[];
+  readonly facts: readonly (readonly [string, CellView])[];
   readonly links: readonly LinkView[];
   readonly sheets: readonly SheetView[];
   readonly tables: readonly TableView[];
+  /** Present only when the boat has usable sea trials. */
+  readonly calibration?: CalibrationView;
   readonly resultsHref: string;
 }
 
@@ -94,8 +112,12 @@ export interface SiteView {
   readonly dateIso: string;
   readonly cautions: readonly string[];
   readonly families: readonly FamilyView[];
+  /** The index's engine-family summary: variants, window and maximum rpm, a link per family. */
+  readonly familySummary: TableView;
   readonly jets: readonly JetView[];
   readonly boats: readonly BoatView[];
+  /** The index's boat summary a dealer reads at a glance: combination, predicted WOT, window, status, a link per boat. */
+  readonly boatSummary: TableView;
   readonly books: readonly BookView[];
   readonly schemas: readonly LinkView[];
   /** Where the results JSON shape is documented (docs/results.md copied into the site), if present. */

@@ -1,13 +1,15 @@
 /** Assembles the templates' view of the site from the project, the drawn sheets and the analyses. */
-import type { BoatResult } from '../analysis/boat.ts';
-import type { WallChartResult } from '../analysis/wallChart.ts';
-import type { Boat, EngineFamily, JetUnit, Project } from '../data/types.ts';
+import { isWarning, type BandResult, type BoatResult, type WallChartResult } from '../analysis/index.ts';
+import type { Boat, EngineFamily, JetUnit, PowerUnit, Project, SpeedUnit } from '../data/types.ts';
+import { speedText } from '../sheets/boatTables.ts';
 import { cautionsFor } from '../sheets/kit/cautions.ts';
 import { powerText, rpmRangeText, rpmWithUnit } from '../sheets/kit/format.ts';
-import { boatTables } from './boatTables.ts';
+import { boatTables, calibratedSuffix } from './boatTables.ts';
 import { ratingCell } from './cells.ts';
+import { boatSummaryTable, familySummaryTable } from './indexTables.ts';
 import type { SheetPlan } from './planSheets.ts';
-import type { BoatView, FamilyView, JetView, SheetView, SiteView } from './siteView.ts';
+import type { BoatView, CellView, FamilyView, JetView, SheetView, SiteView } from './siteView.ts';
+import { calibrationView } from './trialTable.ts';
 import { wallChartTables } from './wallChartTables.ts';
 
 export interface SiteViewArgs {
@@ -61,10 +63,31 @@ function familyView(args: SiteViewArgs, family: EngineFamily): FamilyView {
   };
 }
 
+/** "4840 rpm (4780–4900 rpm), 252 kW". */
+function wotText(band: BandResult, unit: PowerUnit): string {
+  return `${rpmWithUnit(band.nominal.speedRpm)} (${rpmRangeText(band.low.speedRpm, band.high.speedRpm)}), ${powerText(band.nominal.powerKw, unit)}`;
+}
+
+/** The boat's headline facts: the calibrated WOT first with the data-sheet one beside it when there are trials. */
+function wotFacts(result: BoatResult, unit: PowerUnit, speedUnit: SpeedUnit): [string, CellView][] {
+  const cal = result.calibrated;
+  const band = cal?.wot ?? result.wot;
+  const verdict: CellView = isWarning(band.nominal.status) ? { text: band.verdict, mark: 'warn' } : band.verdict;
+  const topKn = (cal?.estimates ?? result.estimates).wotSpeedKn;
+  const top: [string, CellView] = ['Top speed', `${speedText(topKn, speedUnit)} ${speedUnit} (estimate)`];
+  if (!cal) return [['Predicted WOT', wotText(band, unit)], ['Verdict', verdict], top];
+  return [
+    ['Calibrated WOT', `${wotText(band, unit)}${calibratedSuffix(result)}`],
+    ['Data-sheet WOT', { text: wotText(result.wot, unit), mark: 'dataSheet' }],
+    ['Verdict', verdict],
+    top,
+  ];
+}
+
 function boatView(args: SiteViewArgs, boat: Boat): BoatView {
   const result = args.boatResults.get(boat.id) as BoatResult;
-  const unit = args.project.site.powerUnitFirst;
-  const wot = result.wot;
+  const { powerUnitFirst: unit, speedUnit } = args.project.site;
+  const calibration = calibrationView(result, { impellerPct: boat.jet.family.tolerancePct, enginePct: boat.engine.powerTolerancePct });
   return {
     id: boat.id,
     name: boat.name,
@@ -78,8 +101,7 @@ function boatView(args: SiteViewArgs, boat: Boat): BoatView {
       ['Drive line', `ratio ${ratioText(boat.driveLine.ratio)}, efficiency ${(boat.driveLine.efficiency * 100).toFixed(1)} %`],
       ['Water', `${boat.water.kind}, ${boat.water.densityKgM3.toFixed(1)} kg/m³`],
       ['Site', boat.site.label],
-      ['Predicted WOT', `${rpmWithUnit(wot.nominal.speedRpm)} (${rpmRangeText(wot.low.speedRpm, wot.high.speedRpm)}), ${powerText(wot.nominal.powerKw, unit)}`],
-      ['Verdict', wot.verdict],
+      ...wotFacts(result, unit, speedUnit),
       ['Defined in', dataPath(boat.source.file)],
     ],
     links: [
@@ -87,7 +109,8 @@ function boatView(args: SiteViewArgs, boat: Boat): BoatView {
       { label: `Jet unit: ${boat.jet.label}`, href: `index.html#jet-${boat.jetId}` },
     ],
     sheets: pick(args.sheets, args.plan.byBoat.get(boat.id)),
-    tables: boatTables(result, unit),
+    tables: boatTables({ boat, result, unit, speedUnit }),
+    ...(calibration ? { calibration } : {}),
     resultsHref: `results/boats/${boat.id}.json`,
   };
 }
@@ -124,8 +147,10 @@ export function siteView(args: SiteViewArgs): SiteView {
     dateIso: args.dateIso,
     cautions: cautionsFor(project.site),
     families: project.engines.map((f) => familyView(args, f)),
+    familySummary: familySummaryTable(project),
     jets: project.jets.map((j) => jetView(j, project)),
     boats: project.boats.map((b) => boatView(args, b)),
+    boatSummary: boatSummaryTable(project, args.boatResults),
     books: project.books.map((book) => ({
       id: book.id,
       title: book.title,

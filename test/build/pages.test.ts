@@ -33,8 +33,10 @@ const site: SiteView = {
   dateIso: '2026-01-01',
   cautions: ['Confirm by a sea trial.', 'Never exceed maximum rpm.'],
   families: [],
+  familySummary: { caption: 'Engine families', head: ['Engine family'], numeric: [], rows: [] },
   jets: [],
   boats: [boat],
+  boatSummary: { caption: 'Boats', head: ['Boat', 'Status'], numeric: [], rows: [[{ text: 'Boat A (demo)', href: 'boats/a/index.html' }, { text: 'Too light: over-revs', mark: 'warn' }]] },
   books: [],
   schemas: [],
 };

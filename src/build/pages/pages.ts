@@ -17,23 +17,17 @@ function none(list: readonly unknown[], text: string): SafeHtml | null {
   return list.length === 0 ? html`<p>${text}</p>` : null;
 }
 
-/** The front page: engine families, jet units, boats and books. */
+/** The front page: summaries of engine families and boats, the jet units' impeller tables, and books. */
 export function indexPage(site: SiteView): string {
   const root = '';
   const body = html`<h1>${site.shopName}: impeller matching charts</h1>
 <p class="lede">Predicted wide-open-throttle (WOT) operating points of waterjet impellers on marine engines,
 as wall charts for the shop, spec sheets for dealers and console cards for owners.</p>
-${section('families', 'Engine families', html`${none(site.families, 'No engine families defined.')}${linkList(
-    site.families.map((f) => ({ label: `${f.label}, ${f.maker}`, href: f.href })),
-    root,
-  )}`)}
+${section('families', 'Engine families', html`${none(site.families, 'No engine families defined.') ?? table(site.familySummary, root)}`)}
 ${section('jets', 'Jet units', html`${none(site.jets, 'No jet units defined.')}${site.jets.map(
-    (j) => html`<h3 id="jet-${j.id}">${j.label} (${j.maker})</h3>${table(j.table)}`,
+    (j) => html`<h3 id="jet-${j.id}">${j.label} (${j.maker})</h3>${table(j.table, root)}`,
   )}`)}
-${section('boats', 'Boats', html`${none(site.boats, 'No boats defined.')}${linkList(
-    site.boats.map((b) => ({ label: b.name, href: b.href })),
-    root,
-  )}`)}
+${section('boats', 'Boats', html`${none(site.boats, 'No boats defined.') ?? table(site.boatSummary, root)}`)}
 ${section('books', 'Chart books', html`${none(site.books, 'No books defined.')}<ul class="links">${site.books.map(
     (b) => html`<li><a href="${root}${b.href}">${b.title}</a> (for the ${b.audience}, ${b.sheets.length} sheets,
 <a href="${root}${b.pdfHref}" download>PDF</a>)</li>`,
@@ -48,7 +42,7 @@ export function familyPage(site: SiteView, family: FamilyView): string {
   const body = html`<h1>${family.label}</h1>
 ${facts(family.facts)}${family.notes ? html`<p>${family.notes}</p>` : ''}
 ${section('charts', 'Wall charts', html`${none(family.charts, 'No wall charts for this family.')}${family.charts.map((s) => sheetFigure(s, root))}`)}
-${section('results', 'Predicted operating points', html`${family.tables.map(table)}
+${section('results', 'Predicted operating points', html`${family.tables.map((t) => table(t, root))}
 ${resultsLink(site, family.resultsHref, root)}`)}
 ${section('boats', 'Boats with this engine family', html`${none(family.boats, 'No boats use this family.')}${linkList(family.boats, root)}`)}`;
   return pageLayout({ site, title: family.label, root, body, sheets: family.charts });
@@ -58,10 +52,11 @@ ${section('boats', 'Boats with this engine family', html`${none(family.boats, 'N
 export function boatPage(site: SiteView, boat: BoatView): string {
   const root = '../../';
   const body = html`<h1>${boat.name}</h1>
-${facts(boat.facts)}${boat.notes ? html`<p>${boat.notes}</p>` : ''}
+${facts(boat.facts, root)}${boat.notes ? html`<p>${boat.notes}</p>` : ''}
 ${linkList(boat.links, root)}
-${section('results', 'Predictions', html`${boat.tables.map(table)}
+${section('results', 'Predictions', html`${boat.tables.map((t) => table(t, root))}
 ${resultsLink(site, boat.resultsHref, root)}`)}
+${boat.calibration ? section('trials', boat.calibration.heading, html`${table(boat.calibration.trials, root)}${boat.calibration.paragraphs.map((p) => html`<p>${p}</p>`)}`) : ''}
 ${section('sheets', 'Sheets', html`${boat.sheets.map((s) => sheetFigure(s, root))}`)}`;
   return pageLayout({ site, title: boat.name, root, body, sheets: boat.sheets });
 }

@@ -1,27 +1,45 @@
 /** Building blocks of pages: tables, fact lists, sheet figures with their downloads. */
 import { html, trustedHtml, type SafeHtml } from '../html.ts';
-import type { LinkView, SheetView, TableView } from '../siteView.ts';
+import type { CellView, LinkView, SheetView, TableView } from '../siteView.ts';
 
-/** A real HTML table with a caption and header cells. */
-export function table(t: TableView): SafeHtml {
-  const cls = (i: number) => (t.numeric.includes(i) ? 'num' : null);
+/**
+ * A cell's content: a link (href relative to the site root), a warning in bold words, a data-sheet figure
+ * in softer ink, or plain text. The cell's own class carries the warning bar (see cellClass).
+ */
+export function cellContent(cell: CellView, root: string): SafeHtml {
+  if (typeof cell === 'string') return html`${cell}`;
+  const inner = cell.href !== undefined ? html`<a href="${root}${cell.href}">${cell.text}</a>` : html`${cell.text}`;
+  return cell.mark === 'warn' ? html`<strong>${inner}</strong>` : inner;
+}
+
+/** Classes of a cell: "num" for number columns, "warn" or "data-sheet" for marked cells. */
+function cellClass(cell: CellView, numeric: boolean): SafeHtml | '' {
+  const names = [numeric ? 'num' : '', typeof cell === 'string' ? '' : cell.mark === 'warn' ? 'warn' : cell.mark === 'dataSheet' ? 'data-sheet' : ''].filter((n) => n !== '');
+  return names.length === 0 ? '' : html` class="${names.join(' ')}"`;
+}
+
+/** A real HTML table with a caption, column headers and row headers; root leads from the page back to the site root. */
+export function table(t: TableView, root = ''): SafeHtml {
+  const num = (i: number) => t.numeric.includes(i);
   return html`<div class="table-wrap"><table>
 <caption>${t.caption}</caption>
-<thead><tr>${t.head.map((h, i) => html`<th scope="col"${cls(i) ? html` class="num"` : ''}>${h}</th>`)}</tr></thead>
+<thead><tr>${t.head.map((h, i) => html`<th scope="col"${num(i) ? html` class="num"` : ''}>${h}</th>`)}</tr></thead>
 <tbody>
 ${t.rows.map(
   (row) =>
     html`<tr>${row.map((cell, i) =>
-      i === 0 ? html`<th scope="row">${cell}</th>` : html`<td${cls(i) ? html` class="num"` : ''}>${cell}</td>`,
+      i === 0
+        ? html`<th scope="row"${cellClass(cell, false)}>${cellContent(cell, root)}</th>`
+        : html`<td${cellClass(cell, num(i))}>${cellContent(cell, root)}</td>`,
     )}</tr>
 `,
 )}</tbody>
 </table>${t.note ? html`<p class="table-note">${t.note}</p>` : ''}</div>`;
 }
 
-/** A definition list of label/value pairs. */
-export function facts(pairs: readonly (readonly [string, string])[]): SafeHtml {
-  return html`<dl class="facts">${pairs.map(([k, v]) => html`<dt>${k}</dt><dd>${v}</dd>`)}</dl>`;
+/** A definition list of label/value pairs; marked values as in tables. */
+export function facts(pairs: readonly (readonly [string, CellView])[], root = ''): SafeHtml {
+  return html`<dl class="facts">${pairs.map(([k, v]) => html`<dt>${k}</dt><dd${cellClass(v, false)}>${cellContent(v, root)}</dd>`)}</dl>`;
 }
 
 /** A list of links. */
