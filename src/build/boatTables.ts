@@ -57,6 +57,7 @@ export function alternativesTable(args: BoatTableArgs): TableView {
       ...(cal ? ['Data-sheet WOT rpm', 'Data-sheet band (rpm)'] : []),
     ],
     numeric: [1, 2, 3, 4, 5, 6, ...(cal ? [9, 10] : [])],
+    words: [7],
     rows: r.alternatives.map((a) => {
       const b = a.calibratedBand ?? a.band;
       const top = a.calibratedTopSpeedKn ?? a.topSpeedKn;

@@ -3,7 +3,7 @@
  * status in words (lugging and over-revving marked as on the sheets), and every engine family with its
  * variants, windows and maximum speeds. One link per row, on the row's name.
  */
-import { isWarning, type BoatResult } from '../analysis/index.ts';
+import { isWarning, type BandResult, type BoatResult } from '../analysis/index.ts';
 import type { EngineFamily, Project } from '../data/types.ts';
 import { trialDatesText } from '../sheets/boatTables.ts';
 import { rpmRangeText, rpmText } from '../sheets/kit/format.ts';
@@ -12,12 +12,20 @@ import type { TableView } from './siteView.ts';
 /** "4600–5000" without the unit (it is in the column head). */
 const windowCell = (lowRpm: number, highRpm: number) => rpmRangeText(lowRpm, highRpm).replace(' rpm', '');
 
+/** "4840 (4780–4900)": most likely WOT rpm and its band; one figure when the whole band sits at one rpm (the limiter). */
+function bandCell(band: BandResult): string {
+  const [nominal, low, high] = [band.nominal, band.low, band.high].map((p) => rpmText(p.speedRpm));
+  return low === high ? nominal : `${nominal} (${low}–${high})`;
+}
+
 /** One row per boat: what a dealer checks first. */
 export function boatSummaryTable(project: Project, results: ReadonlyMap<string, BoatResult>): TableView {
   return {
     caption: 'Boats: fitted combination and predicted wide-open-throttle (WOT) speed',
     head: ['Boat', 'Engine', 'Jet unit, fitted impeller', 'Predicted WOT rpm (band)', 'Window (rpm)', 'Max (rpm)', 'Status', 'Based on'],
     numeric: [3, 4, 5],
+    nowrap: [7],
+    words: [6],
     rows: project.boats.map((boat) => {
       const r = results.get(boat.id) as BoatResult;
       const band = r.calibrated?.wot ?? r.wot;
@@ -27,11 +35,11 @@ export function boatSummaryTable(project: Project, results: ReadonlyMap<string, 
         { text: boat.name, href: `boats/${boat.id}/index.html` },
         r.engineLabel,
         `${r.jetLabel}, ${r.impellerLabel}`,
-        `${rpmText(band.nominal.speedRpm)} (${windowCell(band.low.speedRpm, band.high.speedRpm)})`,
+        bandCell(band),
         windowCell(r.limits.windowLowRpm, r.limits.windowHighRpm),
         rpmText(r.limits.maxRpm),
         warn ? { text: band.verdict, mark: 'warn' as const } : band.verdict,
-        dates === '' ? 'Data sheet' : `Calibrated to ${dates}`,
+        dates === '' ? 'Data sheet' : dates.replace(/^s/, 'S'),
       ];
     }),
     note: 'Band: from the heaviest to the lightest end of the tolerances (or, for a boat with sea trials, of the calibrated model). Status: the most likely WOT point; what the band’s ends may do follows the semicolon.',

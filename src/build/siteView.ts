@@ -20,6 +20,10 @@ export interface TableView {
   readonly rows: readonly (readonly CellView[])[];
   /** Columns (by index) that hold numbers. */
   readonly numeric: readonly number[];
+  /** Columns (by index) whose cells must not wrap (dates: "2026-03-\n14" misreads). */
+  readonly nowrap?: readonly number[];
+  /** Columns (by index) of statuses in words, given room to be read at a glance. */
+  readonly words?: readonly number[];
   /** Optional plain sentence under the table. */
   readonly note?: string;
 }

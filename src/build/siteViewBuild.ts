@@ -3,7 +3,7 @@ import { isWarning, type BandResult, type BoatResult, type WallChartResult } fro
 import type { Boat, EngineFamily, JetUnit, PowerUnit, Project, SpeedUnit } from '../data/types.ts';
 import { speedText } from '../sheets/boatTables.ts';
 import { cautionsFor } from '../sheets/kit/cautions.ts';
-import { powerText, rpmRangeText, rpmWithUnit } from '../sheets/kit/format.ts';
+import { powerText, rpmBandText, rpmWithUnit } from '../sheets/kit/format.ts';
 import { boatTables, calibratedSuffix } from './boatTables.ts';
 import { ratingCell } from './cells.ts';
 import { boatSummaryTable, familySummaryTable } from './indexTables.ts';
@@ -63,9 +63,11 @@ function familyView(args: SiteViewArgs, family: EngineFamily): FamilyView {
   };
 }
 
-/** "4840 rpm (4780–4900 rpm), 252 kW". */
+/** "4840 rpm (4780–4900 rpm), 252 kW"; no bracket when the whole band prints as one rpm (on the limiter). */
 function wotText(band: BandResult, unit: PowerUnit): string {
-  return `${rpmWithUnit(band.nominal.speedRpm)} (${rpmRangeText(band.low.speedRpm, band.high.speedRpm)}), ${powerText(band.nominal.powerKw, unit)}`;
+  const ends = rpmBandText(band.low.speedRpm, band.high.speedRpm);
+  const bracket = ends === rpmWithUnit(band.nominal.speedRpm) ? '' : ` (${ends})`;
+  return `${rpmWithUnit(band.nominal.speedRpm)}${bracket}, ${powerText(band.nominal.powerKw, unit)}`;
 }
 
 /** The boat's headline facts: the calibrated WOT first with the data-sheet one beside it when there are trials. */

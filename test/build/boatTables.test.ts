@@ -167,6 +167,21 @@ describe('the same boat without sea trials', () => {
   });
 });
 
+describe('a boat fitted with an impeller that over-revs its engine', () => {
+  it('marks the verdict, prints the limiter rpm once and marks every over-revving upgrade row', () => {
+    // Demo data refitted (invented what-if): the Greyling with the lightest Tarnwell impeller rides its limiter.
+    const refit: Project = { ...project, boats: project.boats.map((b) => (b.id === 'greyling' ? { ...b, impellerId: 'k16' } : b)) };
+    const r = analyseBoat({ boat: refit.boats.find((b) => b.id === 'greyling')!, project: refit });
+    expect(r.wot.nominal.status).toBe('revLimited');
+    const html = pageOf(refit, 'greyling');
+    const facts = pageFacts(html);
+    expect(facts.get('Verdict')).toMatchObject({ text: r.wot.verdict, classes: ['warn'], strong: true });
+    expect(facts.get('Predicted WOT')?.text).toBe(`${rpmText(r.limits.maxRpm)} rpm, ${Math.round(r.wot.nominal.powerKw)} kW`);
+    const t = tableStarting(pageTables(html), 'WOT speed after an engine power change');
+    r.upgrade.forEach((u, i) => expect(t.cell(t.rows[i], 'Status').classes.includes('warn')).toBe(isWarning(u.wot.status)));
+  });
+});
+
 describe('every table of a boat page', () => {
   it('is a real table: a caption, a column header per column, a row header first in each row', () => {
     for (const t of [...tables, ...bare.tables]) {

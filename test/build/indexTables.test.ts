@@ -37,11 +37,12 @@ describe('the index’s boat summary', () => {
       const row = boats.rows[i];
       expect(boats.cell(row, 'Engine').text).toBe(boat.engine.label);
       expect(boats.cell(row, 'Jet unit, fitted impeller').text).toBe(`${boat.jet.label}, ${r.impellerLabel}`);
-      expect(boats.cell(row, 'Predicted WOT rpm (band)').text).toBe(`${rpmText(band.nominal.speedRpm)} (${rpmText(band.low.speedRpm)}–${rpmText(band.high.speedRpm)})`);
+      const [low, high] = [rpmText(band.low.speedRpm), rpmText(band.high.speedRpm)];
+      expect(boats.cell(row, 'Predicted WOT rpm (band)').text).toBe(`${rpmText(band.nominal.speedRpm)}${low === high ? '' : ` (${low}–${high})`}`);
       expect(boats.cell(row, 'Window (rpm)').text).toBe(`${boat.engine.limits.windowLowRpm}–${boat.engine.limits.windowHighRpm}`);
       expect(boats.cell(row, 'Max (rpm)').text).toBe(String(boat.engine.limits.maxRpm));
       expect(boats.cell(row, 'Status').text).toBe(band.verdict);
-      expect(boats.cell(row, 'Based on').text).toBe(boat.trials.length > 0 ? 'Calibrated to sea trials of 2026-03-14, 2026-03-21' : 'Data sheet');
+      expect(boats.cell(row, 'Based on').text).toBe(boat.trials.length > 0 ? 'Sea trials of 2026-03-14, 2026-03-21' : 'Data sheet');
     });
   });
 
@@ -63,6 +64,8 @@ describe('the index’s boat summary', () => {
         expect(cell.classes.includes('warn'), `${boat.id}: ${cell.text}`).toBe(isWarning(status));
         expect(cell.strong, `${boat.id}: ${cell.text}`).toBe(isWarning(status));
         if (isWarning(status)) expect(cell.text).toMatch(/^(Too light: over-revs|Too heavy: lugs|No operating point)/);
+        // An engine on its limiter across the whole band prints one rpm, never "6000 (6000–6000)".
+        expect(t.cell(t.rows[i], 'Predicted WOT rpm (band)').text).not.toMatch(/(\d+) \(\1–\1\)/);
         seen.add(status);
       });
     }

@@ -12,15 +12,17 @@ export function cellContent(cell: CellView, root: string): SafeHtml {
   return cell.mark === 'warn' ? html`<strong>${inner}</strong>` : inner;
 }
 
-/** Classes of a cell: "num" for number columns, "warn" or "data-sheet" for marked cells. */
-function cellClass(cell: CellView, numeric: boolean): SafeHtml | '' {
-  const names = [numeric ? 'num' : '', typeof cell === 'string' ? '' : cell.mark === 'warn' ? 'warn' : cell.mark === 'dataSheet' ? 'data-sheet' : ''].filter((n) => n !== '');
+/** Classes of a cell: "num", "nowrap" and "words" by column, "warn" or "data-sheet" for marked cells. */
+function cellClass(cell: CellView, column: { numeric: boolean; nowrap?: boolean; words?: boolean }): SafeHtml | '' {
+  const mark = typeof cell === 'string' ? '' : cell.mark === 'warn' ? 'warn' : cell.mark === 'dataSheet' ? 'data-sheet' : '';
+  const names = [column.numeric ? 'num' : '', column.nowrap ? 'nowrap' : '', column.words ? 'words' : '', mark].filter((n) => n !== '');
   return names.length === 0 ? '' : html` class="${names.join(' ')}"`;
 }
 
 /** A real HTML table with a caption, column headers and row headers; root leads from the page back to the site root. */
 export function table(t: TableView, root = ''): SafeHtml {
   const num = (i: number) => t.numeric.includes(i);
+  const column = (i: number) => ({ numeric: num(i), nowrap: t.nowrap?.includes(i), words: t.words?.includes(i) });
   return html`<div class="table-wrap"><table>
 <caption>${t.caption}</caption>
 <thead><tr>${t.head.map((h, i) => html`<th scope="col"${num(i) ? html` class="num"` : ''}>${h}</th>`)}</tr></thead>
@@ -29,8 +31,8 @@ ${t.rows.map(
   (row) =>
     html`<tr>${row.map((cell, i) =>
       i === 0
-        ? html`<th scope="row"${cellClass(cell, false)}>${cellContent(cell, root)}</th>`
-        : html`<td${cellClass(cell, num(i))}>${cellContent(cell, root)}</td>`,
+        ? html`<th scope="row"${cellClass(cell, { numeric: false })}>${cellContent(cell, root)}</th>`
+        : html`<td${cellClass(cell, column(i))}>${cellContent(cell, root)}</td>`,
     )}</tr>
 `,
 )}</tbody>
@@ -39,7 +41,7 @@ ${t.rows.map(
 
 /** A definition list of label/value pairs; marked values as in tables. */
 export function facts(pairs: readonly (readonly [string, CellView])[], root = ''): SafeHtml {
-  return html`<dl class="facts">${pairs.map(([k, v]) => html`<dt>${k}</dt><dd${cellClass(v, false)}>${cellContent(v, root)}</dd>`)}</dl>`;
+  return html`<dl class="facts">${pairs.map(([k, v]) => html`<dt>${k}</dt><dd${cellClass(v, { numeric: false })}>${cellContent(v, root)}</dd>`)}</dl>`;
 }
 
 /** A list of links. */
