@@ -188,6 +188,36 @@ describe('the built demo site in Chromium', { timeout: 600_000 }, () => {
     await page.close();
   });
 
+  it('summarises every boat on the index in one table row with one link', async () => {
+    const { page } = await open('index.html');
+    const table = page.locator('#boats table');
+    expect(await table.locator('caption').textContent()).toMatch(/^Boats: /);
+    const rows = table.locator('tbody tr');
+    const emberResults = JSON.parse(readFileSync(join(outDir, 'results', 'boats', 'ember-reach.json'), 'utf8'));
+    expect(await rows.count()).toBe(6);
+    for (let i = 0; i < (await rows.count()); i += 1) {
+      expect(await rows.nth(i).locator('a').count()).toBe(1);
+      expect(await rows.nth(i).locator('th[scope="row"] a').getAttribute('href')).toMatch(/^boats\/[a-z0-9-]+\/index\.html$/);
+    }
+    const ember = rows.filter({ hasText: emberResults.name });
+    expect(await ember.locator('td').last().textContent()).toBe('Sea trials of 2026-03-14, 2026-03-21');
+    await page.close();
+  });
+
+  it('shows a calibrated boat’s sea trials, the data-sheet figures beside the calibrated ones, and warnings in bold', async () => {
+    const results = JSON.parse(readFileSync(join(outDir, 'results', 'boats', 'ember-reach.json'), 'utf8'));
+    const { page } = await open('boats/ember-reach/index.html');
+    expect(await page.locator('#trials tbody tr').count()).toBe(results.calibrated.calibration.trials.length);
+    const captions = await page.locator('#results caption').allTextContents();
+    expect(captions.filter((c) => c.includes('calibrated to sea trials of 2026-03-14, 2026-03-21'))).toHaveLength(3);
+    expect(await page.locator('#results td.data-sheet').count()).toBeGreaterThan(results.alternatives.length);
+    // Lugging and over-revving impellers: marked cells whose words are bold, so the tint only repeats them.
+    const warnings = await page.locator('#results td.warn strong').all();
+    expect(warnings.length).toBeGreaterThan(0);
+    for (const w of warnings) expect(Number(await w.evaluate((e) => getComputedStyle(e).fontWeight))).toBeGreaterThanOrEqual(700);
+    await page.close();
+  });
+
   it('saves screenshots of the index and one boat page under test-results/', async () => {
     mkdirSync('test-results', { recursive: true });
     const { page: index } = await open('index.html');
@@ -197,6 +227,9 @@ describe('the built demo site in Chromium', { timeout: 600_000 }, () => {
     const { page: boat } = await open(boatHref);
     await boat.screenshot({ path: 'test-results/site-boat.png', fullPage: true });
     await boat.close();
+    const { page: calibrated } = await open('boats/ember-reach/index.html');
+    await calibrated.locator('main').screenshot({ path: 'test-results/site-boat-calibrated.png' });
+    await calibrated.close();
     expect(readFileSync('test-results/site-boat.png').length).toBeGreaterThan(10_000);
   });
 });
