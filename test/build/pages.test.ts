@@ -50,6 +50,24 @@ describe('pages', () => {
     expect(out).toContain('<p class="table-note">n</p>');
   });
 
+  it('table() links a cell from the page back to the root, puts a warning in bold in a marked cell, and marks data-sheet figures', () => {
+    const out = table(
+      {
+        caption: 'Boats',
+        head: ['Boat', 'Status', 'Data-sheet rpm', 'Based on'],
+        rows: [[{ text: 'A & B', href: 'boats/a/index.html' }, { text: 'Too light: over-revs', mark: 'warn' }, { text: '5200', mark: 'dataSheet' }, 'Sea trials of 2026-03-14']],
+        numeric: [2],
+        nowrap: [3],
+        words: [1],
+      },
+      '../../',
+    ).value;
+    expect(out).toContain('<th scope="row"><a href="../../boats/a/index.html">A &amp; B</a></th>');
+    expect(out).toContain('<td class="words warn"><strong>Too light: over-revs</strong></td>');
+    expect(out).toContain('<td class="num data-sheet">5200</td>');
+    expect(out).toContain('<td class="nowrap">Sea trials of 2026-03-14</td>');
+  });
+
   it('a boat page carries the cautions, the inline sheet with its text alternative, downloads and a print page of its size', () => {
     const out = boatPage(site, boat);
     expect(out).toContain('<li>Confirm by a sea trial.</li><li>Never exceed maximum rpm.</li>');
