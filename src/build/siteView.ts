@@ -74,7 +74,8 @@ export interface FamilyView {
 /** A boat's sea trials and what they calibrated (only for boats with usable trials). */
 export interface CalibrationView {
   readonly heading: string;
-  readonly trials: TableView;
+  /** Absent when the trials were refused (then the paragraphs say why). */
+  readonly trials?: TableView;
   /** What was fitted, what the calibrated bands cover: one sentence or a few each. */
   readonly paragraphs: readonly string[];
 }

@@ -54,9 +54,10 @@ function trialTable(result: BoatResult, tolerancePct: number): TableView {
   };
 }
 
-/** The sea trials, what they calibrated and what the calibrated bands cover; null for a boat without usable trials. */
+/** The sea trials, what they calibrated and what the calibrated bands cover; why they were refused; null for a boat without trials. */
 export function calibrationView(result: BoatResult, tolerances: { impellerPct: number; enginePct: number }): CalibrationView | null {
   const cal = result.calibrated;
+  if (!cal && result.trialsNotUsed) return { heading: 'Sea trials not used', paragraphs: [result.trialsNotUsed] };
   if (!cal) return null;
   return {
     heading: 'Sea trials and calibration',

@@ -194,3 +194,18 @@ describe('every table of a boat page', () => {
     }
   });
 });
+
+describe('a boat page whose sea trials the calibration refuses', () => {
+  it('says the trials were not used and why, with no calibrated figures', () => {
+    // Trials far below what the data predicts (invented): the engine would need about a third of its power.
+    const boat = project.boats.find((b) => b.id === 'ember-reach')!;
+    const slow: Project = {
+      ...project,
+      boats: project.boats.map((b) => (b.id === boat.id ? { ...b, trials: b.trials.map((t) => ({ ...t, wotRpm: Math.round(t.wotRpm * 0.7) })) } : b)),
+    };
+    const text = pageText(pageOf(slow, boat.id));
+    expect(text).toContain('Sea trials not used');
+    expect(text).toMatch(/The sea trials were not used: to fit them the engine would make \d+ % of its published power/);
+    expect(text).not.toContain(CALIBRATED_TO);
+  });
+});

@@ -56,7 +56,7 @@ ${facts(boat.facts, root)}${boat.notes ? html`<p>${boat.notes}</p>` : ''}
 ${linkList(boat.links, root)}
 ${section('results', 'Predictions', html`${boat.tables.map((t) => table(t, root))}
 ${resultsLink(site, boat.resultsHref, root)}`)}
-${boat.calibration ? section('trials', boat.calibration.heading, html`${table(boat.calibration.trials, root)}${boat.calibration.paragraphs.map((p) => html`<p>${p}</p>`)}`) : ''}
+${boat.calibration ? section('trials', boat.calibration.heading, html`${boat.calibration.trials ? table(boat.calibration.trials, root) : ''}${boat.calibration.paragraphs.map((p) => html`<p>${p}</p>`)}`) : ''}
 ${section('sheets', 'Sheets', html`${boat.sheets.map((s) => sheetFigure(s, root))}`)}`;
   return pageLayout({ site, title: boat.name, root, body, sheets: boat.sheets });
 }
