@@ -1,8 +1,7 @@
 /**
  * Generated fleets for the build benchmark: the demo's site, engines and jets plus N boats made from
  * the demo boats with new ids and names and the impellers taken in turn. Books are left out: the demo
- * books name demo boats, and a wall chart whose conditions match hundreds of boats lists them all in
- * its side column, which does not fit. All of it is invented demo data.
+ * books name demo boats. All of it is invented demo data.
  */
 import { cpSync, mkdirSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
