@@ -85,8 +85,29 @@ function fittedMeasured(boat: Boat, c: CalibrationResult): CalibratedFigures['fi
   return latest ? { date: latest.date, wotRpm: latest.wotRpm } : undefined;
 }
 
-/** Analyses one boat of the project (powers kW, speeds rpm). */
+/**
+ * Analyses one boat of the project (powers kW, speeds rpm). A boat's spec sheet, console card, upgrade
+ * sheet and results file all need the same analysis (about 8 ms with its calibration), so it is
+ * remembered per (boat, project) object: both are immutable and a new load makes new objects, so a
+ * remembered result can never be stale. The WeakMap keeps nothing alive that the caller dropped.
+ */
 export function analyseBoat(args: { boat: Boat; project: Project }): BoatResult {
+  let perProject = REMEMBERED.get(args.boat);
+  if (!perProject) {
+    perProject = new WeakMap();
+    REMEMBERED.set(args.boat, perProject);
+  }
+  let result = perProject.get(args.project);
+  if (!result) {
+    result = computeBoat(args);
+    perProject.set(args.project, result);
+  }
+  return result;
+}
+
+const REMEMBERED = new WeakMap<Boat, WeakMap<Project, BoatResult>>();
+
+function computeBoat(args: { boat: Boat; project: Project }): BoatResult {
   const { boat } = args;
   const inst = boatInstallation(boat);
   const wot = bandResult(operatingBand(inst));
