@@ -9,9 +9,9 @@ import { cpSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { buildSite } from '../src/build/buildSite.ts';
-import { createBuildCache } from '../src/build/renderCache.ts';
-import { createRenderPool } from '../src/build/renderPool.ts';
+import { buildSite } from '../src/site/buildSite.ts';
+import { createBuildCache } from '../src/site/renderCache.ts';
+import { createRenderPool } from '../src/site/renderPool.ts';
 import { generateFleet } from './fleet.ts';
 import { comparePdf } from './pdfVsChromium.ts';
 

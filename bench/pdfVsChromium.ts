@@ -8,7 +8,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium } from 'playwright-core';
 import { loadProject } from '../src/data/load.ts';
-import { planSheets } from '../src/build/planSheets.ts';
+import { planSheets } from '../src/site/planSheets.ts';
 import { renderPdf, renderSvg } from '../src/render/index.ts';
 import type { Scene } from '../src/scene/types.ts';
 import { sheetScene } from '../src/sheets/index.ts';

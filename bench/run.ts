@@ -36,7 +36,7 @@ const report = [
   '',
   '## How the build stays fast',
   '',
-  '- Every analysis, scene and file is computed once per build in src/build and handed to Eleventy as one',
+  '- Every analysis, scene and file is computed once per build in src/site and handed to Eleventy as one',
   '  global data object (a class instance, so Eleventy does not deep-copy it into every page).',
   '- SVG, PDF and PNG of each sheet, and the book PDFs, render in a pool of worker threads (one per core)',
   '  while the main thread builds the next scenes; at most four sheets are in flight, and pages read each',

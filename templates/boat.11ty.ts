@@ -1,6 +1,6 @@
 // One page per boat (paginated over the site's boats).
-import { boatPage } from '../src/build/pages/pages.ts';
-import type { BoatView, SiteData } from '../src/build/siteView.ts';
+import { boatPage } from '../src/site/pages/pages.ts';
+import type { BoatView, SiteData } from '../src/site/siteView.ts';
 
 export const data = {
   pagination: { data: 'site.boats', size: 1, alias: 'boat' },

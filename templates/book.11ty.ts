@@ -1,6 +1,6 @@
 // One page per chart book (paginated over the site's books).
-import { bookPage } from '../src/build/pages/pages.ts';
-import type { BookView, SiteData } from '../src/build/siteView.ts';
+import { bookPage } from '../src/site/pages/pages.ts';
+import type { BookView, SiteData } from '../src/site/siteView.ts';
 
 export const data = {
   pagination: { data: 'site.books', size: 1, alias: 'book' },

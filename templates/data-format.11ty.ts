@@ -1,6 +1,6 @@
 // The data-format page with links to the JSON Schemas.
-import { dataFormatPage } from '../src/build/pages/dataFormatPage.ts';
-import type { SiteData } from '../src/build/siteView.ts';
+import { dataFormatPage } from '../src/site/pages/dataFormatPage.ts';
+import type { SiteData } from '../src/site/siteView.ts';
 
 export const data = { permalink: 'data-format/index.html' };
 

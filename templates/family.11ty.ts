@@ -1,6 +1,6 @@
 // One page per engine family (paginated over the site's families).
-import { familyPage } from '../src/build/pages/pages.ts';
-import type { FamilyView, SiteData } from '../src/build/siteView.ts';
+import { familyPage } from '../src/site/pages/pages.ts';
+import type { FamilyView, SiteData } from '../src/site/siteView.ts';
 
 export const data = {
   pagination: { data: 'site.families', size: 1, alias: 'family' },

@@ -1,6 +1,6 @@
-// The front page. Templates stay thin: the page is built by src/build/pages.
-import { indexPage } from '../src/build/pages/pages.ts';
-import type { SiteData } from '../src/build/siteView.ts';
+// The front page. Templates stay thin: the page is built by src/site/pages.
+import { indexPage } from '../src/site/pages/pages.ts';
+import type { SiteData } from '../src/site/siteView.ts';
 
 export const data = { permalink: 'index.html' };
 

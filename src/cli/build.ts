@@ -1,5 +1,5 @@
 /** `matchbook build`: the whole site and chart books, swapped into the output folder atomically. */
-import { buildSite } from '../build/buildSite.ts';
+import { buildSite } from '../site/buildSite.ts';
 import type { ParsedArgs } from './args.ts';
 import type { CliIo } from './io.ts';
 import { progressPrinter } from './progress.ts';

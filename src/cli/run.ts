@@ -5,8 +5,8 @@
 import { parseArgs, UsageError } from './args.ts';
 import { helpText } from './help.ts';
 import type { CliIo } from './io.ts';
-import { OutputFolderError } from '../build/atomicDir.ts';
-import { BuildDateError } from '../build/dateIso.ts';
+import { OutputFolderError } from '../site/atomicDir.ts';
+import { BuildDateError } from '../site/dateIso.ts';
 
 export const EXIT_OK = 0;
 export const EXIT_INVALID_DATA = 1;

@@ -1,9 +1,9 @@
 /** `matchbook serve`: Eleventy's dev server; editing a YAML file or a template rebuilds and reloads. */
 import { resolve } from 'node:path';
 import Eleventy from '@11ty/eleventy';
-import { checkOutputFolder } from '../build/atomicDir.ts';
-import { configureEleventy, TEMPLATES_DIR, type EleventyConfigApi } from '../build/eleventySetup.ts';
-import { InvalidDataError, liveSiteData } from '../build/liveSite.ts';
+import { checkOutputFolder } from '../site/atomicDir.ts';
+import { configureEleventy, TEMPLATES_DIR, type EleventyConfigApi } from '../site/eleventySetup.ts';
+import { InvalidDataError, liveSiteData } from '../site/liveSite.ts';
 import type { ParsedArgs } from './args.ts';
 import type { CliIo } from './io.ts';
 

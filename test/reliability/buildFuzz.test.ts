@@ -7,7 +7,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { analyseBoat, analyseWallChart } from '../../src/analysis/index.ts';
-import { planSheets, type PlannedSheet } from '../../src/build/planSheets.ts';
+import { planSheets, type PlannedSheet } from '../../src/site/planSheets.ts';
 import { loadProjectFromFiles } from '../../src/data/load.ts';
 import type { Project } from '../../src/data/types.ts';
 import { renderSvg } from '../../src/render/index.ts';
@@ -17,7 +17,7 @@ import { demoSources, fuzzRuns, mutateDemo, numbersIn, type Mutation } from './m
 
 const demo = demoSources();
 const DATE_ISO = '2026-11-02';
-/** The errors a user fixes in the data (src/build/errors.ts tells them apart by name the same way). */
+/** The errors a user fixes in the data (src/site/errors.ts tells them apart by name the same way). */
 const TYPED = new Set(['LayoutError', 'UnsupportedCharacterError']);
 
 /** Numbers moved by a factor, or replaced: changes that often still load and stress the physics. */

@@ -10,7 +10,7 @@ import { dirname, join } from 'node:path';
 import { findAll, textContent } from 'domutils';
 import { parseDocument } from 'htmlparser2';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createStaging, discardStaging } from '../../src/build/atomicDir.ts';
+import { createStaging, discardStaging } from '../../src/site/atomicDir.ts';
 import { xmlProblems } from '../render/xmlCheck.ts';
 import { matchbook, STACK_TRACE } from './cli.ts';
 import { removeDir, tempDir } from './corpus.ts';

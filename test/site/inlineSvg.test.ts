@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { inlineSvg } from '../../src/build/inlineSvg.ts';
+import { inlineSvg } from '../../src/site/inlineSvg.ts';
 
 describe('inlineSvg()', () => {
   const doc = [

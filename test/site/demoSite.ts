@@ -5,10 +5,10 @@
 import { DomUtils, parseDocument } from 'htmlparser2';
 import { loadProject } from '../../src/data/load.ts';
 import type { Project } from '../../src/data/types.ts';
-import { planSheets } from '../../src/build/planSheets.ts';
-import { siteResults } from '../../src/build/siteResults.ts';
-import { siteView } from '../../src/build/siteViewBuild.ts';
-import type { SiteView } from '../../src/build/siteView.ts';
+import { planSheets } from '../../src/site/planSheets.ts';
+import { siteResults } from '../../src/site/siteResults.ts';
+import { siteView } from '../../src/site/siteViewBuild.ts';
+import type { SiteView } from '../../src/site/siteView.ts';
 
 /** The demo project from data/ (demo data: invented makers and boats). */
 export async function demoProject(): Promise<Project> {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { stableJson } from '../../src/build/stableJson.ts';
+import { stableJson } from '../../src/site/stableJson.ts';
 
 describe('stableJson()', () => {
   it('sorts keys at every depth, whatever order they were added in', () => {

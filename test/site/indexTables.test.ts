@@ -7,7 +7,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { analyseBoat, isWarning } from '../../src/analysis/index.ts';
 import type { Project } from '../../src/data/types.ts';
-import { indexPage } from '../../src/build/pages/pages.ts';
+import { indexPage } from '../../src/site/pages/pages.ts';
 import { rpmText } from '../../src/sheets/kit/format.ts';
 import { demoProject, pageTables, tableStarting, viewOf, type ParsedTable } from './demoSite.ts';
 

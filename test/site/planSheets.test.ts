@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { loadProject } from '../../src/data/load.ts';
-import { boatSheetRequests, planSheets } from '../../src/build/planSheets.ts';
+import { boatSheetRequests, planSheets } from '../../src/site/planSheets.ts';
 import type { Project } from '../../src/data/types.ts';
 
 async function demo(): Promise<Project> {

@@ -7,7 +7,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { analyseBoat, isWarning, STATUS_WORDS, type BoatResult } from '../../src/analysis/index.ts';
 import type { Project } from '../../src/data/types.ts';
-import { boatPage } from '../../src/build/pages/pages.ts';
+import { boatPage } from '../../src/site/pages/pages.ts';
 import { rpmText } from '../../src/sheets/kit/format.ts';
 import { byId, demoProject, pageFacts, pageTables, pageText, tableStarting, viewOf, type ParsedCell, type ParsedTable } from './demoSite.ts';
 

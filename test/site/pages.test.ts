@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { boatPage, indexPage } from '../../src/build/pages/pages.ts';
-import { table } from '../../src/build/pages/parts.ts';
-import type { BoatView, SheetView, SiteView } from '../../src/build/siteView.ts';
+import { boatPage, indexPage } from '../../src/site/pages/pages.ts';
+import { table } from '../../src/site/pages/parts.ts';
+import type { BoatView, SheetView, SiteView } from '../../src/site/siteView.ts';
 
 const sheet: SheetView = {
   slug: 'spec-a',

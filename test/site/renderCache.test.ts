@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { planSheets } from '../../src/build/planSheets.ts';
-import { sceneKey } from '../../src/build/renderCache.ts';
+import { planSheets } from '../../src/site/planSheets.ts';
+import { sceneKey } from '../../src/site/renderCache.ts';
 import { loadProject } from '../../src/data/load.ts';
 import type { Project } from '../../src/data/types.ts';
 

@@ -9,7 +9,7 @@ import {
   createStaging,
   discardStaging,
   swapIn,
-} from '../../src/build/atomicDir.ts';
+} from '../../src/site/atomicDir.ts';
 
 function sandbox(): string {
   return mkdtempSync(join(tmpdir(), 'matchbook-atomic-'));

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { escapeHtml, html, trustedHtml } from '../../src/build/html.ts';
+import { escapeHtml, html, trustedHtml } from '../../src/site/html.ts';
 
 describe('html escaping', () => {
   it('escapeHtml() replaces the five HTML-special characters and nothing else', () => {

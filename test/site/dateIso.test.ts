@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { BuildDateError, buildDateIso } from '../../src/build/dateIso.ts';
+import { BuildDateError, buildDateIso } from '../../src/site/dateIso.ts';
 
 describe('buildDateIso()', () => {
   it('takes the date from SOURCE_DATE_EPOCH in UTC', () => {

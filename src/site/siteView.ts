@@ -1,6 +1,6 @@
 /**
  * What the templates see: plain, already-formatted views of the project, computed once per build
- * by src/build and handed to Eleventy as the global data "site". Hrefs are relative to the site root
+ * by src/site and handed to Eleventy as the global data "site". Hrefs are relative to the site root
  * ("sheets/x.svg"); pages prefix them with the way back to the root so the site also works when
  * opened from disk.
  */
