@@ -18,3 +18,5 @@ export {
   type TopSpeedRow,
   type UpgradeEstimate,
 } from './boatEstimates.ts';
+export { absorptionLaw, engineCurveAt, pieceBetween, type AbsorptionLaw, type EngineCurve, type HermitePiece } from './chartCurves.ts';
+export type { MatchStatus, Ambient, DriveLineSpec } from '../model/index.ts';

@@ -11,6 +11,7 @@ import type {
   ImpellerFamilySpec,
   ImpellerSpec,
 } from '../model/types.ts';
+import type { Paper } from '../standards/paper.ts';
 
 /** Where a definition came from, for messages and the site ("data/boats/river-runner.yaml"). */
 export interface SourceRef {
@@ -116,15 +117,7 @@ export interface Boat {
   readonly source: SourceRef;
 }
 
-export type PaperSize = 'A3' | 'A4' | 'A5' | 'A6' | 'Letter' | 'Legal' | 'Tabloid' | 'Card4x6';
-export type Orientation = 'portrait' | 'landscape';
-
-export interface Paper {
-  readonly size: PaperSize;
-  readonly orientation: Orientation;
-  /** 0 or 3 (mm); with bleed the sheet gets crop marks. */
-  readonly bleedMm: number;
-}
+export type { Orientation, Paper, PaperSize } from '../standards/paper.ts';
 
 /** Conditions a wall chart is drawn for, when no boat fixes them. */
 export interface ChartConditions {

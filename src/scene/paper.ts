@@ -1,33 +1,8 @@
-/**
- * Paper sizes, the page frame (media, trim, safe area, bleed) and crop marks, all in mm.
- * ISO 216 gives the A series; ANSI/ASME Y14.1 gives Letter (A), Tabloid (B) and Legal is the
- * US 8.5 × 14 in sheet; 1 in = 25.4 mm exactly.
- */
-import type { Orientation, Paper, PaperSize } from '../data/types.ts';
+/** The page frame (media, trim, safe area, bleed) and crop marks, all in mm; sizes from src/standards/paper.ts. */
+import { PORTRAIT_MM, paperSizeMm, type Paper, type PaperSize } from '../standards/paper.ts';
 import type { Box, PathNode } from './types.ts';
 
-const MM_PER_IN = 25.4;
-
-/** Inches → mm, rounded to the µm so 8.5 in is exactly 215.9 mm in floating point too. */
-const inchesMm = (inches: number): number => Math.round(inches * MM_PER_IN * 1000) / 1000;
-
-/** Portrait width × height in mm. */
-const PORTRAIT_MM: Readonly<Record<PaperSize, readonly [number, number]>> = Object.freeze({
-  A3: [297, 420],
-  A4: [210, 297],
-  A5: [148, 210],
-  A6: [105, 148],
-  Letter: [inchesMm(8.5), inchesMm(11)],
-  Legal: [inchesMm(8.5), inchesMm(14)],
-  Tabloid: [inchesMm(11), inchesMm(17)],
-  Card4x6: [inchesMm(4), inchesMm(6)],
-});
-
-/** Trim size of a sheet in mm for a paper size and orientation. */
-export function paperSizeMm(size: PaperSize, orientation: Orientation): { widthMm: number; heightMm: number } {
-  const [shortMm, longMm] = PORTRAIT_MM[size];
-  return orientation === 'portrait' ? { widthMm: shortMm, heightMm: longMm } : { widthMm: longMm, heightMm: shortMm };
-}
+export { paperSizeMm };
 
 export interface PageFrame {
   /** Media size: trim plus bleed on every side (mm). */

@@ -5,9 +5,8 @@
  * one model, and the data-sheet engine curve stays beside the calibrated one for comparison.
  */
 import type { Boat } from '../data/types.ts';
-import type { BoatResult } from '../analysis/index.ts';
-import { engineCurve } from '../model/index.ts';
-import type { EngineSeries } from './chart/matchChart.ts';
+import { engineCurveAt, type BoatResult } from '../analysis/index.ts';
+import type { EngineSeries } from './chart/seriesTypes.ts';
 import { STROKE } from './kit/style.ts';
 
 /** Boat, results and engine series for a chart on the calibrated model; null without a calibration. */
@@ -32,8 +31,8 @@ export function calibratedChartView(boat: Boat, result: BoatResult): { boat: Boa
     {
       id: boat.engineVariantId,
       label: `${boat.engine.label} calibrated`,
-      site: engineCurve(engine, { ambient: boat.site.ambient }),
-      reference: engineCurve(boat.engine, { ambient: boat.site.ambient }),
+      site: engineCurveAt(engine, { ambient: boat.site.ambient }),
+      reference: engineCurveAt(boat.engine, { ambient: boat.site.ambient }),
       referenceLabel: `${boat.engine.label} data sheet`,
       widthMm: STROKE.engine,
       dashMm: [],

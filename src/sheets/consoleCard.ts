@@ -5,7 +5,7 @@
 import type { SheetRequest } from '../data/types.ts';
 import type { Scene } from '../scene/types.ts';
 import { analyseBoat, type BandResult, type LimitsResult } from '../analysis/index.ts';
-import type { MatchStatus } from '../model/index.ts';
+import type { MatchStatus } from '../analysis/index.ts';
 import { assembleScene, assertFits } from './kit/assemble.ts';
 import { ascentMm, label, linePitchMm, paragraph, type Block } from './kit/block.ts';
 import { cautionsBlock } from './kit/cautions.ts';

@@ -5,10 +5,9 @@
  */
 import type { SheetRequest } from '../data/types.ts';
 import type { Scene } from '../scene/types.ts';
-import { analyseBoat, isWarning, type WindowPlace } from '../analysis/index.ts';
-import { engineCurve } from '../model/index.ts';
+import { analyseBoat, engineCurveAt, isWarning, type WindowPlace } from '../analysis/index.ts';
 import { boatChart } from './chart/boatChart.ts';
-import type { EngineSeries } from './chart/matchChart.ts';
+import type { EngineSeries } from './chart/seriesTypes.ts';
 import { assembleScene, assertFits } from './kit/assemble.ts';
 import { paragraph } from './kit/block.ts';
 import { cautionsBlock } from './kit/cautions.ts';
@@ -71,7 +70,7 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
   const engines: EngineSeries[] = CHART_STEPS_PCT.map((pct, i) => ({
     id: `plus-${pct}`,
     label: pct === 0 ? (view ? 'As now (calibrated)' : 'As now') : `${percentText(pct)} power`,
-    site: engineCurve(chartEngine, { ambient: boat.site.ambient, powerFactor: 1 + pct / 100 }),
+    site: engineCurveAt(chartEngine, { ambient: boat.site.ambient, powerFactor: 1 + pct / 100 }),
     widthMm: pct === 0 ? STROKE.emphasis : STROKE.series,
     dashMm: CHART_DASHES[i],
   }));

@@ -1,6 +1,6 @@
 /** Short phrases shared by several sheets. */
 import type { ConditionsResult } from '../analysis/index.ts';
-import type { MatchStatus } from '../model/index.ts';
+import type { MatchStatus } from '../analysis/index.ts';
 
 /** "direct drive, 97 % drive line, fresh water 999 kg/m³, Sea level, 25 °C, 50 % RH". */
 export function conditionsText(c: ConditionsResult): string {

@@ -8,7 +8,7 @@ import { Worker } from 'node:worker_threads';
 import type { Scene } from '../scene/types.ts';
 import type { RenderedSheet } from './renderCache.ts';
 import type { PdfOptions } from '../render/index.ts';
-import type { RenderJob, RenderReply, RenderTask } from './renderWorker.ts';
+import type { RenderJob, RenderReply, RenderTask } from './renderProtocol.ts';
 
 export interface SheetRenderer {
   render(scene: Scene): Promise<RenderedSheet>;

@@ -4,19 +4,9 @@
  * heaviest part of a build and each sheet is independent, so the build spreads it over the CPU cores.
  */
 import { parentPort } from 'node:worker_threads';
-import { renderPdf, type PdfOptions } from '../render/index.ts';
-import type { Scene } from '../scene/types.ts';
-import { renderSheetNow } from './sheetFiles.ts';
-
-export type RenderTask =
-  | { readonly kind: 'sheet'; readonly scene: Scene }
-  | { readonly kind: 'book'; readonly scenes: readonly Scene[]; readonly options: PdfOptions };
-
-export type RenderJob = RenderTask & { readonly id: number };
-
-export type RenderReply =
-  | { readonly id: number; readonly ok: true; readonly svg: string; readonly pdf: Uint8Array; readonly png: Uint8Array }
-  | { readonly id: number; readonly ok: false; readonly name: string; readonly message: string };
+import { renderPdf } from '../render/index.ts';
+import type { RenderJob, RenderReply } from './renderProtocol.ts';
+import { renderSheetNow } from './renderSheet.ts';
 
 async function run(job: RenderJob): Promise<{ svg: string; pdf: Uint8Array; png: Uint8Array }> {
   if (job.kind === 'sheet') return renderSheetNow(job.scene);

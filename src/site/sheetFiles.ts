@@ -1,25 +1,10 @@
 /** One sheet's three files (SVG, PDF, PNG at 150 dpi), rendered once and reused from the cache. */
-import { renderPdf, renderPng, renderSvg } from '../render/index.ts';
 import type { Scene } from '../scene/types.ts';
 import { sceneHash, type BuildCache, type RenderedSheet } from './renderCache.ts';
 import type { SheetRenderer } from './renderPool.ts';
+import { renderSheetNow } from './renderSheet.ts';
 
-/** Resolution of the PNG downloads, dots per inch. */
-export const PNG_DPI = 150;
-
-/** Renders the scene to SVG, PDF and PNG in this thread. */
-export async function renderSheetNow(scene: Scene): Promise<RenderedSheet> {
-  const svg = renderSvg(scene);
-  const pdf = await renderPdf([scene], {
-    title: scene.title,
-    subject: scene.subject,
-    keywords: scene.keywords,
-    dateIso: scene.dateIso,
-  });
-  // The PNG is drawn from glyph outlines (no text for resvg to lay out): about twice as fast as the text SVG.
-  const png = renderPng(scene, { dpi: PNG_DPI });
-  return { svg, pdf, png };
-}
+export { PNG_DPI, renderSheetNow } from './renderSheet.ts';
 
 /** Renders through the renderer (a worker pool) or in this thread, or takes the files from the cache. */
 export async function renderSheetFiles(

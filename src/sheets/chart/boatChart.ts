@@ -5,10 +5,11 @@
 import type { Boat, PowerUnit } from '../../data/types.ts';
 import type { Box } from '../../scene/types.ts';
 import type { BoatResult } from '../../analysis/index.ts';
-import type { EngineCurve } from '../../model/index.ts';
+import type { EngineCurve } from '../../analysis/index.ts';
 import { isWarning } from '../../analysis/index.ts';
 import { rpmText } from '../kit/format.ts';
-import { matchChart, type EngineSeries, type MatchChart } from './matchChart.ts';
+import { matchChart, type MatchChart } from './matchChart.ts';
+import type { EngineSeries } from './seriesTypes.ts';
 import { engineSeries, impellerSeries } from './series.ts';
 import { pointSuffix } from '../words.ts';
 

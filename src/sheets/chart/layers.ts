@@ -9,7 +9,7 @@ import { markerBox } from '../kit/markers.ts';
 import type { PlotScales } from '../kit/scales.ts';
 import { INK, INK_SOFT, PAPER_WHITE, STROKE, WARN, WINDOW_FILL, stroke } from '../kit/style.ts';
 import { bandArea } from './bandArea.ts';
-import type { EngineSeries, ImpellerSeries } from './matchChart.ts';
+import type { EngineSeries, ImpellerSeries } from './seriesTypes.ts';
 
 /** A straight line from (x0, y0) to (x1, y1), mm. */
 export const line = (x0: number, y0: number, x1: number, y1: number) => [

@@ -5,35 +5,13 @@
  */
 import type { Box, SceneNode } from '../../scene/types.ts';
 import type { PowerUnit } from '../../data/types.ts';
-import type { EngineCurve } from '../../model/index.ts';
 import { chartArea, chartAxes, chartGrid } from '../kit/axes.ts';
-import type { PowerLaw } from '../kit/curves.ts';
 import { placeLabels, type LabelRequest, type PlacedLabels } from '../kit/labels.ts';
 import { marker, markerBox } from '../kit/markers.ts';
 import { plotScales, type PlotScales } from '../kit/scales.ts';
-import { INK, PAPER_WHITE, WARN, type SeriesStyle } from '../kit/style.ts';
+import { INK, PAPER_WHITE, WARN } from '../kit/style.ts';
+import type { EngineSeries, ImpellerSeries } from './seriesTypes.ts';
 import { cruiseLayer, engineLayers, impellerLayers, pointsOnChart, revLimitLine, windowBand } from './layers.ts';
-
-export interface ImpellerSeries {
-  readonly id: string;
-  readonly label: string;
-  readonly law: PowerLaw;
-  /** Rating tolerance as a fraction (0.05 = ±5 %). */
-  readonly tolerance: number;
-  readonly style: SeriesStyle;
-}
-
-export interface EngineSeries {
-  readonly id: string;
-  readonly label: string;
-  readonly site: EngineCurve;
-  /** The published curve, drawn thin and dashed when it differs from the site curve. */
-  readonly reference?: EngineCurve;
-  readonly referenceLabel?: string;
-  /** Line width (mm); variants differ by weight as well as label. */
-  readonly widthMm: number;
-  readonly dashMm: readonly number[];
-}
 
 export interface ChartPoint {
   readonly key: string;

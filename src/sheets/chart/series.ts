@@ -3,16 +3,15 @@
  * place in the jet's list, so an impeller looks the same on every sheet) and one engine series per variant.
  */
 import type { EngineFamily, EngineVariant, JetUnit } from '../../data/types.ts';
-import type { Ambient, DriveLineSpec } from '../../model/index.ts';
-import { engineCurve, makeAbsorber } from '../../model/index.ts';
+import { absorptionLaw, engineCurveAt, type Ambient, type DriveLineSpec } from '../../analysis/index.ts';
 import { seriesStyle, STROKE } from '../kit/style.ts';
-import type { EngineSeries, ImpellerSeries } from './matchChart.ts';
+import type { EngineSeries, ImpellerSeries } from './seriesTypes.ts';
 
 /** Absorption series of every impeller of a jet, referred to the engine shaft. */
 export function impellerSeries(args: { jet: JetUnit; driveLine: DriveLineSpec; waterDensityKgM3: number }): ImpellerSeries[] {
   return args.jet.impellers.map((impeller, i) => {
-    const a = makeAbsorber({ family: args.jet.family, impeller, driveLine: args.driveLine, waterDensityKgM3: args.waterDensityKgM3 });
-    return { id: impeller.id, label: impeller.label, law: { coefficient: a.coefficient, exponent: a.exponent }, tolerance: args.jet.family.tolerancePct / 100, style: seriesStyle(i) };
+    const law = absorptionLaw({ family: args.jet.family, impeller, driveLine: args.driveLine, waterDensityKgM3: args.waterDensityKgM3 });
+    return { id: impeller.id, label: impeller.label, law, tolerance: args.jet.family.tolerancePct / 100, style: seriesStyle(i) };
   });
 }
 
@@ -32,8 +31,8 @@ export function variantShortLabels(variants: readonly EngineVariant[]): string[]
 export function engineSeries(args: { family: EngineFamily; ambient: Ambient }): EngineSeries[] {
   const shorts = variantShortLabels(args.family.variants);
   return args.family.variants.map((v, i) => {
-    const site = engineCurve(v, { ambient: args.ambient });
-    const reference = engineCurve(v);
+    const site = engineCurveAt(v, { ambient: args.ambient });
+    const reference = engineCurveAt(v);
     const differs = Math.abs(site.appliedFactor / reference.appliedFactor - 1) > 1e-3;
     return {
       id: v.variantId,

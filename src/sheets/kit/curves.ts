@@ -10,14 +10,8 @@
  *   c·k·n^(k−1) = s ⇒ n* = (s / (c·k))^(1/(k−1)); scales are affine, so that holds in mm as well.
  */
 import type { PathSegment } from '../../scene/types.ts';
-import { hermiteSlope, hermiteValue, type HermitePiece } from '../../model/index.ts';
+import { pieceBetween, type HermitePiece } from '../../analysis/index.ts';
 import type { PlotScales } from './scales.ts';
-
-/** The same cubic restricted to [a, b] ⊂ [x0, x1], still in Hermite form. */
-function restrictPiece(p: HermitePiece, a: number, b: number): HermitePiece {
-  if (a === p.x0 && b === p.x1) return p;
-  return { x0: a, x1: b, y0: hermiteValue(p, a), y1: hermiteValue(p, b), m0: hermiteSlope(p, a), m1: hermiteSlope(p, b) };
-}
 
 /** Path (mm) of an engine curve's Hermite pieces, exact, limited to [fromRpm, toRpm] and the x domain. */
 export function hermitePath(
@@ -32,7 +26,7 @@ export function hermitePath(
     const a = Math.max(piece.x0, lo);
     const b = Math.min(piece.x1, hi);
     if (!(b > a)) continue;
-    const p = restrictPiece(piece, a, b);
+    const p = pieceBetween(piece, a, b);
     const h = p.x1 - p.x0;
     if (segments.length === 0) segments.push({ op: 'M', x: scales.x(p.x0), y: scales.y(p.y0) });
     segments.push({

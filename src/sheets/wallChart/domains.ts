@@ -5,7 +5,7 @@
  * variants compare at a glance.
  */
 import type { WallChartResult } from '../../analysis/index.ts';
-import type { EngineSeries } from '../chart/matchChart.ts';
+import type { EngineSeries } from '../chart/seriesTypes.ts';
 
 export interface PanelDomains {
   readonly rpm: [number, number];

@@ -9,7 +9,7 @@ import type { PowerUnit } from '../../data/types.ts';
 import type { LimitsResult } from '../../analysis/index.ts';
 import type { Box, SceneNode } from '../../scene/types.ts';
 import { cruiseLayer, engineLayers, impellerLayers, pointsOnChart, revLimitLine, windowBand } from '../chart/layers.ts';
-import type { EngineSeries, ImpellerSeries } from '../chart/matchChart.ts';
+import type { EngineSeries, ImpellerSeries } from '../chart/seriesTypes.ts';
 import { chartArea, chartAxes, chartGrid, type AxisSides } from '../kit/axes.ts';
 import { ascentMm, label, linePitchMm } from '../kit/block.ts';
 import { edgeLabelRow, type EdgeLabel } from '../kit/edgeLabels.ts';

@@ -5,7 +5,7 @@
 import type { Boat, SiteConfig } from '../../data/types.ts';
 import type { WallChartResult } from '../../analysis/index.ts';
 import type { Box, SceneNode } from '../../scene/types.ts';
-import type { ImpellerSeries } from '../chart/matchChart.ts';
+import type { ImpellerSeries } from '../chart/seriesTypes.ts';
 import { ascentMm, label, linePitchMm, paragraph } from '../kit/block.ts';
 import { cautionsBlock } from '../kit/cautions.ts';
 import { LayoutError } from '../kit/errors.ts';
