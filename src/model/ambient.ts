@@ -5,7 +5,7 @@
  * so the factor is exactly 1 when S equals R, whatever R is.
  * This estimates; it does not certify a rating.
  */
-import type { Ambient, Aspiration, Fuel } from './types.ts';
+import type { Ambient, Aspiration, Fuel, PowerCorrection } from './types.ts';
 import { waterVapourPressureKpa } from '../standards/atmosphere.ts';
 
 // Re-exported: published reference values shared with the data layer live in src/standards.
@@ -19,6 +19,15 @@ export { isaPressureKpa, waterVapourPressureKpa } from '../standards/atmosphere.
 export function sparkIgnitionCorrection(ambient: Ambient): number {
   const pdKpa = dryAirPressureKpa(ambient);
   return 1.176 * (99 / pdKpa) * Math.sqrt((ambient.airTempC + 273) / 298) - 0.176;
+}
+
+/**
+ * Spark ignition: ISO 1585 form, αa = (99 / pd)^1.2 · (T / 298)^0.6, pd = dry-air pressure kPa, T in kelvin
+ * (shared/REFERENCES.md: from a transcription, not the ISO text). Reference 99 kPa dry air, 298 K.
+ */
+export function isoSparkIgnitionCorrection(ambient: Ambient): number {
+  const pdKpa = dryAirPressureKpa(ambient);
+  return Math.pow(99 / pdKpa, 1.2) * Math.pow((ambient.airTempC + 273.15) / 298, 0.6);
 }
 
 /** Exponent fm used for compression ignition when the fuel delivery per stroke is unknown. */
@@ -37,11 +46,33 @@ export function compressionIgnitionCorrection(ambient: Ambient, aspiration: Aspi
   return Math.pow(fa, fm);
 }
 
-/** Factor (<1 when air is thinner/hotter) that multiplies reference power to give power at site. */
-export function ambientPowerFactor(args: { fuel: Fuel; aspiration: Aspiration; site: Ambient; reference: Ambient }): number {
-  const cf = (a: Ambient) =>
-    args.fuel === 'petrol' ? sparkIgnitionCorrection(a) : compressionIgnitionCorrection(a, args.aspiration);
-  return cf(args.reference) / cf(args.site);
+/**
+ * The correction an engine uses when its data names none: SAE J1349 for spark ignition (petrol) and the
+ * ISO 1585 compression-ignition factor with fm = 1.2 for diesels (see DEFAULT_ENGINE_FACTOR_FM).
+ */
+export function defaultCorrection(fuel: Fuel): PowerCorrection {
+  return fuel === 'petrol' ? { standard: 'sae-j1349' } : { standard: 'iso-1585-ci', engineFactorFm: DEFAULT_ENGINE_FACTOR_FM };
+}
+
+/** The correction factor CF of one standard in some air: observed power × CF = power in the standard's reference air. */
+export function correctionFactor(correction: PowerCorrection, ambient: Ambient, aspiration: Aspiration): number {
+  switch (correction.standard) {
+    case 'sae-j1349':
+      return sparkIgnitionCorrection(ambient);
+    case 'iso-1585-si':
+      return isoSparkIgnitionCorrection(ambient);
+    case 'iso-1585-ci':
+      return compressionIgnitionCorrection(ambient, aspiration, correction.engineFactorFm ?? DEFAULT_ENGINE_FACTOR_FM);
+  }
+}
+
+/**
+ * Factor (<1 when air is thinner/hotter) that multiplies power in reference air to give power at site:
+ * CF(reference) / CF(site), with the engine's own standard or its fuel's default.
+ */
+export function ambientPowerFactor(args: { fuel: Fuel; aspiration: Aspiration; site: Ambient; reference: Ambient; correction?: PowerCorrection }): number {
+  const correction = args.correction ?? defaultCorrection(args.fuel);
+  return correctionFactor(correction, args.reference, args.aspiration) / correctionFactor(correction, args.site, args.aspiration);
 }
 
 /** Dry-air partial pressure, kPa: barometric minus water vapour (relative humidity × saturation pressure). */

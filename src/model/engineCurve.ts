@@ -65,9 +65,14 @@ function screenOf(pieces: readonly HermitePiece[]): PieceScreen {
 /** Full-throttle curve of one engine, scaled by condition factor, ambient correction and an extra factor. */
 export function engineCurve(engine: EngineSpec, opts: { ambient?: Ambient; powerFactor?: number } = {}): EngineCurve {
   const ambientFactor = opts.ambient
-    ? ambientPowerFactor({ fuel: engine.fuel, aspiration: engine.aspiration, site: opts.ambient, reference: engine.referenceAmbient })
+    ? ambientPowerFactor({ fuel: engine.fuel, aspiration: engine.aspiration, site: opts.ambient, reference: engine.referenceAmbient, correction: engine.correction })
     : 1;
-  const factor = engine.conditionFactor * ambientFactor * (opts.powerFactor ?? 1);
+  // Rows measured in other air (a test bench) are first corrected to the engine's reference air.
+  const measuredIn = engine.curve.kind === 'table' ? engine.curve.measuredIn : undefined;
+  const benchFactor = measuredIn
+    ? ambientPowerFactor({ fuel: engine.fuel, aspiration: engine.aspiration, site: engine.referenceAmbient, reference: measuredIn, correction: engine.correction })
+    : 1;
+  const factor = engine.conditionFactor * ambientFactor * benchFactor * (opts.powerFactor ?? 1);
   if (!(factor > 0 && Number.isFinite(factor))) {
     throw new RangeError(`engine ${engine.id}: power factor must be a positive number, found ${factor}; check condition_factor and the site air`);
   }

@@ -5,7 +5,10 @@ export { hermiteSlope, hermiteValue, type HermitePiece } from './monotoneCubic.t
 export {
   ambientPowerFactor,
   compressionIgnitionCorrection,
+  correctionFactor,
   DEFAULT_ENGINE_FACTOR_FM,
+  defaultCorrection,
+  isoSparkIgnitionCorrection,
   dryAirPressureKpa,
   isaPressureKpa,
   sparkIgnitionCorrection,

@@ -20,6 +20,18 @@ export interface Ambient {
   readonly relativeHumidityPct: number;
 }
 
+/**
+ * The power-correction standard an engine's curve is corrected with: SAE J1349 (AUG2004, spark ignition),
+ * ISO 1585 spark ignition, or ISO 1585 / ISO 15550 compression ignition with its engine factor fm (0.3–1.2).
+ */
+export type CorrectionStandard = 'sae-j1349' | 'iso-1585-si' | 'iso-1585-ci';
+
+export interface PowerCorrection {
+  readonly standard: CorrectionStandard;
+  /** Engine factor fm of the compression-ignition formula (only for iso-1585-ci). */
+  readonly engineFactorFm?: number;
+}
+
 /** Speed limits the engine maker states. idle < windowLow <= windowHigh <= max. */
 export interface EngineLimits {
   readonly idleRpm: number;
@@ -30,7 +42,12 @@ export interface EngineLimits {
 
 /** Where the full-throttle power comes from: a published table, or one known point (constant torque). */
 export type CurveSource =
-  | { readonly kind: 'table'; readonly points: readonly CurvePoint[] }
+  | {
+      readonly kind: 'table';
+      readonly points: readonly CurvePoint[];
+      /** Air the rows were measured in (a test-bench run); the curve is corrected from it to referenceAmbient. */
+      readonly measuredIn?: Ambient;
+    }
   | { readonly kind: 'knownPoint'; readonly point: CurvePoint };
 
 /** One engine as the model needs it (one tune of a family). */
@@ -46,6 +63,8 @@ export interface EngineSpec {
   readonly powerTolerancePct: number;
   /** Conditions the published curve is corrected to. */
   readonly referenceAmbient: Ambient;
+  /** Correction standard for air conditions; absent: SAE J1349 for petrol, ISO 1585 CI with fm = 1.2 for diesel. */
+  readonly correction?: PowerCorrection;
   /** Multiplies the whole curve (1 = as published; 0.9 = a worn engine). */
   readonly conditionFactor: number;
   /** Brake specific fuel consumption, g/kWh, when the maker gives it. */

@@ -2,7 +2,10 @@ import { describe, expect, it } from 'vitest';
 import {
   ambientPowerFactor,
   compressionIgnitionCorrection,
+  correctionFactor,
+  defaultCorrection,
   dryAirPressureKpa,
+  isoSparkIgnitionCorrection,
   isaPressureKpa,
   sparkIgnitionCorrection,
   waterVapourPressureKpa,
@@ -97,5 +100,44 @@ describe('ambientPowerFactor()', () => {
       expect(f({ ...reference, relativeHumidityPct: 90 })).toBeLessThan(1);
       expect(f({ ...reference, airTempC: 5, pressureKpa: 102 })).toBeGreaterThan(1);
     }
+  });
+});
+
+describe('isoSparkIgnitionCorrection() (ISO 1585 spark ignition)', () => {
+  it('is exactly 1 at the standard’s reference air, 99 kPa dry and 298 K', () => {
+    // αa = (99/pd)^1.2 · (T/298)^0.6 (shared/REFERENCES.md, transcription of ISO 1585): both ratios are 1.
+    expect(isoSparkIgnitionCorrection({ pressureKpa: 99, airTempC: 298 - 273.15, relativeHumidityPct: 0 })).toBeCloseTo(1, 14);
+  });
+
+  it('gives the published formula’s value in hot, thin air (hand-worked)', () => {
+    // αa = (99/95)^1.2 · (308.15/298)^0.6 = 1.050737 · 1.020299 = 1.072066.
+    expect(isoSparkIgnitionCorrection(HOT_DRY_LAKE)).toBeCloseTo(1.072066, 6);
+  });
+
+  it('differs from SAE J1349 in the same air, so the choice of standard matters', () => {
+    // SAE J1349: 1.069908 (above); ISO 1585 SI: 1.072066; the difference is 0.2 % of power.
+    expect(isoSparkIgnitionCorrection(HOT_DRY_LAKE) - sparkIgnitionCorrection(HOT_DRY_LAKE)).toBeCloseTo(0.002158, 5);
+  });
+});
+
+describe('correctionFactor() and the engine factor fm', () => {
+  it('uses the engine factor given for the compression-ignition formula (hand-worked)', () => {
+    // fa (natural) = 1.066826 (above); fm = 0.8: αc = 1.066826^0.8 = 1.053113; fm = 0.3: 1.019596.
+    expect(correctionFactor({ standard: 'iso-1585-ci', engineFactorFm: 0.8 }, HOT_DRY_LAKE, 'natural')).toBeCloseTo(1.053113, 6);
+    expect(correctionFactor({ standard: 'iso-1585-ci', engineFactorFm: 0.3 }, HOT_DRY_LAKE, 'natural')).toBeCloseTo(1.019596, 6);
+    expect(correctionFactor({ standard: 'iso-1585-ci' }, HOT_DRY_LAKE, 'natural')).toBeCloseTo(1.080718, 6);
+  });
+
+  it('picks the standard named, and the fuel’s default when none is named', () => {
+    expect(correctionFactor({ standard: 'sae-j1349' }, HOT_DRY_LAKE, 'natural')).toBeCloseTo(1.069908, 6);
+    expect(correctionFactor({ standard: 'iso-1585-si' }, HOT_DRY_LAKE, 'natural')).toBeCloseTo(1.072066, 6);
+    expect(defaultCorrection('petrol')).toEqual({ standard: 'sae-j1349' });
+    expect(defaultCorrection('diesel')).toEqual({ standard: 'iso-1585-ci', engineFactorFm: 1.2 });
+  });
+
+  it('ambientPowerFactor() with ISO 1585 SI is the ratio of the two correction factors', () => {
+    const site = ambientPowerFactor({ fuel: 'petrol', aspiration: 'natural', site: HOT_DRY_LAKE, reference: SAE_REFERENCE, correction: { standard: 'iso-1585-si' } });
+    // CF(reference) / CF(site) = 1 / 1.072066 = 0.932778 (SAE reference air is 298.15 K, αa = (298.15/298)^0.6 = 1.000302 there).
+    expect(site).toBeCloseTo(1.000302 / 1.072066, 5);
   });
 });

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { correctionFactor } from '../../src/model/ambient.ts';
 import { engineCurve } from '../../src/model/engineCurve.ts';
 import { REFERENCE_AIR, rows, testEngine } from './fixtures.ts';
 
@@ -24,6 +25,22 @@ describe('engineCurve()', () => {
     expect(engineCurve(testEngine(), { ambient: REFERENCE_AIR }).powerKwUnchecked(6000)).toBe(220);
     const high = engineCurve(testEngine(), { ambient: { ...REFERENCE_AIR, pressureKpa: 85 } });
     expect(high.powerKwUnchecked(6000)).toBeLessThan(220 * 0.9);
+  });
+
+  it('corrects rows measured in other air to the reference air with the engine’s standard', () => {
+    const bench = { pressureKpa: 95, airTempC: 35, relativeHumidityPct: 0 };
+    const table = testEngine();
+    if (table.curve.kind !== 'table') throw new Error('fixture is a table');
+    const measured = testEngine({ curve: { ...table.curve, measuredIn: bench }, correction: { standard: 'iso-1585-si' } });
+    // P_reference = P_measured · CF(bench) / CF(reference); ISO 1585 SI αa = (99/pd)^1.2 · (T/298)^0.6:
+    // CF(bench) = 1.072066 (hand-worked in ambient.test.ts); at the reference air (100 kPa, 25 °C, 30 %) the
+    // computed factor is used, so this checks the direction of the correction and that it is exact at the rows.
+    const ratio = correctionFactor({ standard: 'iso-1585-si' }, bench, 'natural') / correctionFactor({ standard: 'iso-1585-si' }, REFERENCE_AIR, 'natural');
+    expect(correctionFactor({ standard: 'iso-1585-si' }, bench, 'natural')).toBeCloseTo(1.072066, 6);
+    expect(ratio).toBeGreaterThan(1);
+    expect(engineCurve(measured).powerKwUnchecked(6000)).toBeCloseTo(220 * ratio, 10);
+    // At the bench's own air the rows come back as measured.
+    expect(engineCurve(measured, { ambient: bench }).powerKwUnchecked(6000)).toBeCloseTo(220, 10);
   });
 
   it('models a known point as constant torque between idle and maximum speed', () => {

@@ -38,6 +38,7 @@ export function normaliseEngine(source: YamlSource, raw: RawEngineFile): Normali
     if (curve) warnShortTable({ source, warnings, curve, limits });
     const ref = pick('reference_conditions')?.value;
     const bsfc = pick('bsfc_g_per_kwh')?.value;
+    const correction = pick('power_correction')?.value;
     variants.push({
       id: `${raw.id}/${v.id}`,
       familyId: raw.id,
@@ -55,6 +56,9 @@ export function normaliseEngine(source: YamlSource, raw: RawEngineFile): Normali
         relativeHumidityPct: ref?.humidity_pct ?? STANDARD_REFERENCE.relativeHumidityPct,
       },
       conditionFactor: pick('condition_factor')?.value ?? 1,
+      ...(correction !== undefined
+        ? { correction: { standard: correction.standard, ...(correction.engine_factor_fm !== undefined ? { engineFactorFm: correction.engine_factor_fm } : {}) } }
+        : {}),
       ...(bsfc !== undefined ? { bsfcGPerKwh: bsfc } : {}),
       ...(v.notes !== undefined ? { notes: v.notes } : {}),
     });

@@ -40,6 +40,42 @@ export const knownPoint = () =>
     [{ keys: KNOWN_POINT_KEYS, required: true }],
   );
 
+export const CORRECTION_STANDARDS = ['sae-j1349', 'iso-1585-si', 'iso-1585-ci'] as const;
+const SPARK_STANDARDS: readonly string[] = ['sae-j1349', 'iso-1585-si'];
+
+/** Which standard corrects the curve for air conditions; fm only for the compression-ignition one. */
+export const powerCorrection = () =>
+  z
+    .strictObject({
+      standard: z.enum(CORRECTION_STANDARDS, { error: `must be one of ${CORRECTION_STANDARDS.join(', ')}` }),
+      engine_factor_fm: between(0.3, 1.2).optional().describe('Engine factor fm of ISO 1585 compression ignition, 0.3–1.2 (default 1.2)'),
+    })
+    .superRefine(
+      (value, ctx) => {
+        if (value?.engine_factor_fm !== undefined && value.standard !== 'iso-1585-ci') {
+          ctx.addIssue({ code: 'custom', path: ['engine_factor_fm'], message: 'only belongs to standard iso-1585-ci (the compression-ignition formula); remove it or change the standard' });
+        }
+      },
+      { when: () => true },
+    )
+    .describe('Power-correction standard: sae-j1349 or iso-1585-si for petrol, iso-1585-ci for diesel');
+
+/** A spark-ignition standard on a diesel, or the diesel one on a petrol engine, is a mistake in the file. */
+export function checkCorrectionFuel(family: unknown, ctx: z.core.$RefinementCtx): void {
+  if (typeof family !== 'object' || family === null) return;
+  const f = family as { fuel?: unknown; power_correction?: { standard?: unknown }; variants?: unknown };
+  const petrol = f.fuel === 'petrol' || f.fuel === 'gasoline';
+  const diesel = f.fuel === 'diesel';
+  const check = (pc: { standard?: unknown } | undefined, path: (string | number)[]) => {
+    if (typeof pc !== 'object' || pc === null || typeof pc.standard !== 'string') return;
+    const spark = SPARK_STANDARDS.includes(pc.standard);
+    if (diesel && spark) ctx.addIssue({ code: 'custom', path: [...path, 'standard'], message: 'is a spark-ignition standard, but the engine is a diesel; use iso-1585-ci' });
+    if (petrol && pc.standard === 'iso-1585-ci') ctx.addIssue({ code: 'custom', path: [...path, 'standard'], message: 'is the compression-ignition standard, but the engine is petrol; use sae-j1349 or iso-1585-si' });
+  };
+  check(f.power_correction, ['power_correction']);
+  if (Array.isArray(f.variants)) f.variants.forEach((v, i) => check((v as { power_correction?: { standard?: unknown } })?.power_correction, ['variants', i, 'power_correction']));
+}
+
 /** Fields a family states for all its variants and a variant may override. */
 const tuneShape = {
   curve: curveTable(),
@@ -53,6 +89,7 @@ const tuneShape = {
   /** 1 = as published; 0.9 = a tired engine. */
   condition_factor: between(0.3, 1.5),
   bsfc_g_per_kwh: between(150, 600, 'g/kWh'),
+  power_correction: powerCorrection(),
   reference_conditions: z.strictObject({
     pressure_kpa: between(80, 110, 'kPa').optional(),
     air_temp_c: between(-10, 50, '°C').optional(),
@@ -80,6 +117,7 @@ export const engineFile = () =>
     curveChoice,
   )
     .superRefine(checkEngineLimits, { when: () => true })
+    .superRefine(checkCorrectionFuel, { when: () => true })
     .meta({ title: 'matchbook engine family', description: 'An engine family with its variants (tunes): data/engines/<id>.yaml' });
 
 export type RawEngineFile = z.infer<ReturnType<typeof engineFile>>;
