@@ -7,6 +7,7 @@ import { helpText } from './help.ts';
 import type { CliIo } from './io.ts';
 import { OutputFolderError } from '../site/atomicDir.ts';
 import { BuildDateError } from '../site/dateIso.ts';
+import { terminalSafe } from '../data/errors.ts';
 
 export const EXIT_OK = 0;
 export const EXIT_INVALID_DATA = 1;
@@ -37,16 +38,16 @@ export async function runCli(argv: readonly string[], io: CliIo): Promise<number
 /** Prints one failure as a sentence and picks its exit status. */
 export function reportFailure(error: unknown, io: CliIo): number {
   if (error instanceof UsageError || error instanceof OutputFolderError || error instanceof BuildDateError) {
-    io.err(`matchbook: ${error.message}\n${error instanceof UsageError ? 'Run "matchbook --help" for usage.\n' : ''}`);
+    io.err(`matchbook: ${terminalSafe(error.message)}\n${error instanceof UsageError ? 'Run "matchbook --help" for usage.\n' : ''}`);
     return EXIT_MISUSE;
   }
   if (error instanceof Error && error.name === 'SheetDrawError') {
-    io.err(`matchbook: ${error.message}\nmatchbook: nothing written; the output folder is unchanged.\n`);
+    io.err(`matchbook: ${terminalSafe(error.message)}\nmatchbook: nothing written; the output folder is unchanged.\n`);
     return EXIT_INVALID_DATA;
   }
   const message = error instanceof Error ? error.message : String(error);
   io.err(
-    `matchbook: the build stopped unexpectedly: ${message.split('\n')[0]}\n` +
+    `matchbook: the build stopped unexpectedly: ${terminalSafe(message.split('\n')[0])}\n` +
       'This is a fault in matchbook, not in your data; please report it with the command you ran.\n',
   );
   return EXIT_INTERNAL;

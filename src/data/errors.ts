@@ -31,8 +31,20 @@ export function dataError(place: Place, problem: Problem): DataError {
     found: problem.found,
     expected: problem.expected,
     ...(problem.fix ? { fix: problem.fix } : {}),
-    message: `${place.file}:${place.line}:${place.column} ${subject} ${problem.expected}, found ${problem.found}${fix}`,
+    message: terminalSafe(`${place.file}:${place.line}:${place.column} ${subject} ${problem.expected}, found ${problem.found}${fix}`),
   };
+}
+
+/**
+ * Characters that must never reach a terminal raw: C0 and C1 controls (ESC sequences can clear the
+ * screen or fake an "OK"), DEL, zero-width and bidi-control characters. Our own wording holds none, so
+ * escaping the whole sentence treats keys, values and file names alike.
+ */
+const UNSAFE_FOR_TERMINAL = /[\u0000-\u001f\u007f-\u009f\u00ad\u061c\u180e\u200b-\u200f\u2028-\u202e\u2060-\u2069\ufeff]/g;
+
+/** text with every terminal-unsafe character written as \\u001b (JSON's spelling), so it shows instead of acting. */
+export function terminalSafe(text: string): string {
+  return text.replace(UNSAFE_FOR_TERMINAL, (ch) => `\\u${ch.charCodeAt(0).toString(16).padStart(4, '0')}`);
 }
 
 /** Sort by file, line, column, then message, and drop exact repeats (one variant's fault reported per file once). */

@@ -11,7 +11,11 @@
  */
 import type { PathSegment } from '../../scene/types.ts';
 import { pieceBetween, type HermitePiece } from '../../analysis/index.ts';
+import { LayoutError } from './errors.ts';
 import type { PlotScales } from './scales.ts';
+
+/** Most chords one absorption curve may take; a drawable curve needs a few dozen at 0.1 mm. */
+export const MAX_CURVE_CHORDS = 4096;
 
 /** Path (mm) of an engine curve's Hermite pieces, exact, limited to [fromRpm, toRpm] and the x domain. */
 export function hermitePath(
@@ -79,14 +83,23 @@ export function powerLawPoints(
   const out = [point(opts.fromRpm)];
   // Explicit stack instead of recursion: [a, b] intervals still to draw, leftmost on top.
   const stack: [number, number][] = [[opts.fromRpm, opts.toRpm]];
+  // Bounded whatever the numbers: a NaN or infinite value stops at once, and at most MAX_CURVE_CHORDS chords.
+  let steps = 0;
   while (stack.length > 0) {
     const [a, b] = stack.pop()!;
     const fa = powerLawKw(law, a);
     const fb = powerLawKw(law, b);
+    if (!Number.isFinite(a) || !Number.isFinite(b) || !Number.isFinite(fa) || !Number.isFinite(fb) || !Number.isFinite(mmPerKw)) {
+      throw new LayoutError('absorption curve', `cannot be drawn: a power of ${fa} kW at ${a} rpm or ${fb} kW at ${b} rpm is not a finite number; check the impeller ratings and drive-line figures`);
+    }
+    if ((steps += 1) > 2 * MAX_CURVE_CHORDS) {
+      throw new LayoutError('absorption curve', `cannot be drawn within ${MAX_CURVE_CHORDS} chords between ${opts.fromRpm} and ${opts.toRpm} rpm; check the impeller ratings and drive-line figures`);
+    }
     const slope = (fb - fa) / (b - a);
     const nStar = (slope / (law.coefficient * law.exponent)) ** (1 / (law.exponent - 1));
     const deviationMm = Math.abs(powerLawKw(law, nStar) - (fa + slope * (nStar - a))) * mmPerKw;
-    if (deviationMm <= tol || b - a < 1e-6) {
+    // A NaN deviation (slope or n* not finite) can never shrink by splitting: draw the chord.
+    if (!(deviationMm > tol) || b - a < 1e-6) {
       out.push(point(b));
     } else {
       const mid = Math.min(Math.max(nStar, a + (b - a) * 0.1), b - (b - a) * 0.1);

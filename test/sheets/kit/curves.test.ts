@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { engineCurve, makeAbsorber, absorbedPowerKw } from '../../../src/model/index.ts';
-import { hermitePath, powerLawPoints } from '../../../src/sheets/kit/curves.ts';
+import { hermitePath, MAX_CURVE_CHORDS, powerLawPoints } from '../../../src/sheets/kit/curves.ts';
 import { plotScales } from '../../../src/sheets/kit/scales.ts';
 import { family, jet } from '../fixtures/demoProject.ts';
 
@@ -59,5 +59,30 @@ describe('powerLawPoints()', () => {
     const fine = powerLawPoints(a, scales, { fromRpm: 2600, toRpm: 5400, toleranceMm: 0.1 });
     const coarse = powerLawPoints(a, scales, { fromRpm: 2600, toRpm: 5400, toleranceMm: 1 });
     expect(coarse.length).toBeLessThan(fine.length);
+  });
+});
+
+describe('powerLawPoints() is bounded whatever its numbers', () => {
+  // Issue class: a rating of 1e-300 or 1e300 underflows or overflows the law to 0 or Infinity; the
+  // sampler used to split NaN intervals until the heap ran out. Now a named LayoutError, at once.
+  it('refuses a law whose powers overflow to Infinity with a LayoutError naming the figures to check', () => {
+    const overflow = { coefficient: 1e300, exponent: 3 };
+    expect(() => powerLawPoints(overflow, scales, { fromRpm: 2600, toRpm: 5400 })).toThrow(/absorption curve: cannot be drawn: a power of Infinity kW at 2600 rpm/);
+    try {
+      powerLawPoints(overflow, scales, { fromRpm: 2600, toRpm: 5400 });
+    } catch (error) {
+      expect((error as Error).name).toBe('LayoutError');
+    }
+  });
+
+  it('draws a law that underflows to 0 kW as a finite polyline instead of subdividing forever', () => {
+    const pts = powerLawPoints({ coefficient: 1e-300, exponent: 3 }, scales, { fromRpm: 2600, toRpm: 5400 });
+    expect(pts.length).toBeLessThanOrEqual(MAX_CURVE_CHORDS + 1);
+    expect(pts.every((p) => Number.isFinite(p.x) && Number.isFinite(p.y))).toBe(true);
+    expect(pts[pts.length - 1].x).toBeCloseTo(scales.x(5400), 9);
+  });
+
+  it('refuses a NaN range at once', () => {
+    expect(() => powerLawPoints({ coefficient: 1e-6, exponent: 3 }, scales, { fromRpm: NaN, toRpm: 5400 })).toThrow(/not a finite number/);
   });
 });
