@@ -10,13 +10,13 @@ import { engineCurve, FRESH_WATER_KG_M3 } from '../model/index.ts';
 import { hpToKw, kwToHp } from '../units.ts';
 import type { PowerUnit } from '../data/types.ts';
 import { curveKeyNumbers } from './results.ts';
+import { SEA_LEVEL_SITE } from '../data/normalise/conditions.ts';
 
-/** Sea level ISA pressure, 25 °C, 50 % RH: a warm day at the coast (common practice, no source). */
-export const DEFAULT_SITE = Object.freeze({
-  label: 'Sea level, 25 °C, 50 % RH',
-  ambient: Object.freeze({ pressureKpa: 101.325, airTempC: 25, relativeHumidityPct: 50 }),
-  altitudeM: 0,
-});
+/**
+ * The site a sheet assumes when nothing says otherwise: the same sea-level site (ISA pressure, 25 °C,
+ * 30 % RH) a boat or a book gets when its file states none, so a default wall chart and a book's agree.
+ */
+export const DEFAULT_SITE: Site = SEA_LEVEL_SITE;
 
 /** Direct drive with 3 % lost in couplings and bearings (DOMAIN.md: 0.95–0.98, common practice). */
 export const DEFAULT_DRIVE_LINE: DriveLineSpec = Object.freeze({ ratio: 1, efficiency: 0.97 });

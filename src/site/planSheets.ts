@@ -37,17 +37,53 @@ function checkedSlug(slug: string): string {
   return slug;
 }
 
+const num = (n: number): string => String(Math.round(n * 100) / 100).replace('.', 'p');
+
 /**
- * The same sheet kind for the same boat can be asked for on other paper (a book for an overseas office)
- * or, for wall charts, under other conditions. Such a sheet keeps its base slug the first time and gets
- * the paper, then a counter, appended after that; plan order is fixed, so names are stable.
+ * Words naming how a wall chart's conditions differ from those of the first sheet with its base slug:
+ * "ratio-1p55", "salt", "1500m", "cruise-80-120-160kw". Empty when the conditions are the same.
  */
-function uniqueSlug(request: SheetRequest, taken: ReadonlySet<string>): string {
+export function conditionsDifference(a: SheetRequest, b: SheetRequest): string[] {
+  if (a.kind !== 'wallChart' || b.kind !== 'wallChart') return [];
+  const x = a.conditions;
+  const y = b.conditions;
+  const words: string[] = [];
+  if (x.driveLine.ratio !== y.driveLine.ratio) words.push(`ratio-${num(x.driveLine.ratio)}`);
+  if (x.driveLine.efficiency !== y.driveLine.efficiency) words.push(`eff-${Math.round(x.driveLine.efficiency * 100)}`);
+  if (x.water.kind !== y.water.kind || x.water.densityKgM3 !== y.water.densityKgM3) {
+    words.push(x.water.kind === 'custom' ? `water-${Math.round(x.water.densityKgM3)}` : x.water.kind);
+  }
+  const sa = x.site.ambient;
+  const sb = y.site.ambient;
+  if (x.site.altitudeM !== y.site.altitudeM || sa.pressureKpa !== sb.pressureKpa) {
+    words.push(x.site.altitudeM !== undefined ? `${num(x.site.altitudeM)}m` : `${num(sa.pressureKpa)}kpa`);
+  }
+  if (sa.airTempC !== sb.airTempC) words.push(`${num(sa.airTempC)}c`);
+  if (sa.relativeHumidityPct !== sb.relativeHumidityPct) words.push(`rh-${num(sa.relativeHumidityPct)}`);
+  const cruise = (c: readonly number[]): string => c.map((kw) => Math.round(kw)).join('-');
+  if (cruise(x.cruisePowersKw) !== cruise(y.cruisePowersKw)) words.push(x.cruisePowersKw.length > 0 ? `cruise-${cruise(x.cruisePowersKw)}kw` : 'no-cruise');
+  return words;
+}
+
+const samePaper = (a: SheetRequest, b: SheetRequest): boolean =>
+  a.paper.size === b.paper.size && a.paper.orientation === b.paper.orientation && a.paper.bleedMm === b.paper.bleedMm;
+
+/**
+ * The same sheet kind for the same boat or pairing can be asked for on other paper (a book for an
+ * overseas office) or, for wall charts, under other conditions. The first keeps its base slug; a later
+ * one says what differs from it: the conditions that differ, then the paper only if that differs too,
+ * then a counter. Plan order is fixed, so names are stable.
+ */
+function uniqueSlug(request: SheetRequest, first: ReadonlyMap<string, SheetRequest>, taken: ReadonlySet<string>): string {
   const base = sheetSlug(request);
+  const earlier = first.get(base);
   const p = request.paper;
-  const candidates = [base, `${base}-${p.size}-${p.orientation}${p.bleedMm > 0 ? '-bleed' : ''}`.toLowerCase()];
+  const paper = `${p.size}-${p.orientation}${p.bleedMm > 0 ? '-bleed' : ''}`.toLowerCase();
+  const words = earlier ? conditionsDifference(request, earlier) : [];
+  const withPaper = earlier && !samePaper(request, earlier) ? [...words, paper] : words;
+  const candidates = [[base, ...withPaper].join('-'), [base, ...words, paper].join('-')];
   for (let n = 2; ; n += 1) {
-    const slug = candidates.shift() ?? `${base}-${n}`;
+    const slug = candidates.shift() ?? `${[base, ...withPaper].join('-')}-${n}`;
     if (!taken.has(slug)) return checkedSlug(slug);
   }
 }
@@ -57,12 +93,14 @@ export function planSheets(project: Project): SheetPlan {
   // Keyed by the request itself: equal requests are one sheet, different ones never share a file.
   const sheets = new Map<string, PlannedSheet>();
   const slugs = new Set<string>();
+  const firstByBase = new Map<string, SheetRequest>();
   const add = (request: SheetRequest): string => {
     const key = JSON.stringify(request);
     const known = sheets.get(key);
     if (known) return known.slug;
-    const slug = uniqueSlug(request, slugs);
+    const slug = uniqueSlug(request, firstByBase, slugs);
     slugs.add(slug);
+    if (!firstByBase.has(sheetSlug(request))) firstByBase.set(sheetSlug(request), request);
     sheets.set(key, { slug, request });
     return slug;
   };

@@ -1,3 +1,4 @@
+import { toSite } from '../../src/data/normalise/conditions.ts';
 import { describe, expect, it } from 'vitest';
 import type { Boat, Project, SheetRequest } from '../../src/data/types.ts';
 import { defaultChartConditions, defaultWallCharts, DEFAULT_SITE } from '../../src/analysis/index.ts';
@@ -51,6 +52,10 @@ describe('defaultWallCharts() conditions', () => {
     expect(c.driveLine).toEqual({ ratio: 1, efficiency: 0.97 });
     expect(c.water.densityKgM3).toBe(FRESH_WATER_KG_M3);
     expect(c.site).toEqual(DEFAULT_SITE);
+    // One set of conditions everywhere: the site a boat or book file without a site gets (30 % RH, the
+    // ISO 8665 reference humidity, from memory; sea-level ISA pressure 101.325 kPa, ISO 2533).
+    expect(c.site.ambient).toEqual({ pressureKpa: 101.325, airTempC: 25, relativeHumidityPct: 30 });
+    expect(c.site).toEqual(toSite(undefined));
   });
 
   it('draws the demo Corbrick four against the Tarnwell 212 through the 1.55 reduction its boat uses', async () => {

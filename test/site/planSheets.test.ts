@@ -40,4 +40,18 @@ describe('planSheets()', () => {
   it('names sheets only with plain lower-case file-name words', async () => {
     for (const { slug } of planSheets(await demo()).sheets) expect(slug).toMatch(/^[a-z0-9][a-z0-9._-]*$/);
   });
+
+  it('names a book sheet after what differs from the default sheet: conditions, then paper only when it differs', async () => {
+    const plan = planSheets(await demo());
+    const slugs = plan.sheets.map((s) => s.slug);
+    // data/books/shop-wall-charts.yaml: same A3 landscape paper as the default charts, its own cruise lines
+    // (60 and 100 hp are 44.7 and 74.6 kW, 1 hp = 0.7457 kW, NIST SP 811).
+    expect(plan.byBook.get('shop-wall-charts')).toEqual([
+      'wall-chart-harrowgate-v8-tarnwell-212-cruise-80-120-160kw',
+      'wall-chart-brindlecombe-td6-vennick-260-cruise-120-180-240kw',
+      'wall-chart-corbrick-four-tarnwell-212-cruise-45-75kw',
+    ]);
+    expect(slugs).toContain('spec-brine-lark-letter-portrait');
+    expect(slugs.filter((s) => s.includes('a3-landscape'))).toEqual([]);
+  });
 });
