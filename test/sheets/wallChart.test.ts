@@ -1,14 +1,15 @@
 import { describe, expect, it } from 'vitest';
 import type { EngineFamily, EngineVariant, Project, SheetRequest } from '../../src/data/types.ts';
-import type { GroupNode, Scene, SceneNode } from '../../src/scene/types.ts';
+import type { Scene, SceneNode } from '../../src/scene/types.ts';
 import { analyseWallChart, chartInstallation, defaultWallCharts, isWarning } from '../../src/analysis/index.ts';
 import { solveInstallation } from '../../src/model/index.ts';
 import { sheetScene } from '../../src/sheets/index.ts';
 import { boxesOverlap, boxInside } from '../../src/sheets/kit/boxes.ts';
 import { rpmText } from '../../src/sheets/kit/format.ts';
-import { PAPER_WHITE, WARN } from '../../src/sheets/kit/style.ts';
+import { ON_WARN, WARN } from '../../src/sheets/kit/style.ts';
+import { LADDER_WORDS, ladderRpmRange } from '../../src/sheets/wallChart/ladder.ts';
 import { family, jet, project } from './fixtures/demoProject.ts';
-import { leaves, markBox, scaleFromTicks, texts } from './sceneWalk.ts';
+import { leaves, markBox, texts } from './sceneWalk.ts';
 
 type WallChartRequest = Extract<SheetRequest, { kind: 'wallChart' }>;
 const ctx = { project, dateIso: '2026-11-02' };
@@ -27,15 +28,13 @@ const threeFamily: EngineFamily = { ...family, variants: [s210, s250, s290] };
 const fourFamily: EngineFamily = { ...family, variants: [s210, s250, s290, variant(s210, 's180', 'Harbour 3.0 S180 eco', 0.86, s210.limits)] };
 const withFamily = (f: EngineFamily): Project => ({ ...project, engines: [f], boats: project.boats.map((b) => ({ ...b, engine: f.variants[0] })) });
 
-/** The panel groups of a wall chart, in order. */
-function panels(scene: Scene): GroupNode[] {
-  return leavesAndGroups(scene.root).filter((n): n is GroupNode => n.type === 'group' && n.role === 'wall-chart-panel');
-}
-function leavesAndGroups(n: SceneNode): SceneNode[] {
-  return n.type === 'group' ? [n, ...n.children.flatMap(leavesAndGroups)] : [n];
-}
-/** The same scene restricted to one panel, so the sceneWalk helpers read that panel's ticks only. */
-const only = (scene: Scene, root: GroupNode): Scene => ({ ...scene, root });
+/** Leaves of the scene with a role and key. */
+const byRole = (scene: Scene, role: string) => leaves(scene).filter((n) => n.role === role);
+/** Centre x (mm) of a mark. */
+const midX = (n: SceneNode) => {
+  const b = markBox(n)!;
+  return b.x + b.width / 2;
+};
 
 describe.each([
   ['two variants (demo fixture)', family],
@@ -47,82 +46,54 @@ describe.each([
   const scene = sheetScene(request, { ...ctx, project: p });
   const result = analyseWallChart({ family: f, jet, conditions: request.conditions });
 
-  it('draws one panel per variant, each with one absorption series and one tolerance band per impeller', () => {
-    expect(panels(scene).map((g) => g.key)).toEqual(f.variants.map((v) => `panel:${v.variantId}`));
-    for (const g of panels(scene)) {
-      const inPanel = leaves(only(scene, g));
-      expect(inPanel.filter((n) => n.role === 'absorption-curve').map((n) => n.key)).toEqual(jet.impellers.map((i) => `impeller:${i.id}`));
-      expect(inPanel.filter((n) => n.role === 'tolerance-band').map((n) => n.key)).toEqual(jet.impellers.map((i) => `impeller:${i.id}`));
-      expect(inPanel.filter((n) => n.role === 'engine-curve')).toHaveLength(1);
+  it('draws one ladder row per impeller, lightest first, and one column per variant', () => {
+    const rows = texts(scene).filter((t) => t.role === 'ladder-impeller');
+    const lightestFirst = [...jet.impellers].sort((a, b) => a.ratingKw - b.ratingKw);
+    expect(rows.map((t) => t.key)).toEqual(lightestFirst.map((i) => `impeller:${i.id}`));
+    for (let i = 1; i < rows.length; i++) expect(rows[i].y).toBeGreaterThan(rows[i - 1].y);
+    const cells = texts(scene).filter((t) => t.role === 'ladder-rpm');
+    expect(cells).toHaveLength(jet.impellers.length * f.variants.length);
+  });
+
+  it('prints each predicted WOT rpm in bold 14 pt or more and its status word in 12 pt or more, a warning in the warning box', () => {
+    // Issue 13: read at 1.5 m on A3 (common practice, no source: 14 pt headline figures, 12 pt status words).
+    for (const q of result.pairings) {
+      const key = `impeller:${q.impellerId}|engine:${q.variantId}`;
+      const figure = texts(scene).find((t) => t.role === 'ladder-rpm' && t.key === key)!;
+      expect(figure.text).toBe(rpmText(q.band.nominal.speedRpm));
+      expect(figure.sizePt).toBeGreaterThanOrEqual(14);
+      expect(figure.weight).toBe('bold');
+      const word = texts(scene).find((t) => t.role === 'ladder-status' && t.key === key)!;
+      expect(word.text).toBe(LADDER_WORDS[q.band.nominal.status]);
+      expect(word.sizePt).toBeGreaterThanOrEqual(12);
+      const box = leaves(scene).find((n) => n.role === 'warning-box' && n.key === key);
+      expect(Boolean(box)).toBe(isWarning(q.band.nominal.status));
+      if (box && box.type === 'rect') {
+        expect(box.fill?.colour).toBe(WARN);
+        expect(word.colour).toBe(ON_WARN);
+        expect(word.weight).toBe('bold');
+      }
     }
   });
 
-  it('puts every operating point within 0.1 mm of the model on its own panel’s printed axes', () => {
-    panels(scene).forEach((g, i) => {
-      const v = f.variants[i];
-      const x = scaleFromTicks(only(scene, g), 'x');
-      const y = scaleFromTicks(only(scene, g), 'left');
-      const points = leaves(only(scene, g)).filter((n) => n.role === 'operating-point');
-      expect(points.map((n) => n.key)).toEqual(jet.impellers.map((imp) => `impeller:${imp.id}|engine:${v.variantId}`));
-      for (const impeller of jet.impellers) {
-        const op = solveInstallation(chartInstallation({ variant: v, jet, impeller, conditions: request.conditions }));
-        const box = markBox(points.find((n) => n.key === `impeller:${impeller.id}|engine:${v.variantId}`)!)!;
-        expect(Math.abs(box.x + box.width / 2 - x(op.speedRpm))).toBeLessThan(0.1);
-        expect(Math.abs(box.y + box.height / 2 - y(op.powerKw))).toBeLessThan(0.1);
-      }
-    });
-  });
-
-  it('draws each panel’s WOT window and rev-limit line at that variant’s own limits', () => {
-    panels(scene).forEach((g, i) => {
-      const { limits } = f.variants[i];
-      const x = scaleFromTicks(only(scene, g), 'x');
-      const inPanel = leaves(only(scene, g));
-      const band = markBox(inPanel.find((n) => n.role === 'wot-window')!)!;
-      expect(band.x).toBeCloseTo(x(limits.windowLowRpm), 6);
-      expect(band.x + band.width).toBeCloseTo(x(limits.windowHighRpm), 6);
-      const revLimits = inPanel.filter((n) => n.role === 'rev-limit');
-      expect(revLimits).toHaveLength(1);
-      expect(markBox(revLimits[0])!.x).toBeCloseTo(x(limits.maxRpm), 6);
-      expect(texts(only(scene, g)).map((t) => t.text)).toContain(`WOT window ${limits.windowLowRpm}–${limits.windowHighRpm} · max ${limits.maxRpm} rpm`);
-    });
-  });
-
-  it('gives every panel the same scales, from below the lowest WOT point past the highest maximum rpm', () => {
-    const all = panels(scene).map((g) => ({ x: scaleFromTicks(only(scene, g), 'x'), y: scaleFromTicks(only(scene, g), 'left'), frame: markBox(leaves(only(scene, g)).find((n) => n.role === 'plot-frame')!)! }));
-    const mmPerRpm = all.map((s) => s.x(1000) - s.x(0));
-    const mmPerKw = all.map((s) => s.y(0) - s.y(100));
-    for (const m of mmPerRpm) expect(m).toBeCloseTo(mmPerRpm[0], 9);
-    for (const m of mmPerKw) expect(m).toBeCloseTo(mmPerKw[0], 9);
-    const { x, y, frame } = all[0];
-    const rpmAt = (mm: number) => (mm - x(0)) / (x(1) - x(0));
-    const kwAt = (mm: number) => (mm - y(0)) / (y(1) - y(0));
-    const lowestRpm = Math.min(...result.pairings.map((q) => q.band.nominal.speedRpm));
-    const highestMax = Math.max(...f.variants.map((v) => v.limits.maxRpm));
-    expect(rpmAt(frame.x)).toBeLessThan(lowestRpm);
-    expect(rpmAt(frame.x)).toBeGreaterThan(lowestRpm * 0.9);
-    expect(rpmAt(frame.x + frame.width)).toBeGreaterThan(highestMax);
-    expect(rpmAt(frame.x + frame.width)).toBeLessThan(highestMax * 1.06);
-    const peakKw = Math.max(...result.variants.map((v) => Math.max(v.site.peakPowerKw, v.reference.peakPowerKw)));
-    const shownCruise = leaves(scene).filter((n) => n.role === 'cruise-line').map((n) => Number(n.key!.slice('cruise:'.length)));
-    const lowestKw = Math.min(...result.pairings.map((q) => q.band.nominal.powerKw), ...shownCruise);
-    expect(kwAt(frame.y)).toBeGreaterThan(peakKw);
-    expect(kwAt(frame.y)).toBeLessThan(peakKw * 1.15);
-    expect(kwAt(frame.y + frame.height)).toBeLessThan(lowestKw);
-    expect(kwAt(frame.y + frame.height)).toBeGreaterThan(lowestKw * 0.8);
-  });
-
-  it('labels each point with its rpm only and shows status by marker style', () => {
+  it('places the WOT mark, its tolerance bar, the window and the stop line of each cell on one rpm scale', () => {
+    const [lo, hi] = ladderRpmRange(result);
     for (const q of result.pairings) {
       const key = `impeller:${q.impellerId}|engine:${q.variantId}`;
-      const labelled = texts(scene).filter((t) => t.key === key);
-      expect(labelled.map((t) => t.text)).toEqual([rpmText(q.band.nominal.speedRpm)]);
-      const marker = leaves(scene).find((n) => n.role === 'operating-point' && n.key === key)!;
-      const ring = leaves(scene).filter((n) => n.role === 'warning-ring' && n.key === key);
-      const warn = isWarning(q.band.nominal.status);
-      expect(ring).toHaveLength(warn ? 1 : 0);
-      if (ring[0]?.type === 'circle') expect(ring[0].stroke?.colour).toBe(WARN);
-      expect(marker.type !== 'group' && marker.type !== 'text' && marker.fill?.colour === PAPER_WHITE).toBe(warn);
+      const v = f.variants.find((x) => x.variantId === q.variantId)!;
+      const strip = markBox(byRole(scene, 'ladder-strip').find((n) => n.key === key)!)!;
+      const x = (rpm: number) => strip.x + ((rpm - lo) / (hi - lo)) * strip.width;
+      // The model's own operating point for this pairing, solved again here.
+      const impeller = jet.impellers.find((i) => i.id === q.impellerId)!;
+      const op = solveInstallation(chartInstallation({ variant: v, jet, impeller, conditions: request.conditions }));
+      expect(Math.abs(midX(byRole(scene, 'operating-point').find((n) => n.key === key && n.type !== 'text')!) - x(op.speedRpm))).toBeLessThan(0.35);
+      const bar = markBox(byRole(scene, 'tolerance-bar').find((n) => n.key === key)!)!;
+      expect(bar.x).toBeCloseTo(x(q.band.low.speedRpm), 6);
+      expect(bar.x + bar.width).toBeCloseTo(x(q.band.high.speedRpm), 6);
+      const win = markBox(byRole(scene, 'wot-window').find((n) => n.key === key)!)!;
+      expect(win.x).toBeCloseTo(x(v.limits.windowLowRpm), 6);
+      expect(win.x + win.width).toBeCloseTo(x(v.limits.windowHighRpm), 6);
+      expect(markBox(byRole(scene, 'rev-limit').find((n) => n.key === key)!)!.x).toBeCloseTo(x(v.limits.maxRpm), 6);
     }
   });
 
@@ -138,28 +109,9 @@ describe.each([
     }
   });
 
-  it('tabulates one row per impeller with a WOT band and a status per variant, warnings bold and coloured', () => {
-    const groups = texts(scene).filter((t) => t.role === 'table-group-header').map((t) => t.text);
-    expect(groups).toHaveLength(f.variants.length);
-    const cells = texts(scene).filter((t) => t.role === 'table-cell');
-    expect(cells).toHaveLength(jet.impellers.length * (1 + 2 * f.variants.length));
-    for (const c of cells.filter((t) => /over-revs|lugs/.test(t.text))) {
-      expect(c.weight).toBe('bold');
-      expect(c.colour).toBe(WARN);
-    }
-    expect(cells.filter((t) => /over-revs|lugs/.test(t.text))).toHaveLength(result.pairings.filter((q) => q.band.nominal.status === 'revLimited' || q.band.nominal.status === 'belowWindow').length);
-  });
 });
 
 describe('wallChartScene() layout and wording', () => {
-  it('wraps a fourth variant to a second row with plots as wide as the first row’s', () => {
-    const scene = sheetScene({ ...baseRequest }, { ...ctx, project: withFamily(fourFamily) });
-    const frames = panels(scene).map((g) => markBox(leaves(only(scene, g)).find((n) => n.role === 'plot-frame')!)!);
-    expect(frames[3].y).toBeGreaterThan(frames[0].y + frames[0].height);
-    expect(frames[3].x).toBeCloseTo(frames[0].x, 9);
-    for (const fr of frames) expect(fr.width).toBeCloseTo(frames[0].width, 9);
-  });
-
   it('states the conditions it was drawn for, and which pairing boats have that drive line', () => {
     const scene = sheetScene(baseRequest, ctx);
     const all = texts(scene).map((t) => t.text).join(' ');
@@ -168,11 +120,13 @@ describe('wallChartScene() layout and wording', () => {
     expect(texts(scene).find((t) => t.role === 'sheet-subtitle')!.text).toContain('direct drive, 97 % drive line, fresh water 999 kg/m³');
   });
 
-  it('names each impeller once per panel', () => {
+  it('draws a power panel in one unit with a conversion note, every impeller curve named once', () => {
     const scene = sheetScene(baseRequest, ctx);
-    for (const g of panels(scene)) {
-      const names = texts(only(scene, g)).filter((t) => t.key?.startsWith('impeller-label:')).map((t) => t.text).sort();
-      expect(names).toEqual(jet.impellers.map((i) => i.label).sort());
-    }
+    const panel = leaves(scene).filter((n) => n.role === 'absorption-curve');
+    expect(panel.map((n) => n.key)).toEqual(jet.impellers.map((i) => `impeller:${i.id}`));
+    const names = texts(scene).filter((t) => t.key?.startsWith('impeller-label:')).map((t) => t.text).sort();
+    expect(names).toEqual(jet.impellers.map((i) => i.label).sort());
+    expect(texts(scene).find((t) => t.role === 'unit-note')!.text).toBe('Power in kW · 1 kW = 1.341 hp');
+    expect(texts(scene).filter((t) => t.role === 'tick-label-right')).toHaveLength(0);
   });
 });

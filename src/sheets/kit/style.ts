@@ -1,12 +1,19 @@
 /**
  * Style tokens shared by every sheet: ink, series colours, dash patterns, marker shapes, type sizes
  * and stroke widths. Series are told apart three ways (colour, dash, marker) plus a direct label, so a
- * greyscale photocopy still reads.
+ * greyscale photocopy still reads. Tokens are named for what they encode.
  *
- * Series colours: the Okabe–Ito palette (M. Okabe and K. Ito, "Color Universal Design (CUD): How to make
- * figures and presentations that are friendly to colorblind people", J*Fly, 2002/2008), chosen to stay
- * distinguishable for the common colour-vision deficiencies. Its yellow (#F0E442) is left out: on white
- * paper it vanishes in a photocopy.
+ * Reserved: the warning colour (WARN) and the warning mark (a box filled with WARN holding white bold
+ * words, see kit/warningMarks.ts) mean "lugs or over-revs" and nothing else; no series takes that colour
+ * or a hue near it. Limit lines (maximum rpm) are solid ink with a hatch on the forbidden side, a
+ * pattern no series uses. The WOT window is the only band filled in WINDOW_FILL, with solid edges.
+ *
+ * Series colours: six, alternating dark and light in grey (neighbours differ by at least 12 in CIE L*)
+ * and apart under a deuteranopia simulation; every one darker in grey than the grid. The separations are
+ * computed in test/sheets/colourVision.test.ts. Several are taken from the Okabe–Ito set (M. Okabe and
+ * K. Ito, "Color Universal Design (CUD): How to make figures and presentations that are friendly to
+ * colorblind people", J*Fly, 2002/2008); its orange, vermillion and yellow are left out (the first two
+ * sit next to the warning colour, yellow vanishes in a photocopy).
  */
 import type { Colour, Stroke } from '../../scene/types.ts';
 import type { Paper, PaperSize } from '../../data/types.ts';
@@ -16,23 +23,29 @@ import { MM_PER_PT } from '../../scene/text.ts';
 export const INK: Colour = '#000000';
 /** Secondary text (axis titles, notes): still dark enough to photocopy (about 75 % black). */
 export const INK_SOFT: Colour = '#333333';
-/** Grid lines. */
-export const GRID: Colour = '#9a9a9a';
-/** Warnings (over-rev, lugging): Okabe–Ito vermillion, always paired with words. */
-export const WARN: Colour = '#D55E00';
+/** Grid lines: lighter in grey than every series colour, so no curve reads weaker than the grid. */
+export const GRID: Colour = '#c6c6c6';
+/**
+ * Warnings (lugs, over-revs, cautions) only: a deep red-orange with 5.5:1 contrast against white, so bold
+ * warning words keep 4.5:1 as text and white words on it keep 4.5:1 in the reversed warning box.
+ */
+export const WARN: Colour = '#B8420A';
+/** Words set on the warning colour. */
+export const ON_WARN: Colour = '#ffffff';
 export const PAPER_WHITE: Colour = '#ffffff';
-/** Recommended-window band fill. */
+/** Recommended WOT window band fill (drawn at WINDOW_OPACITY) and its solid edges. */
 export const WINDOW_FILL: Colour = '#009E73';
+export const WINDOW_OPACITY = 0.3;
+export const WINDOW_EDGE: Colour = '#00664A';
 
-/** Okabe–Ito series colours in the order series take them (yellow omitted, see above). */
+/** Series colours in the order series take them (see the header for how they were chosen). */
 export const SERIES_COLOURS: readonly Colour[] = [
   '#0072B2', // blue
-  '#D55E00', // vermillion
-  '#009E73', // bluish green
   '#CC79A7', // reddish purple
-  '#E69F00', // orange
-  '#56B4E9', // sky blue
   '#000000', // black
+  '#4AA3DA', // sky blue (darkened so it stays darker than the grid in grey)
+  '#5E3C99', // violet
+  '#8C8C8C', // neutral grey
 ];
 
 /** Dash patterns (mm) in series order; the first is solid. Chosen to differ at a glance in grey. */
@@ -43,13 +56,12 @@ export const SERIES_DASHES: readonly (readonly number[])[] = [
   [5, 1.2, 1, 1.2],
   [2.2, 1.2],
   [6, 1.5, 1, 1.2, 1, 1.5],
-  [0.6, 0.9],
 ];
 
 export type MarkerShape = 'circle' | 'square' | 'triangle' | 'diamond' | 'triangleDown' | 'cross' | 'hexagon';
+/** Series markers; the square is left out, as a filled square is the warning mark at a point. */
 export const SERIES_MARKERS: readonly MarkerShape[] = [
   'circle',
-  'square',
   'triangle',
   'diamond',
   'triangleDown',
@@ -65,8 +77,8 @@ export interface SeriesStyle {
 }
 
 /**
- * Style of the i-th series (0-based). Colour and dash cycle with co-prime periods (7 and 7 shifted by
- * a turn each lap) so two series never share colour, dash and marker together.
+ * Style of the i-th series (0-based). Colour, dash and marker cycle with period 6, dash shifted one step
+ * and marker two steps each lap, so two series never share colour, dash and marker together.
  */
 export function seriesStyle(index: number): SeriesStyle {
   const lap = Math.floor(index / SERIES_COLOURS.length);

@@ -1,130 +1,110 @@
 /**
- * One panel of the wall chart: one engine variant against every impeller. Under its heading (variant
- * name, its WOT window and maximum speed) a row of impeller names over the curve ends, then the plot:
- * tolerance bands and absorption curves, the variant's own WOT window and rev-limit line, cruise lines
- * with their crossings, its full-throttle curve at site and as published, and the WOT points marked by
- * status and labelled with their rpm only (the results table has the rest).
+ * The wall chart's secondary engineering panel: power against engine speed for every variant and every
+ * impeller on one plot, the rpm range cropped to where the engines run at WOT. One power unit (the
+ * site's first) with the other in a conversion note; curves named by direct labels at their ends inside
+ * the plot; WOT points small (the ladder carries the figures), warnings as the reserved warning square;
+ * maximum rpm as the hatched limit line; constant-power cruise lines dotted.
  */
 import type { PowerUnit } from '../../data/types.ts';
-import type { LimitsResult } from '../../analysis/index.ts';
+import type { WallChartResult } from '../../analysis/index.ts';
 import type { Box, SceneNode } from '../../scene/types.ts';
-import { cruiseLayer, engineLayers, impellerLayers, pointsOnChart, revLimitLine, windowBand } from '../chart/layers.ts';
+import { cruiseLayer, engineLayers, impellerLayers, pointsOnChart } from '../chart/layers.ts';
 import type { EngineSeries, ImpellerSeries } from '../chart/seriesTypes.ts';
-import { chartArea, chartAxes, chartGrid, type AxisSides } from '../kit/axes.ts';
+import { chartArea, chartAxes, chartGrid } from '../kit/axes.ts';
 import { ascentMm, label, linePitchMm } from '../kit/block.ts';
-import { edgeLabelRow, type EdgeLabel } from '../kit/edgeLabels.ts';
-import { rpmText, powerText } from '../kit/format.ts';
+import { powerText } from '../kit/format.ts';
 import { placeLabels, type LabelRequest, type PlacedLabels } from '../kit/labels.ts';
+import { markerBox } from '../kit/markers.ts';
 import { plotScales, type PlotScales } from '../kit/scales.ts';
-import { INK_SOFT } from '../kit/style.ts';
+import { INK, INK_SOFT, PAPER_WHITE, STROKE, WARN, stroke } from '../kit/style.ts';
+import { kwToPower } from '../kit/units.ts';
+import { limitLine, warnsAbout } from '../kit/warningMarks.ts';
 import type { PanelDomains } from './domains.ts';
-import { pointMarker, pointMarkerBox } from './pointMarker.ts';
-
-export interface PanelPoint {
-  readonly key: string;
-  readonly impellerId: string;
-  readonly speedRpm: number;
-  readonly powerKw: number;
-  readonly warn: boolean;
-}
 
 export interface PanelArgs {
   readonly box: Box;
-  readonly sides: AxisSides;
   readonly sizePt: number;
   readonly headingPt: number;
-  readonly powerUnitFirst: PowerUnit;
+  readonly powerUnit: PowerUnit;
   readonly domains: PanelDomains;
+  readonly result: WallChartResult;
   readonly impellers: readonly ImpellerSeries[];
-  readonly engine: EngineSeries;
-  readonly heading: string;
-  readonly limits: LimitsResult;
-  readonly points: readonly PanelPoint[];
-  readonly cruise: readonly { readonly powerKw: number; readonly crossings: readonly { readonly impellerId: string; readonly speedRpm: number }[] }[];
-  readonly markerMm: number;
-  readonly variantId: string;
+  readonly engines: readonly EngineSeries[];
+  readonly engineLabels: readonly string[];
   readonly where: string;
 }
 
-/** Gap (mm) between the impeller names and the plot top, where their leaders run. */
-const NAME_GAP_MM = 2.2;
+const POINT_MM = 2.2;
 
-/**
- * Heading nodes: the variant's name in bold over its window and limit, always on two lines so every panel
- * of a chart keeps the same plot height (the shared scales depend on it). Returns the height taken (mm).
- */
-function panelHeading(args: PanelArgs, x: number): { nodes: SceneNode[]; heightMm: number } {
-  const { limits, where } = args;
-  const detail = `WOT window ${rpmText(limits.windowLowRpm)}–${rpmText(limits.windowHighRpm)} · max ${rpmText(limits.maxRpm)} rpm`;
-  const nameY = args.box.y + ascentMm(args.headingPt, 'bold');
-  const detailTop = args.box.y + linePitchMm(args.headingPt, 'bold');
-  return {
-    nodes: [
-      label({ x, y: nameY, text: args.heading, sizePt: args.headingPt, weight: 'bold', role: 'panel-heading', key: `panel:${args.variantId}`, where }),
-      label({ x, y: detailTop + ascentMm(args.sizePt), text: detail, sizePt: args.sizePt, colour: INK_SOFT, role: 'panel-limits', key: `panel:${args.variantId}`, where }),
-    ],
-    heightMm: linePitchMm(args.headingPt, 'bold') + linePitchMm(args.sizePt) + 1,
-  };
+/** "Power in kW · 1 kW = 1.341 hp" (NIST SP 811 horsepower, as in src/units.ts). */
+export function conversionNote(unit: PowerUnit): string {
+  const other: PowerUnit = unit === 'kW' ? 'hp' : 'kW';
+  const factor = unit === 'kW' ? kwToPower(1, 'hp') : 1 / kwToPower(1, 'hp');
+  return `Power in ${unit} · 1 ${unit} = ${factor.toFixed(3)} ${other}`;
 }
 
-/** Lays out one panel in its box (mm). */
-export function wallChartPanel(args: PanelArgs): { node: SceneNode; scales: PlotScales; notes: PlacedLabels['notes'] } {
-  const { sizePt, where } = args;
-  // The plot's horizontal extent does not depend on the strip heights, so find it first for the heading.
-  const probe = chartArea(args.box, sizePt, { sides: args.sides, topMm: 0 });
-  const heading = panelHeading(args, probe.x);
-  const nameRowMm = linePitchMm(sizePt, 'bold') + NAME_GAP_MM;
-  const area = chartArea(args.box, sizePt, { sides: args.sides, topMm: heading.heightMm + nameRowMm });
-  // The power range is kept as computed (not widened to round ticks) so it hugs the data.
-  const scales = plotScales({ area, rpmDomain: args.domains.rpm, powerKwDomain: args.domains.powerKw, powerUnitFirst: args.powerUnitFirst, nicePower: false });
-  const right = area.x + area.width;
+/** Least height (mm) worth drawing the panel in. */
+export const PANEL_MIN_HEIGHT_MM = 62;
 
-  const under: SceneNode[] = [];
-  const window = windowBand(scales, { lowRpm: args.limits.windowLowRpm, highRpm: args.limits.windowHighRpm });
-  if (window) under.push(...window.nodes);
-  under.push(chartGrid(scales));
-  const imps = impellerLayers(scales, args.impellers);
-  under.push(...imps.bands);
-  const data: SceneNode[] = [...imps.curves];
+/** Lays out the panel in its box (mm). */
+export function powerPanel(args: PanelArgs): { node: SceneNode; scales: PlotScales; notes: PlacedLabels['notes'] } {
+  const { sizePt, where, result } = args;
+  const headTop = args.box.y;
+  const heading = label({ x: args.box.x, y: headTop + ascentMm(args.headingPt, 'bold'), text: 'Power against engine speed at WOT', sizePt: args.headingPt, weight: 'bold', role: 'panel-heading', key: 'panel:power', where });
+  const note = label({ x: args.box.x, y: headTop + linePitchMm(args.headingPt, 'bold') + ascentMm(sizePt), text: conversionNote(args.powerUnit), sizePt, colour: INK_SOFT, role: 'unit-note', where });
+  const topMm = linePitchMm(args.headingPt, 'bold') + linePitchMm(sizePt) + 1.5;
+  const area = chartArea(args.box, sizePt, { sides: { left: true, right: false }, topMm });
+  const scales = plotScales({ area, rpmDomain: args.domains.rpm, powerKwDomain: args.domains.powerKw, powerUnitFirst: args.powerUnit, nicePower: false });
+  const right = area.x + area.width;
+  const bottom = area.y + area.height;
+
+  const under: SceneNode[] = [chartGrid(scales)];
+  const data: SceneNode[] = [];
   const obstacles: Box[] = [];
   const labels: LabelRequest[] = [];
-  for (const c of args.cruise) {
-    const layer = cruiseLayer(scales, c, 1);
+  for (const c of result.cruise.filter((q) => args.domains.cruisePowersKw.includes(q.powerKw))) {
+    const layer = cruiseLayer(scales, c, 0.9);
     if (!layer) continue;
     data.push(...layer.nodes);
     obstacles.push(...layer.obstacles);
-    labels.push({ key: `cruise-label:${c.powerKw}`, x: right - 0.5, y: layer.y, text: powerText(c.powerKw, args.powerUnitFirst), sizePt, prefer: [[-1, -1], [-1, 1]] });
+    labels.push({ key: `cruise-label:${c.powerKw}`, x: area.x + 0.5, y: layer.y, text: `cruise ${powerText(c.powerKw, args.powerUnit)}`, sizePt, prefer: [[1, -1], [1, 1]] });
   }
-  const engine = engineLayers(scales, args.engine);
-  if (engine.reference) data.push(engine.reference);
-  data.push(engine.site);
-  const revLimit = revLimitLine(scales, args.limits.maxRpm);
-  if (revLimit) data.push(revLimit.node);
-
-  // Impeller names: over the curve where it leaves through the top; inside the plot where it leaves right
-  // (and for all of them when the top row is too short to hold every name).
-  const atTop = imps.ends.filter((end) => end.y <= area.y + 0.01);
-  const topNames: EdgeLabel[] = atTop.map((end) => ({ key: `impeller-label:${end.id}`, anchorX: end.x, text: end.label }));
-  const names = edgeLabelRow({ labels: topNames, edgeY: area.y, fromMm: area.x, toMm: right, sizePt, gapMm: NAME_GAP_MM, role: 'impeller-name', where });
-  for (const end of imps.ends.filter((e) => !names || !atTop.includes(e))) {
-    labels.push({ key: `impeller-label:${end.id}`, x: end.x, y: end.y, text: end.label, sizePt, weight: 'bold', prefer: [[-1, 1], [-1, 0], [-1, -1]] });
+  const imps = impellerLayers(scales, args.impellers);
+  data.push(...imps.curves);
+  for (const end of imps.ends) labels.push({ key: `impeller-label:${end.id}`, x: end.x, y: end.y, text: end.label, sizePt, weight: 'bold', prefer: [[-1, 1], [-1, 0], [1, 1], [-1, -1]] });
+  args.engines.forEach((eng, i) => {
+    const layer = engineLayers(scales, eng);
+    data.push(layer.site);
+    const endRpm = Math.min(eng.site.maxRpm, args.domains.rpm[1]);
+    const y = scales.y(eng.site.powerKwUnchecked(endRpm));
+    labels.push({ key: `engine-label:${eng.id}`, x: scales.x(endRpm), y, text: args.engineLabels[i], sizePt, weight: 'bold', prefer: [[-1, -1], [-1, 1], [1, -1]] });
+  });
+  // One limit line per distinct maximum rpm, named at the top.
+  for (const maxRpm of [...new Set(result.variants.map((v) => v.limits.maxRpm))]) {
+    const x = scales.x(maxRpm);
+    if (x > right) continue;
+    data.push(...limitLine({ x, y0: area.y, y1: bottom, depthMm: Math.min(1.6, right - x), role: 'rev-limit', key: `limit:${maxRpm}` }));
+    labels.push({ key: `limit-label:${maxRpm}`, x, y: area.y + 0.5, text: `max ${maxRpm}`, sizePt, prefer: [[-1, 1]] });
   }
 
+  const points = result.pairings.map((p) => ({ key: `impeller:${p.impellerId}|engine:${p.variantId}`, impellerId: p.impellerId, speedRpm: p.band.nominal.speedRpm, powerKw: p.band.nominal.powerKw, warn: warnsAbout(p.band.nominal.status) }));
   const markers: SceneNode[] = [];
-  const pointLabels: LabelRequest[] = [];
-  for (const { point: p, imp, cx, cy } of pointsOnChart(scales, args.points, args.impellers)) {
-    markers.push(...pointMarker({ shape: imp.style.marker, cx, cy, sizeMm: args.markerMm, colour: imp.style.colour, warn: p.warn, role: 'operating-point', key: p.key }));
-    obstacles.push(pointMarkerBox({ cx, cy, sizeMm: args.markerMm, warn: p.warn }));
-    pointLabels.push({ key: p.key, x: cx, y: cy, text: rpmText(p.speedRpm), sizePt, weight: p.warn ? 'bold' : 'regular', prefer: [[-1, -1], [1, 1], [1, -1], [-1, 1]] });
+  for (const { point: p, cx, cy } of pointsOnChart(scales, points, args.impellers)) {
+    const r = POINT_MM / 2;
+    markers.push(p.warn
+      ? { type: 'rect', role: 'operating-point', key: p.key, x: cx - r, y: cy - r, width: 2 * r, height: 2 * r, fill: { colour: WARN }, stroke: stroke(INK, STROKE.rule) }
+      : { type: 'circle', role: 'operating-point', key: p.key, cx, cy, r: r * 0.9, fill: { colour: PAPER_WHITE }, stroke: stroke(INK, STROKE.rule) });
+    obstacles.push(markerBox(cx, cy, POINT_MM));
   }
   const bounds = { x: area.x + 0.4, y: area.y + 0.4, width: area.width - 0.8, height: area.height - 0.8 };
-  const placed = placeLabels([...pointLabels, ...labels], { bounds, obstacles, where });
+  const placed = placeLabels(labels, { bounds, obstacles, where });
   const node: SceneNode = {
     type: 'group',
     role: 'wall-chart-panel',
-    key: `panel:${args.variantId}`,
-    children: [...heading.nodes, ...under, ...data, ...markers, chartAxes(scales, { sizePt, where, sides: args.sides }), { type: 'group', role: 'chart-labels', children: [...(names?.nodes ?? []), ...placed.nodes] }],
+    key: 'panel:power',
+    children: [heading, note, ...under, ...data, ...markers, chartAxes(scales, { sizePt, where, sides: { left: true, right: false } }), { type: 'group', role: 'chart-labels', children: [...placed.nodes] }],
   };
-  // Labels that found no room became numbered callouts; the sheet prints their notes.
   return { node, scales, notes: placed.notes };
 }
+
+
