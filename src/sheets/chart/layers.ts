@@ -7,7 +7,8 @@ import type { Box, SceneNode } from '../../scene/types.ts';
 import { hermitePath, polylinePath, powerLawPoints, powerLawVisibleRpm } from '../kit/curves.ts';
 import { markerBox } from '../kit/markers.ts';
 import type { PlotScales } from '../kit/scales.ts';
-import { INK, INK_SOFT, PAPER_WHITE, STROKE, WARN, WINDOW_FILL, stroke } from '../kit/style.ts';
+import { INK, INK_SOFT, PAPER_WHITE, STROKE, WINDOW_EDGE, WINDOW_FILL, WINDOW_OPACITY, stroke } from '../kit/style.ts';
+import { limitLine } from '../kit/warningMarks.ts';
 import { bandArea } from './bandArea.ts';
 import type { EngineSeries, ImpellerSeries } from './seriesTypes.ts';
 
@@ -17,15 +18,15 @@ export const line = (x0: number, y0: number, x1: number, y1: number) => [
   { op: 'L' as const, x: x1, y: y1 },
 ];
 
-/** The recommended WOT window as a tinted band with dashed edges, or nothing when it is off the chart. */
+/** The recommended WOT window as the one green band, with solid edges, or nothing when it is off the chart. */
 export function windowBand(scales: PlotScales, window: { readonly lowRpm: number; readonly highRpm: number }): { nodes: SceneNode[]; x0: number; x1: number } | null {
   const { area } = scales;
   const x0 = scales.x(Math.max(window.lowRpm, scales.x.domain()[0]));
   const x1 = scales.x(Math.min(window.highRpm, scales.x.domain()[1]));
   if (!(x1 > x0)) return null;
   const bottom = area.y + area.height;
-  const nodes: SceneNode[] = [{ type: 'rect', role: 'wot-window', x: x0, y: area.y, width: x1 - x0, height: area.height, fill: { colour: WINDOW_FILL, opacity: 0.14 } }];
-  for (const x of [x0, x1]) nodes.push({ type: 'path', role: 'wot-window-edge', segments: line(x, area.y, x, bottom), stroke: stroke(WINDOW_FILL, STROKE.rule, [2, 1]) });
+  const nodes: SceneNode[] = [{ type: 'rect', role: 'wot-window', x: x0, y: area.y, width: x1 - x0, height: area.height, fill: { colour: WINDOW_FILL, opacity: WINDOW_OPACITY } }];
+  for (const x of [x0, x1]) nodes.push({ type: 'path', role: 'wot-window-edge', segments: line(x, area.y, x, bottom), stroke: stroke(WINDOW_EDGE, STROKE.rule) });
   return { nodes, x0, x1 };
 }
 
@@ -59,12 +60,13 @@ export function engineLayers(scales: PlotScales, eng: EngineSeries): { reference
   return { reference, site, siteSegments: segments.length };
 }
 
-/** The maximum engine speed as a heavy dashed warning line, or null when it is right of the chart. */
+/** The maximum engine speed as the hatched limit line (solid ink, hatch past it), or null when it is right of the chart. */
 export function revLimitLine(scales: PlotScales, maxRpm: number): { node: SceneNode; x: number } | null {
   const { area } = scales;
   const x = scales.x(maxRpm);
-  if (x > area.x + area.width) return null;
-  return { node: { type: 'path', role: 'rev-limit', segments: line(x, area.y, x, area.y + area.height), stroke: stroke(WARN, STROKE.engine, [4, 1.5]) }, x };
+  const right = area.x + area.width;
+  if (x > right) return null;
+  return { node: { type: 'group', role: 'rev-limit-line', children: limitLine({ x, y0: area.y, y1: area.y + area.height, depthMm: Math.min(1.6, right - x), widthMm: STROKE.series, role: 'rev-limit' }) }, x };
 }
 
 /** A constant-power cruise line across the plot with an open circle where each impeller needs that power. */

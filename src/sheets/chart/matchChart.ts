@@ -105,7 +105,7 @@ export function matchChart(args: MatchChartArgs): MatchChart {
 
   const pointLabels: LabelRequest[] = [];
   for (const { point: p, imp, cx, cy } of pointsOnChart(scales, args.points, args.impellers)) {
-    data.push(marker({ shape: imp.style.marker, cx, cy, sizeMm: args.markerMm, colour: p.warn ? WARN : INK, fill: p.filled ? imp.style.colour : PAPER_WHITE, role: 'operating-point', key: p.key }));
+    data.push(marker({ shape: imp.style.marker, cx, cy, sizeMm: args.markerMm, colour: INK, fill: p.warn ? WARN : p.filled ? imp.style.colour : PAPER_WHITE, role: 'operating-point', key: p.key }));
     obstacles.push(markerBox(cx, cy, args.markerMm));
     // Points that pile up (every impeller at the rev limit) and say the same thing share one label.
     if (pointLabels.some((l) => l.text === p.text && Math.hypot(l.x - cx, l.y - cy) < args.markerMm)) continue;

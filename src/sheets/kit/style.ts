@@ -35,7 +35,7 @@ export const ON_WARN: Colour = '#ffffff';
 export const PAPER_WHITE: Colour = '#ffffff';
 /** Recommended WOT window band fill (drawn at WINDOW_OPACITY) and its solid edges. */
 export const WINDOW_FILL: Colour = '#009E73';
-export const WINDOW_OPACITY = 0.3;
+export const WINDOW_OPACITY = 0.4;
 export const WINDOW_EDGE: Colour = '#00664A';
 
 /** Series colours in the order series take them (see the header for how they were chosen). */
