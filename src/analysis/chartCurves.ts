@@ -1,25 +1,24 @@
 /**
- * The curves a chart draws, computed here so that sheets never call the model themselves: every number
- * a sheet shows, a point or a whole curve, comes to it through the analysis layer.
+ * The curves a chart draws, handed to the sheets here so that sheets never call the model themselves:
+ * every number a sheet shows, a point or a whole curve, comes to it through the analysis layer.
  * - an impeller's absorption law on the engine shaft, P = c·nᵏ (kW, engine rpm);
  * - an engine's full-throttle curve at given conditions (exact cubic Hermite pieces);
  * - a piece of such a curve cut to a speed range, still exact (for drawing part of a curve).
  */
 import {
-  engineCurve,
   hermiteSlope,
   hermiteValue,
   makeAbsorber,
-  type Ambient,
   type DriveLineSpec,
   type EngineCurve,
-  type EngineSpec,
   type HermitePiece,
   type ImpellerFamilySpec,
   type ImpellerSpec,
 } from '../model/index.ts';
 
 export type { EngineCurve, HermitePiece };
+/** An engine's full-throttle curve at the site's air (or as published without one), times an extra power factor. */
+export { engineCurve as engineCurveAt } from '../model/index.ts';
 
 /** P = coefficient · rpm^exponent, kW at engine rpm: one impeller's absorption referred to the engine. */
 export interface AbsorptionLaw {
@@ -36,11 +35,6 @@ export function absorptionLaw(args: {
 }): AbsorptionLaw {
   const a = makeAbsorber(args);
   return { coefficient: a.coefficient, exponent: a.exponent };
-}
-
-/** An engine's full-throttle curve at the site's air (or as published without one), times an extra power factor. */
-export function engineCurveAt(engine: EngineSpec, opts: { ambient?: Ambient; powerFactor?: number } = {}): EngineCurve {
-  return engineCurve(engine, opts);
 }
 
 /** The same cubic restricted to [a, b] ⊂ [x0, x1], still in Hermite form (exact, no sampling). */

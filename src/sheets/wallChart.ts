@@ -65,11 +65,15 @@ export function wallChartScene(request: WallChartRequest, ctx: SheetContext): Sc
   const driveLineBoats = paired.filter((b) => b.driveLine.ratio === conditions.driveLine.ratio && b.driveLine.efficiency === conditions.driveLine.efficiency);
   const impLabel = (id: string) => jet.impellers.find((i) => i.id === id)?.label ?? id;
 
+  // The ladder depends on its width only, so each side width's plan is made once, not once per fine-print size.
+  const plans = sideWidths.map((sideW) => {
+    const args = { x: box.x, y: box.y, widthMm: box.width - sideW - GAP_MM, result, headings, smallPt: type.small, where };
+    const plan: LadderPlan | undefined = [planLadder(args, 'tall'), planLadder(args, 'compact')].find((p) => p.fitsWidth && p.minHeightMm <= box.height + 1e-6);
+    return { sideW, ladderW: args.widthMm, plan };
+  });
+
   for (const sizePt of FINE_PRINT_PT) {
-    for (const sideW of sideWidths) {
-      const ladderW = box.width - sideW - GAP_MM;
-      const args = { x: box.x, y: box.y, widthMm: ladderW, result, headings, smallPt: type.small, where };
-      const plan: LadderPlan | undefined = [planLadder(args, 'tall'), planLadder(args, 'compact')].find((p) => p.fitsWidth && p.minHeightMm <= box.height + 1e-6);
+    for (const { sideW, ladderW, plan } of plans) {
       if (!plan) continue;
       const room = box.height - plan.heightMm - GAP_MM;
       const content: SceneNode[] = [];

@@ -5,17 +5,12 @@
  */
 import type { MatchStatus } from '../../analysis/index.ts';
 import type { Box, FontWeight, PathSegment, SceneNode } from '../../scene/types.ts';
-import { fontExtentMm } from '../../scene/text.ts';
+import { fontExtentMm, measureTextMm } from '../../scene/text.ts';
 import { label } from './block.ts';
 import { INK, INK_SOFT, ON_WARN, PAPER_WHITE, STROKE, WARN, stroke } from './style.ts';
 
 /** Padding (mm) around the words in a warning box. */
 export const WARNING_BOX_PAD_MM = 0.9;
-
-/** True for the statuses drawn with the warning mark (the engine lugs, over-revs or has no point). */
-export function warnsAbout(status: MatchStatus): boolean {
-  return status === 'belowWindow' || status === 'revLimited' || status === 'noCrossing';
-}
 
 /**
  * Words at (x, top) mm, left-aligned: plain ink for a usable status, or white bold in a warning box.
@@ -31,6 +26,11 @@ export function statusWords(args: { x: number; top: number; text: string; sizePt
   if (!args.warn) return { nodes: [text], widthMm, heightMm };
   const box: SceneNode = { type: 'rect', role: 'warning-box', ...(args.key ? { key: args.key } : {}), x: args.x, y: args.top, width: widthMm, height: heightMm, fill: { colour: WARN } };
   return { nodes: [box, text], widthMm, heightMm };
+}
+
+/** Width (mm) statusWords() takes for a text at a size, box included. */
+export function statusWordsWidthMm(text: string, sizePt: number, warn: boolean): number {
+  return measureTextMm({ text, sizePt, weight: warn ? 'bold' : 'regular' }) + (warn ? 2 * WARNING_BOX_PAD_MM : 0);
 }
 
 /** Height (mm) statusWords() takes at a size. */

@@ -8,13 +8,13 @@
  * Two cell forms: `tall` (figures and words on a line above the scale, tick labels under each column
  * heading) and `compact` (scale, figure and words on one line, for long impeller lists).
  */
-import type { MatchStatus, WallChartResult } from '../../analysis/index.ts';
+import { isWarning, type MatchStatus, type WallChartResult } from '../../analysis/index.ts';
 import type { Box, FontWeight, SceneNode } from '../../scene/types.ts';
 import { fitText, fontExtentMm, measureTextMm } from '../../scene/text.ts';
 import { ascentMm, label, linePitchMm, paragraph } from '../kit/block.ts';
 import { rpmText } from '../kit/format.ts';
 import { GRID, INK, INK_SOFT, STROKE, WINDOW_EDGE, WINDOW_FILL, WINDOW_OPACITY, stroke } from '../kit/style.ts';
-import { limitLine, statusShape, statusShapeBox, statusWords, statusWordsHeightMm, warnsAbout } from '../kit/warningMarks.ts';
+import { limitLine, statusShape, statusShapeBox, statusWords, statusWordsHeightMm, statusWordsWidthMm } from '../kit/warningMarks.ts';
 
 /** The ladder's status words: short, our own, read at a glance (the results table on the site has the long form). */
 export const LADDER_WORDS: Readonly<Record<MatchStatus, string>> = Object.freeze({
@@ -110,7 +110,7 @@ export function planLadder(args: LadderArgs, form: LadderForm): LadderPlan {
   // What a cell's words take: the figure slot ("8888") and the widest status present.
   const statuses = [...new Set(result.pairings.map((p) => p.band.nominal.status))];
   const figureW = bold('8888', figurePt);
-  const wordW = Math.max(...statuses.map((s) => measureTextMm({ text: LADDER_WORDS[s], sizePt: wordPt, weight: warnsAbout(s) ? 'bold' : 'regular' }) + (warnsAbout(s) ? 1.8 : 0)));
+  const wordW = Math.max(...statuses.map((s) => statusWordsWidthMm(LADDER_WORDS[s], wordPt, isWarning(s))));
   const gap = 1.6;
   const textW = figureW + gap + wordW;
   const stripLen = form === 'tall' ? colW - 2 * PAD_MM : colW - 2 * PAD_MM - gap - textW;
@@ -171,7 +171,7 @@ export function planLadder(args: LadderArgs, form: LadderForm): LadderPlan {
         if (!p) return;
         const key = `impeller:${imp.impellerId}|engine:${v.variantId}`;
         const status = p.band.nominal.status;
-        const warn = warnsAbout(status);
+        const warn = isWarning(status);
         const stripTop = form === 'tall' ? textTop + figureBox + 1.0 : rowTop + (pitch - STRIP_MM.compact) / 2;
         const stripH = STRIP_MM[form];
         const s0 = colX(c) + PAD_MM;

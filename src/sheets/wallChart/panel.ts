@@ -6,7 +6,7 @@
  * maximum rpm as the hatched limit line; constant-power cruise lines dotted.
  */
 import type { PowerUnit } from '../../data/types.ts';
-import type { WallChartResult } from '../../analysis/index.ts';
+import { isWarning, type WallChartResult } from '../../analysis/index.ts';
 import type { Box, SceneNode } from '../../scene/types.ts';
 import { cruiseLayer, engineLayers, impellerLayers, pointsOnChart } from '../chart/layers.ts';
 import type { EngineSeries, ImpellerSeries } from '../chart/seriesTypes.ts';
@@ -18,7 +18,7 @@ import { markerBox } from '../kit/markers.ts';
 import { plotScales, type PlotScales } from '../kit/scales.ts';
 import { INK, INK_SOFT, PAPER_WHITE, STROKE, WARN, stroke } from '../kit/style.ts';
 import { kwToPower } from '../kit/units.ts';
-import { limitLine, warnsAbout } from '../kit/warningMarks.ts';
+import { limitLine } from '../kit/warningMarks.ts';
 import type { PanelDomains } from './domains.ts';
 
 export interface PanelArgs {
@@ -87,7 +87,7 @@ export function powerPanel(args: PanelArgs): { node: SceneNode; scales: PlotScal
     labels.push({ key: `limit-label:${maxRpm}`, x, y: area.y + 0.5, text: `max ${maxRpm}`, sizePt, prefer: [[-1, 1]] });
   }
 
-  const points = result.pairings.map((p) => ({ key: `impeller:${p.impellerId}|engine:${p.variantId}`, impellerId: p.impellerId, speedRpm: p.band.nominal.speedRpm, powerKw: p.band.nominal.powerKw, warn: warnsAbout(p.band.nominal.status) }));
+  const points = result.pairings.map((p) => ({ key: `impeller:${p.impellerId}|engine:${p.variantId}`, impellerId: p.impellerId, speedRpm: p.band.nominal.speedRpm, powerKw: p.band.nominal.powerKw, warn: isWarning(p.band.nominal.status) }));
   const markers: SceneNode[] = [];
   for (const { point: p, cx, cy } of pointsOnChart(scales, points, args.impellers)) {
     const r = POINT_MM / 2;

@@ -6,12 +6,12 @@
 import type { Boat, SiteConfig } from '../../data/types.ts';
 import type { WallChartResult } from '../../analysis/index.ts';
 import type { Box, SceneNode } from '../../scene/types.ts';
-import type { MatchStatus } from '../../analysis/index.ts';
+import { isWarning, type MatchStatus } from '../../analysis/index.ts';
 import { measureTextMm } from '../../scene/text.ts';
 import { linePitchMm, paragraph } from '../kit/block.ts';
 import { cautionsBlock } from '../kit/cautions.ts';
 import { INK, INK_SOFT, PAPER_WHITE, STROKE, WARN, WINDOW_EDGE, WINDOW_FILL, WINDOW_OPACITY, stroke } from '../kit/style.ts';
-import { limitLine, statusShape, statusWords, statusWordsHeightMm, warnsAbout } from '../kit/warningMarks.ts';
+import { limitLine, statusShape, statusWords, statusWordsHeightMm } from '../kit/warningMarks.ts';
 import { LADDER_WORDS } from './ladder.ts';
 
 /** Width (mm) of the key's samples; the words start after them. */
@@ -61,7 +61,7 @@ function ladderKey(args: { x: number; y: number; widthMm: number; sizePt: number
   let cursor = args.y;
   const wordPt = 12;
   // Samples as wide as the widest status word in its box, so the words beside them line up.
-  const sampleMm = Math.max(SAMPLE_MM, 5 + Math.max(...args.statuses.map((s) => measureTextMm({ text: LADDER_WORDS[s], sizePt: wordPt, weight: warnsAbout(s) ? 'bold' : 'regular' }) + 2)));
+  const sampleMm = Math.max(SAMPLE_MM, 5 + Math.max(...args.statuses.map((s) => measureTextMm({ text: LADDER_WORDS[s], sizePt: wordPt, weight: isWarning(s) ? 'bold' : 'regular' }) + 2)));
   const add = (text: string, sample: (x0: number, mid: number) => SceneNode[], minHeightMm = 4.6) => {
     const row = keyRow({ x, y: cursor, widthMm, sizePt, text, sample, minHeightMm, sampleMm, where });
     nodes.push(...row.nodes);
@@ -79,7 +79,7 @@ function ladderKey(args: { x: number; y: number; widthMm: number; sizePt: number
     statusShape({ status: 'matched', cx: x0 + sampleMm / 2, cy: mid, sizeMm: 3.4, role: 'legend-marker' }),
   ]);
   for (const status of args.statuses) {
-    const warn = warnsAbout(status);
+    const warn = isWarning(status);
     const wordsH = statusWordsHeightMm(wordPt, warn);
     add(STATUS_MEANING[status], (x0, mid) => [
       statusShape({ status, cx: x0 + 2, cy: mid, sizeMm: 3.4, role: 'legend-marker' }),
