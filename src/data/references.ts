@@ -12,16 +12,26 @@ export type Registry<T> = ReadonlyMap<string, T | null>;
 
 export type Lookup<T> = { status: 'found'; value: T } | { status: 'broken' } | { status: 'unknown'; error: DataError };
 
-/** Resolve id in registry; the error names the known ids and the closest match. */
-export function resolve<T>(args: { source: YamlSource; path: PathSegment[]; id: string; registry: Registry<T>; what: string; where: string }): Lookup<T> {
+/**
+ * The folder `dir` (engines, jets, boats) beside the one holding `file`, as the user named the data
+ * folder: "../shop/boats/a.yaml" and "jets" give "../shop/jets/".
+ */
+export function folderBeside(file: string, dir: string): string {
+  const parts = file.replace(/\\/g, '/').split('/').slice(0, -2);
+  return [...parts, dir, ''].join('/');
+}
+
+/** Resolve id in registry; the error names the known ids, the closest match and the folder they live in. */
+export function resolve<T>(args: { source: YamlSource; path: PathSegment[]; id: string; registry: Registry<T>; what: string; dir: string }): Lookup<T> {
+  const where = folderBeside(args.source.file, args.dir);
   const { id, registry } = args;
   if (registry.has(id)) {
     const value = registry.get(id);
     return value === null || value === undefined ? { status: 'broken' } : { status: 'found', value };
   }
   const known = [...registry.keys()].sort();
-  const fix = known.length === 0 ? `there are no ${args.where} yet` : `${didYouMean(id, known)}known: ${known.join(', ')}`;
-  return { status: 'unknown', error: at(args.source, args.path, { expected: `must name one of the ${args.what} in ${args.where}`, fix }) };
+  const fix = known.length === 0 ? `there are no ${args.what} in ${where} yet` : `${didYouMean(id, known)}known: ${known.join(', ')}`;
+  return { status: 'unknown', error: at(args.source, args.path, { expected: `must name one of the ${args.what} in ${where}`, fix }) };
 }
 
 /** Resolve an id among a definition's members (a family's variants, a jet's impellers). */

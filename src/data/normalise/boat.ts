@@ -18,7 +18,7 @@ export function normaliseBoat(source: YamlSource, raw: RawBoatFile, reg: BoatReg
   const errors: DataError[] = [];
   const warnings: DataError[] = [];
   const engine = resolveEngine({ source, raw, reg, errors });
-  const jetLookup = resolve({ source, path: ['jet'], id: raw.jet, registry: reg.jets, what: 'jet units', where: 'data/jets/' });
+  const jetLookup = resolve({ source, path: ['jet'], id: raw.jet, registry: reg.jets, what: 'jet units', dir: 'jets' });
   if (jetLookup.status === 'unknown') errors.push(jetLookup.error);
   const jet = jetLookup.status === 'found' ? jetLookup.value : undefined;
   if (jet) {
@@ -64,7 +64,7 @@ export function normaliseBoat(source: YamlSource, raw: RawBoatFile, reg: BoatReg
 
 function resolveEngine(args: { source: YamlSource; raw: RawBoatFile; reg: BoatRegistries; errors: DataError[] }): EngineVariant | undefined {
   const { source, raw, errors } = args;
-  const fam = resolve({ source, path: ['engine'], id: raw.engine, registry: args.reg.engines, what: 'engine families', where: 'data/engines/' });
+  const fam = resolve({ source, path: ['engine'], id: raw.engine, registry: args.reg.engines, what: 'engine families', dir: 'engines' });
   if (fam.status === 'unknown') errors.push(fam.error);
   if (fam.status !== 'found') return undefined;
   const variants = fam.value.variants;

@@ -16,16 +16,16 @@ export interface BookRegistries {
 /** Normalise a validated book file against the loaded engines, jets and boats. */
 export function normaliseBook(source: YamlSource, raw: RawBookFile, reg: BookRegistries): Normalised<Book> {
   const errors: DataError[] = [];
-  const check = <T>(args: { path: (string | number)[]; id: string; registry: Registry<T>; what: string; where: string }): void => {
+  const check = <T>(args: { path: (string | number)[]; id: string; registry: Registry<T>; what: string; dir: string }): void => {
     const r = resolve({ source, ...args });
     if (r.status === 'unknown') errors.push(r.error);
   };
   raw.sheets.forEach((s, i) => {
     if (s.kind === 'wallChart') {
-      check({ path: ['sheets', i, 'engine'], id: s.engine, registry: reg.engines, what: 'engine families', where: 'data/engines/' });
-      check({ path: ['sheets', i, 'jet'], id: s.jet, registry: reg.jets, what: 'jet units', where: 'data/jets/' });
+      check({ path: ['sheets', i, 'engine'], id: s.engine, registry: reg.engines, what: 'engine families', dir: 'engines' });
+      check({ path: ['sheets', i, 'jet'], id: s.jet, registry: reg.jets, what: 'jet units', dir: 'jets' });
     } else {
-      check({ path: ['sheets', i, 'boat'], id: s.boat, registry: reg.boats, what: 'boats', where: 'data/boats/' });
+      check({ path: ['sheets', i, 'boat'], id: s.boat, registry: reg.boats, what: 'boats', dir: 'boats' });
     }
   });
   if (errors.length > 0) return { ok: false, errors, warnings: [] };
