@@ -20,6 +20,9 @@ export interface EleventyConfigApi {
   addWatchTarget(path: string): void;
   setQuietMode(quiet: boolean): void;
   setServerOptions(opts: Record<string, unknown>): void;
+  setUseGitIgnore(use: boolean): void;
+  /** Glob patterns Eleventy skips when it looks for templates. */
+  readonly ignores: Set<string>;
 }
 
 export interface EleventySetupOptions {
@@ -34,6 +37,11 @@ export function configureEleventy(config: EleventyConfigApi, opts: EleventySetup
   // .11ty.ts files are JavaScript templates; tsx (registered by the CLI) compiles them on import.
   config.addExtension(['11ty.ts'], { key: '11ty.js' });
   config.setTemplateFormats(['11ty.ts']);
+  // Installed from npm, the templates live under node_modules/matchbook/, which Eleventy skips by
+  // default (and a shop folder's .gitignore usually lists node_modules/ too). The templates folder
+  // holds only our own files, so neither rule is needed to find them.
+  config.ignores.delete('**/node_modules/**');
+  config.setUseGitIgnore(false);
   config.addPassthroughCopy({ [`${TEMPLATES_DIR}assets`]: 'assets' });
   config.addGlobalData('site', opts.site);
   for (const path of opts.watch ?? []) config.addWatchTarget(path);
