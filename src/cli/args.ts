@@ -3,7 +3,7 @@
  * option is a usage error (exit 2) that says what was found and what is accepted.
  */
 
-export type CommandName = 'build' | 'check' | 'serve';
+export type CommandName = 'build' | 'check' | 'serve' | 'start';
 
 export interface ParsedArgs {
   readonly command: CommandName | 'help';
@@ -16,13 +16,14 @@ export interface ParsedArgs {
 
 export class UsageError extends Error {}
 
-const COMMANDS: readonly CommandName[] = ['build', 'check', 'serve'];
+const COMMANDS: readonly CommandName[] = ['build', 'check', 'serve', 'start'];
 
 /** Options each command accepts (value-taking options only; --help is always accepted). */
 const OPTIONS: Readonly<Record<CommandName, readonly string[]>> = {
   build: ['--data', '--out'],
   check: ['--data'],
   serve: ['--data', '--out', '--port'],
+  start: ['--data'],
 };
 
 function isCommand(word: string | undefined): word is CommandName {

@@ -9,6 +9,7 @@ Commands:
   build   check the data and write the site and chart books
   check   check the data only and list every problem found
   serve   build, serve the site locally and rebuild when a file changes
+  start   write a starter data folder of example files to replace with your own
 
 Run "matchbook <command> --help" for a command's options.
 Exit status: 0 done, 1 the data has problems, 2 the command was misused, 3 matchbook failed (a bug).
@@ -32,6 +33,13 @@ with its file, line, column and field. Exit status 1 when there is a problem.
 Builds the site into the output folder (default: out), serves it on http://localhost:N/
 (default 8080) and rebuilds and reloads the page when a definition or template changes.
 Stop with Ctrl+C.
+`,
+  start: `Usage: matchbook start [--data DIR]
+
+Writes a starter data folder into DIR (default: data): site.yaml and one example engine, jet unit
+with its impellers, boat and chart book, each commented and marked as example data, each naming its
+JSON Schema on its first line for your editor. "matchbook build" then works at once; replace the
+examples with your own definitions. DIR must be new or empty: start never overwrites a file.
 `,
 };
 

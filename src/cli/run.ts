@@ -29,6 +29,8 @@ export async function runCli(argv: readonly string[], io: CliIo): Promise<number
         return await (await import('./check.ts')).runCheck(args, io);
       case 'serve':
         return await (await import('./serve.ts')).runServe(args, io);
+      case 'start':
+        return await (await import('./start.ts')).runStart(args, io);
     }
   } catch (error) {
     return reportFailure(error, io);

@@ -7,6 +7,8 @@ describe('parseArgs()', () => {
     expect(parseArgs(['build'])).toMatchObject({ command: 'build', dataDir: 'data', outDir: 'out' });
     expect(parseArgs(['build', '--data', 'd', '--out=o'])).toMatchObject({ command: 'build', dataDir: 'd', outDir: 'o' });
     expect(parseArgs(['serve', '--port', '9000'])).toMatchObject({ command: 'serve', port: 9000 });
+    expect(parseArgs(['start'])).toMatchObject({ command: 'start', dataDir: 'data' });
+    expect(parseArgs(['start', '--data=shop'])).toMatchObject({ command: 'start', dataDir: 'shop' });
   });
 
   it('turns --help anywhere into help for that command', () => {
@@ -19,6 +21,7 @@ describe('parseArgs()', () => {
   it('rejects unknown commands and options, options a command does not take, and missing values', () => {
     expect(() => parseArgs(['bulid'])).toThrow(/unknown command "bulid"; expected one of build, check, serve/);
     expect(() => parseArgs(['check', '--out', 'x'])).toThrow(/"check" does not take "--out"/);
+    expect(() => parseArgs(['start', '--out', 'x'])).toThrow(/"start" does not take "--out"; it accepts --data, --help/);
     expect(() => parseArgs(['build', '--data'])).toThrow(/--data needs a value/);
     expect(() => parseArgs(['build', '--data', '--out', 'x'])).toThrow(/--data needs a value/);
     expect(() => parseArgs(['serve', '--port', '70000'])).toThrow(UsageError);
@@ -28,7 +31,7 @@ describe('parseArgs()', () => {
 describe('helpText()', () => {
   it('names every command and the exit statuses in the general help', () => {
     const text = helpText();
-    for (const word of ['build', 'check', 'serve', 'Exit status: 0 done, 1 the data has problems, 2 the command was misused']) {
+    for (const word of ['build', 'check', 'serve', 'start', 'Exit status: 0 done, 1 the data has problems, 2 the command was misused']) {
       expect(text).toContain(word);
     }
   });
@@ -37,5 +40,6 @@ describe('helpText()', () => {
     expect(helpText('build')).toMatch(/^Usage: matchbook build \[--data DIR\] \[--out DIR\]/);
     expect(helpText('check')).toMatch(/^Usage: matchbook check \[--data DIR\]\n/);
     expect(helpText('serve')).toContain('--port N');
+    expect(helpText('start')).toMatch(/^Usage: matchbook start \[--data DIR\]\n/);
   });
 });
