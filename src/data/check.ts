@@ -1,5 +1,6 @@
 /** `matchbook check`: load the data and print every error, or a one-line summary of what loaded. */
 import { loadProject } from './load.ts';
+import { printedError } from './errors.ts';
 import type { DataError, Project } from './types.ts';
 
 /** Check the data folder; exit code 1 when any error was found. Text ends with a newline. */
@@ -9,7 +10,7 @@ export async function checkData(dataDir: string): Promise<{ exitCode: 0 | 1; tex
   if (!result.ok) {
     const files = new Set(result.errors.map((e) => e.file)).size;
     const summary = `${plural(result.errors.length, 'error')} in ${plural(files, 'file')}; nothing was built from ${dataDir}. Fix them and run check again.`;
-    return { exitCode: 1, text: [...result.errors.map((e) => e.message), ...warnings, summary].join('\n') + '\n' };
+    return { exitCode: 1, text: [...result.errors.map(printedError), ...warnings, summary].join('\n') + '\n' };
   }
   return { exitCode: 0, text: [...warnings, summarise(dataDir, result.project, result.warnings)].join('\n') + '\n' };
 }

@@ -20,10 +20,11 @@ export interface Place {
 }
 
 /** Build the DataError and its printed sentence: "file:line:col field expected, found X — fix". */
-export function dataError(place: Place, problem: Problem): DataError {
+export function dataError(place: Place, problem: Problem, detail?: readonly string[]): DataError {
   const subject = problem.field === '' ? 'the file' : problem.field;
   const fix = problem.fix ? ` — ${problem.fix}` : '';
   return {
+    ...(detail && detail.length > 0 ? { detail: detail.map(terminalSafe) } : {}),
     file: place.file,
     line: place.line,
     column: place.column,
@@ -33,6 +34,11 @@ export function dataError(place: Place, problem: Problem): DataError {
     ...(problem.fix ? { fix: problem.fix } : {}),
     message: terminalSafe(`${place.file}:${place.line}:${place.column} ${subject} ${problem.expected}, found ${problem.found}${fix}`),
   };
+}
+
+/** The error as printed: its sentence, then any detail lines (the source line, a caret) indented under it. */
+export function printedError(error: DataError): string {
+  return error.detail ? [error.message, ...error.detail.map((l) => `    ${l}`)].join('\n') : error.message;
 }
 
 /**

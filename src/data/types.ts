@@ -190,6 +190,8 @@ export interface DataError {
   readonly fix?: string;
   /** The whole sentence, as printed: "data/jets/x.yaml:14:17 rating_kw must be ..., found -3.4". */
   readonly message: string;
+  /** Lines printed under the sentence: for a YAML syntax error the offending line, a caret under the spot and the parser's words. */
+  readonly detail?: readonly string[];
 }
 
 export type LoadResult =

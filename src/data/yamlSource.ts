@@ -6,6 +6,7 @@
 import { isAlias, isMap, isScalar, isSeq, LineCounter, parseDocument, type Document, type Node, type Pair } from 'yaml';
 import { deepestBlockLine, MAX_CONTENT_COLUMN } from './blockDepth.ts';
 import { dataError, describeValue, fieldName, shorten } from './errors.ts';
+import { caretExcerpt, diagnoseSyntax, parserWords } from './yamlSyntax.ts';
 import type { DataError } from './types.ts';
 
 export const MAX_FILE_BYTES = 5 * 1024 * 1024;
@@ -74,6 +75,18 @@ export function parseYaml(args: { file: string; text: string }): ParseResult {
         ok: false,
         errors: problems.map((e) => {
           const pos = lineCounter.linePos(e.pos[0]);
+          if (!KNOWN_CODES.has(e.code)) {
+            // A syntax error: find the real spot (the parser often stops a line late or at the end of
+            // the file), say it in plain words, show the line with a caret, keep the parser's words last.
+            const parsed = { code: e.code, message: e.message, start: e.pos[0], end: e.pos[1] };
+            const d = diagnoseSyntax(text, parsed);
+            const parserAt = d.line === pos.line && d.column === pos.col ? '' : ` (it stopped at line ${pos.line}, column ${pos.col})`;
+            return dataError(
+              { file, line: d.line, column: d.column },
+              { field: '', expected: 'must be valid YAML', found: d.found, fix: d.fix },
+              [...caretExcerpt(text, d.line, d.column), `the YAML parser said: ${parserWords(parsed)}${parserAt}`],
+            );
+          }
           const keyPath = e.code === 'DUPLICATE_KEY' ? pathOfKeyAt(doc.contents as Node | null, e.pos[0], []) : undefined;
           return dataError({ file, line: pos.line, column: pos.col }, yamlProblem({ code: e.code, message: e.message, excerpt: text.slice(e.pos[0], e.pos[1]), keyPath }));
         }),
@@ -87,6 +100,9 @@ export function parseYaml(args: { file: string; text: string }): ParseResult {
     return whole('must be readable YAML', shorten(reason, 80), /alias/i.test(reason) ? 'use fewer anchors/aliases (*name); write the values out' : undefined);
   }
 }
+
+/** Parser codes that are not syntax mistakes and have their own wording below. */
+const KNOWN_CODES = new Set(['DUPLICATE_KEY', 'MULTIPLE_DOCS', 'TAG_RESOLVE_FAILED']);
 
 function yamlProblem(args: { code: string; message: string; excerpt: string; keyPath?: PathSegment[] }): { field: string; expected: string; found: string; fix?: string } {
   const { code, message, excerpt, keyPath } = args;
@@ -103,7 +119,7 @@ function yamlProblem(args: { code: string; message: string; excerpt: string; key
     case 'TAG_RESOLVE_FAILED':
       return { field: '', expected: 'must use plain YAML values without custom tags', found: shorten(excerpt, 40), fix: 'remove the tag' };
     default:
-      return { field: '', expected: 'must be valid YAML', found: `a syntax error (${plain})`, fix: 'check indentation, colons and closing brackets or quotes near here' };
+      return { field: '', expected: 'must be valid YAML', found: `a syntax error (${plain})` };
   }
 }
 

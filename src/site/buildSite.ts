@@ -4,6 +4,7 @@
  * the previous output exactly as it was.
  */
 import { loadProject } from '../data/load.ts';
+import { printedError } from '../data/errors.ts';
 import type { DataError } from '../data/types.ts';
 import { checkOutputFolder, createStaging, discardStaging, swapIn } from './atomicDir.ts';
 import { buildDateIso } from './dateIso.ts';
@@ -32,7 +33,7 @@ export type BuildOutcome =
 /** Every data problem on its own line, then a count. */
 export function formatDataErrors(errors: readonly DataError[], what: 'problem' | 'warning'): string {
   if (errors.length === 0) return '';
-  const lines = [...new Set(errors.map((e) => e.message))];
+  const lines = [...new Set(errors.map(printedError))];
   return `${lines.join('\n')}\n${lines.length} ${what}${lines.length === 1 ? '' : 's'} in the data.\n`;
 }
 

@@ -12,11 +12,18 @@ function errorsOf(fixture: string): DataError[] {
 const where = (e: DataError) => `${e.file}:${e.line}:${e.column}`;
 
 describe('loadProjectFromFiles() locates each kind of mistake at file:line:column', () => {
-  it('reports a YAML syntax error once, where the parser stopped, with a hint', () => {
+  it('reports a YAML syntax error once, at the bracket that never closes (not the line after, where the parser stopped)', () => {
     const errors = errorsOf('syntax-error');
     expect(errors).toHaveLength(1);
-    expect(where(errors[0])).toBe('data/jets/tarnwell-212.yaml:20:3');
-    expect(errors[0].message).toMatch(/^data\/jets\/tarnwell-212\.yaml:20:3 the file must be valid YAML, found a syntax error \(Flow sequence .*\) — check indentation/);
+    expect(where(errors[0])).toBe('data/jets/tarnwell-212.yaml:19:16');
+    expect(errors[0].message).toBe(
+      'data/jets/tarnwell-212.yaml:19:16 the file must be valid YAML, found a [ that is never closed — add the closing ] at the end of the list on line 19',
+    );
+    expect(errors[0].detail).toEqual([
+      '19 |     rating_kw: [2.15',
+      '   |                ^',
+      'the YAML parser said: Flow sequence in block collection must be sufficiently indented and end with a ] (it stopped at line 20, column 3)',
+    ]);
   });
 
   it('reports text where a number belongs, with the value found and the fix', () => {
