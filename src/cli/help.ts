@@ -31,7 +31,8 @@ with its file, line, column and field. Exit status 1 when there is a problem.
   serve: `Usage: matchbook serve [--data DIR] [--out DIR] [--port N]
 
 Builds the site into the output folder (default: out), serves it on http://localhost:N/
-(default 8080) and rebuilds and reloads the page when a definition or template changes.
+(default 8080) and rebuilds and reloads the page when a definition or template changes. While the
+data has problems, every page lists them at its top until the files are fixed.
 Stop with Ctrl+C.
 `,
   start: `Usage: matchbook start [--data DIR]

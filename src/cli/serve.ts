@@ -1,9 +1,12 @@
-/** `matchbook serve`: Eleventy's dev server; editing a YAML file or a template rebuilds and reloads. */
+/**
+ * `matchbook serve`: Eleventy's dev server; editing a YAML file or a template rebuilds and reloads.
+ * While the data has problems every page lists them at its top (see site/liveSite.ts).
+ */
 import { resolve } from 'node:path';
 import Eleventy from '@11ty/eleventy';
 import { checkOutputFolder } from '../site/atomicDir.ts';
 import { configureEleventy, TEMPLATES_DIR, type EleventyConfigApi } from '../site/eleventySetup.ts';
-import { InvalidDataError, liveSiteData } from '../site/liveSite.ts';
+import { liveSiteData } from '../site/liveSite.ts';
 import type { ParsedArgs } from './args.ts';
 import type { CliIo } from './io.ts';
 
@@ -20,13 +23,9 @@ export async function runServe(args: ParsedArgs, io: CliIo): Promise<number> {
       configureEleventy(config, { site: liveSiteData({ dataDir, outDir, report: io.err }), watch: [dataDir] }),
   });
   eleventy.disableLogger();
-  try {
-    await eleventy.init();
-    await eleventy.watch();
-  } catch (error) {
-    if (error instanceof InvalidDataError) return 1;
-    throw error;
-  }
+  // Broken data does not stop the server: the pages show the problems until the files are fixed.
+  await eleventy.init();
+  await eleventy.watch();
   await eleventy.serve(args.port);
   io.out(`serving ${args.outDir} at http://localhost:${args.port}/ ; watching ${args.dataDir} and the templates. Ctrl+C stops.\n`);
   await new Promise<void>((done) => process.once('SIGINT', () => done()));

@@ -129,6 +129,29 @@ export interface SiteView {
   readonly resultsDocHref?: string;
   /** The full description of the data files (docs/data-format.md copied into the site), if present. */
   readonly dataFormatDocHref?: string;
+  /**
+   * Only while `serve` runs on broken data: what is wrong, shown at the top of every page over the last
+   * good build (or over an empty site when nothing has built yet). A one-shot build never has problems.
+   */
+  readonly problems?: ProblemsView;
+}
+
+/** The problems of the data as the dev server shows them on every page. */
+export interface ProblemsView {
+  /** "The data has 2 problems." */
+  readonly heading: string;
+  /** What the page below is: the last good build, or nothing yet. */
+  readonly note: string;
+  readonly items: readonly ProblemView[];
+}
+
+export interface ProblemView {
+  /** file:line:col, as the user would type it. */
+  readonly where: string;
+  /** The rest of the sentence. */
+  readonly message: string;
+  /** Lines shown under it in monospace: the source line, a caret, the parser's words. */
+  readonly detail: readonly string[];
 }
 
 /**

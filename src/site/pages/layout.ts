@@ -28,6 +28,21 @@ export function cautionsBlock(site: SiteView): SafeHtml {
 </aside>`;
 }
 
+/** While `serve` runs on broken data: the problems, each with its place, at the top of the page. */
+export function problemsBlock(site: SiteView): SafeHtml {
+  const p = site.problems;
+  if (!p) return html``;
+  return html`<section class="build-problems" role="alert" aria-labelledby="build-problems-title">
+<h2 id="build-problems-title">${p.heading}</h2>
+<p>${p.note}</p>
+<ol>${p.items.map(
+    (item) => html`<li>${item.where ? html`<code class="where">${item.where}</code> ` : ''}${item.message}${
+      item.detail.length > 0 ? html`<pre>${item.detail.join('\n')}</pre>` : ''
+    }</li>`,
+  )}</ol>
+</section>`;
+}
+
 /** A whole HTML page. */
 export function pageLayout(args: PageArgs): string {
   const { site, root } = args;
@@ -52,6 +67,7 @@ ${printPageRules(args.sheets ?? [])}
 </ul></nav>
 </header>
 <main>
+${problemsBlock(site)}
 ${cautionsBlock(site)}
 ${args.body}
 </main>
