@@ -105,5 +105,6 @@ function emptySite(): SiteView {
     boatSummary: empty,
     books: [],
     schemas: [],
+    guides: [],
   };
 }

@@ -9,6 +9,7 @@ import { renderPdf, type PdfOptions } from '../render/index.ts';
 import { FONT_FILES } from '../scene/fonts.ts';
 import type { Scene } from '../scene/types.ts';
 import { PACKAGE_ROOT } from './eleventySetup.ts';
+import { GUIDE_IMAGES_DIR, readGuides } from './guides.ts';
 import { outputFiles } from './outputFiles.ts';
 import { planSheets } from './planSheets.ts';
 import { jsonHash, sceneHash, type BuildCache } from './renderCache.ts';
@@ -87,13 +88,14 @@ export async function writeSiteFiles(args: SiteFilesArgs): Promise<{ site: SiteD
   }
 
   const schemas = files.copyDir(join(PACKAGE_ROOT, 'schema'), 'schema', '.schema.json');
-  const hasResultsDoc = files.copyFile(join(PACKAGE_ROOT, 'docs', 'results.md'), 'docs/results.md');
-  const hasDataFormatDoc = files.copyFile(join(PACKAGE_ROOT, 'docs', 'data-format.md'), 'docs/data-format.md');
+  // The user guides become pages; their images are copied beside them.
+  const guides = readGuides(join(PACKAGE_ROOT, 'docs'));
+  if (guides.length > 0) files.copyDir(join(PACKAGE_ROOT, 'docs', 'img'), GUIDE_IMAGES_DIR, '.png');
   // The sheets' own font, so inline SVG and the pages look as the PDFs do on any machine.
   files.copyFile(FONT_FILES.regular, 'assets/fonts/SourceSans3-Regular.ttf');
   files.copyFile(FONT_FILES.bold, 'assets/fonts/SourceSans3-Bold.ttf');
 
-  const view = siteView({ project, dateIso, plan, sheets, boatResults, familyResults, schemas, hasResultsDoc, hasDataFormatDoc });
+  const view = siteView({ project, dateIso, plan, sheets, boatResults, familyResults, schemas, guides });
   const counts = {
     sheets: plan.sheets.length,
     books: project.books.length,

@@ -110,6 +110,20 @@ export interface JetView {
   readonly table: TableView;
 }
 
+/** A guide of docs/ rendered as a page of the site. */
+export interface GuideView {
+  readonly slug: string;
+  /** The Markdown's first heading. */
+  readonly title: string;
+  readonly navLabel: string;
+  /** The page, relative to the site root (guides/<slug>/index.html). */
+  readonly href: string;
+  /** The rendered Markdown: built from the package's own docs, never from a data folder. */
+  readonly bodyHtml: string;
+  /** Whether the page lists the JSON Schemas after the text. */
+  readonly withSchemas: boolean;
+}
+
 export interface SiteView {
   readonly shopName: string;
   readonly contactLine: string;
@@ -125,10 +139,10 @@ export interface SiteView {
   readonly boatSummary: TableView;
   readonly books: readonly BookView[];
   readonly schemas: readonly LinkView[];
-  /** Where the results JSON shape is documented (docs/results.md copied into the site), if present. */
+  /** The user guides rendered from docs/, in navigation order. */
+  readonly guides: readonly GuideView[];
+  /** The guide page describing the results JSON files, if the site carries it. */
   readonly resultsDocHref?: string;
-  /** The full description of the data files (docs/data-format.md copied into the site), if present. */
-  readonly dataFormatDocHref?: string;
   /**
    * Only while `serve` runs on broken data: what is wrong, shown at the top of every page over the last
    * good build (or over an empty site when nothing has built yet). A one-shot build never has problems.
@@ -168,5 +182,8 @@ export class SiteData {
   }
   get books(): readonly BookView[] {
     return this.view.books;
+  }
+  get guides(): readonly GuideView[] {
+    return this.view.guides;
   }
 }

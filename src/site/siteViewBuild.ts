@@ -8,7 +8,7 @@ import { boatTables, calibratedSuffix } from './boatTables.ts';
 import { ratingCell } from './cells.ts';
 import { boatSummaryTable, familySummaryTable } from './indexTables.ts';
 import type { SheetPlan } from './planSheets.ts';
-import type { BoatView, CellView, FamilyView, JetView, SheetView, SiteView } from './siteView.ts';
+import type { BoatView, CellView, FamilyView, GuideView, JetView, SheetView, SiteView } from './siteView.ts';
 import { calibrationView } from './trialTable.ts';
 import { wallChartTables } from './wallChartTables.ts';
 
@@ -21,9 +21,8 @@ export interface SiteViewArgs {
   readonly familyResults: ReadonlyMap<string, readonly WallChartResult[]>;
   /** File names of the JSON Schemas copied to schema/. */
   readonly schemas: readonly string[];
-  /** Whether docs/results.md and docs/data-format.md were copied into the site. */
-  readonly hasResultsDoc: boolean;
-  readonly hasDataFormatDoc: boolean;
+  /** The guides rendered from docs/ (none in tests of pages that do not need them). */
+  readonly guides: readonly GuideView[];
 }
 
 /** "boats/x.yaml": where a definition lives inside the data folder, the same wherever that folder is. */
@@ -162,7 +161,7 @@ export function siteView(args: SiteViewArgs): SiteView {
       sheets: pick(args.sheets, args.plan.byBook.get(book.id)),
     })),
     schemas: args.schemas.map((name) => ({ label: name, href: `schema/${name}` })),
-    resultsDocHref: args.hasResultsDoc ? 'docs/results.md' : undefined,
-    dataFormatDocHref: args.hasDataFormatDoc ? 'docs/data-format.md' : undefined,
+    guides: args.guides,
+    resultsDocHref: args.guides.find((g) => g.slug === 'results')?.href,
   };
 }

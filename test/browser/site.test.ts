@@ -84,10 +84,10 @@ async function crawl(): Promise<string[]> {
 
 // Builds and a browser on a busy 2-core machine: generous limits; speed is measured in npm run bench.
 describe('the built demo site in Chromium', { timeout: 600_000 }, () => {
-  it('has an index, a page per engine family, boat and book, and a data-format page', async () => {
+  it('has an index, a page per engine family, boat and book, and a page per guide', async () => {
     const pages = await crawl();
     expect(pages).toContain('index.html');
-    expect(pages).toContain('data-format/index.html');
+    for (const guide of ['sheets', 'model', 'data-format', 'results']) expect(pages).toContain(`guides/${guide}/index.html`);
     expect(pages.filter((p) => p.startsWith('families/')).length).toBeGreaterThan(0);
     expect(pages.filter((p) => p.startsWith('boats/')).length).toBeGreaterThan(0);
     expect(pages.filter((p) => p.startsWith('books/')).length).toBeGreaterThan(0);

@@ -2,12 +2,14 @@
  * Two builds of the demo data through the real command, in different folders, from different working
  * folders, more than a second apart: the trees are byte-identical, SOURCE_DATE_EPOCH sets the printed
  * date, no built file shows NaN, Infinity, undefined or null where a number belongs, and every page
- * and every sheet (HTML, SVG, each PDF page) carries the cautions.
+ * and every sheet (HTML, SVG, each PDF page) carries the cautions, and every link and source inside the
+ * site resolves to a file (and every #fragment to an id on its page).
  */
 import { cpSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { BUILT_IN_CAUTIONS } from '../../src/sheets/kit/cautions.ts';
+import { checkLinks } from '../site/linkCheck.ts';
 import { matchbook } from './cli.ts';
 import { removeDir, tempDir } from './corpus.ts';
 import { numbersIn } from './mutations.ts';
@@ -65,7 +67,10 @@ const NONSENSE = /\b(NaN|-?Infinity|undefined|null)\b/;
 describe('no nonsense on paper', () => {
   it('no HTML page, SVG sheet or PDF page shows NaN, Infinity, undefined or null', () => {
     const found: string[] = [];
-    for (const path of [...of('.html'), ...of('.svg')]) {
+    // The guides are the prose of docs/, which names JSON's null and undefined on purpose; no figure is computed there.
+    const computed = of('.html').filter((p) => !p.startsWith('guides/'));
+    expect(computed.length).toBe(13);
+    for (const path of [...computed, ...of('.svg')]) {
       const m = NONSENSE.exec(visibleText(text(path)));
       if (m) found.push(`${path}: ${m[0]}`);
     }
@@ -123,5 +128,26 @@ describe('cautions', () => {
       });
     }
     expect(pages).toBeGreaterThanOrEqual(27 + 15);
+  });
+});
+
+describe('links', () => {
+  it('every href, src and stylesheet url inside the site names a file of the build, and every #fragment an id on its page', () => {
+    const report = checkLinks(join(first, 'site/out'));
+    expect(report.broken).toEqual([]);
+    // 17 pages: index, 3 families, 6 boats, 3 books, 4 guides; each page links the others through its navigation.
+    expect(report.pages).toBe(17);
+    expect(report.checked).toBeGreaterThan(300);
+  });
+
+  it('the guides are pages of the site, each linked from the navigation of every page', () => {
+    const guides = ['guides/sheets/index.html', 'guides/model/index.html', 'guides/data-format/index.html', 'guides/results/index.html'];
+    for (const guide of guides) expect(a.has(guide), guide).toBe(true);
+    for (const page of of('.html')) {
+      const depth = page.split('/').length - 1;
+      for (const guide of guides) expect(text(page), page).toContain(`href="${'../'.repeat(depth)}${guide}"`);
+    }
+    // The raw Markdown is no longer copied into the site.
+    expect(of('.md')).toEqual([]);
   });
 });

@@ -21,7 +21,7 @@ export async function demoProject(): Promise<Project> {
 export function viewOf(project: Project): SiteView {
   const plan = planSheets(project);
   const { boatResults, familyResults } = siteResults(project, plan);
-  return siteView({ project, dateIso: '2026-11-02', plan, sheets: new Map(), boatResults, familyResults, schemas: [], hasResultsDoc: false, hasDataFormatDoc: false });
+  return siteView({ project, dateIso: '2026-11-02', plan, sheets: new Map(), boatResults, familyResults, schemas: [], guides: [] });
 }
 
 /** A cell as read back: its whitespace-folded text, classes, tag, scope, whether bold, and a link if any. */

@@ -39,6 +39,7 @@ const site: SiteView = {
   boatSummary: { caption: 'Boats', head: ['Boat', 'Status'], numeric: [], rows: [[{ text: 'Boat A (demo)', href: 'boats/a/index.html' }, { text: 'Too light: over-revs', mark: 'warn' }]] },
   books: [],
   schemas: [],
+  guides: [],
 };
 
 describe('pages', () => {

@@ -10,6 +10,8 @@ export interface PageArgs {
   readonly body: SafeHtml;
   /** Sheets shown inline; each gets a print page of its own paper size. */
   readonly sheets?: readonly SheetView[];
+  /** The page's own address from the site root, marked as the current page in the navigation. */
+  readonly href?: string;
 }
 
 /** @page rules so each inline sheet prints alone on paper of its own size, without margins. */
@@ -63,8 +65,10 @@ ${printPageRules(args.sheets ?? [])}
 <li><a href="${root}index.html#jets">Jet units</a></li>
 <li><a href="${root}index.html#boats">Boats</a></li>
 <li><a href="${root}index.html#books">Books</a></li>
-<li><a href="${root}data-format/index.html">Data format</a></li>
 </ul></nav>
+${site.guides.length > 0 ? html`<nav aria-label="Guides" class="guides-nav"><p class="nav-label">Guides</p><ul>${site.guides.map(
+    (g) => html`<li><a href="${root}${g.href}"${g.href === args.href ? html` aria-current="page"` : ''}>${g.navLabel}</a></li>`,
+  )}</ul></nav>` : ''}
 </header>
 <main>
 ${problemsBlock(site)}

@@ -9,7 +9,7 @@ function section(id: string, title: string, body: SafeHtml): SafeHtml {
 }
 
 function resultsLink(site: SiteView, href: string, root: string): SafeHtml {
-  const doc = site.resultsDocHref ? html` (fields described in <a href="${root}${site.resultsDocHref}">results.md</a>)` : '';
+  const doc = site.resultsDocHref ? html` (fields described in <a href="${root}${site.resultsDocHref}">the results guide</a>)` : '';
   return html`<p><a href="${root}${href}" download>Results as JSON</a>${doc}.</p>`;
 }
 
@@ -32,7 +32,7 @@ ${section('books', 'Chart books', html`${none(site.books, 'No books defined.')}<
     (b) => html`<li><a href="${root}${b.href}">${b.title}</a> (for the ${b.audience}, ${b.sheets.length} sheets,
 <a href="${root}${b.pdfHref}" download>PDF</a>)</li>`,
   )}</ul>`)}
-<p>How the definitions are written: <a href="data-format/index.html">data format</a>.</p>`;
+${site.guides.length > 0 ? html`<p>Guides: ${site.guides.map((g, i) => html`${i > 0 ? ', ' : ''}<a href="${root}${g.href}">${g.navLabel}</a>`)}.</p>` : ''}`;
   return pageLayout({ site, title: 'Impeller matching charts', root, body });
 }
 
