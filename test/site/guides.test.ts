@@ -66,6 +66,12 @@ describe('the guides of docs/', () => {
     ]);
   });
 
+  it('ship in the npm package, with their images, so an installed matchbook builds sites that carry them', () => {
+    const files = (JSON.parse(readFileSync('package.json', 'utf8')) as { files: string[] }).files;
+    for (const g of GUIDES) expect(files, g.file).toContain(`docs/${g.file}`);
+    expect(files).toContain('docs/img/');
+  });
+
   it('link, in their Markdown sources, only to files that exist beside them and to headings those files have', () => {
     // So the sources read on a repository browser, where the relative paths are followed as written.
     const problems: string[] = [];
