@@ -135,4 +135,14 @@ export interface Scene {
   /** ISO date (YYYY-MM-DD) printed on the sheet and in PDF metadata. */
   readonly dateIso: string;
   readonly root: GroupNode;
+  /**
+   * The sheet's further pages, same paper, when its content continues (a long table, the back of a
+   * card): the PDF gets every page, SVG and PNG one file per page.
+   */
+  readonly morePages?: readonly Scene[];
+}
+
+/** A sheet's pages in order: the scene itself, then its further pages. */
+export function scenePages(scene: Scene): Scene[] {
+  return [scene, ...(scene.morePages ?? [])];
 }

@@ -13,12 +13,14 @@ import { conditionsText } from './words.ts';
 
 const left = (header: string): Column => ({ header, align: 'left' });
 const right = (header: string): Column => ({ header, align: 'right' });
+/** A text column that may wrap onto more lines when the table is too wide. */
+const words = (header: string): Column => ({ header, align: 'left', wrap: true });
 
 /** Fitted combination as item/value rows. */
 export function fittedRows(boat: Boat, result: BoatResult, unit: PowerUnit): { columns: Column[]; rows: Cell[][] } {
   const imp = boat.jet.impellers.find((i) => i.id === boat.impellerId);
   return {
-    columns: [left('Fitted'), left('')],
+    columns: [words('Fitted'), words('')],
     rows: [
       ['Engine', `${boat.engine.label} (${boat.engine.fuel}), max ${rpmText(result.limits.maxRpm)} rpm, WOT window ${rpmText(result.limits.windowLowRpm)}–${rpmText(result.limits.windowHighRpm)} rpm`],
       ['Jet unit, impeller', `${boat.jet.label}, impeller ${result.impellerLabel}${imp ? ` rated ${powerText(imp.ratingKw, unit)} at ${rpmText(boat.jet.family.referenceSpeedRpm)} rpm ± ${boat.jet.family.tolerancePct} %` : ''}`],
@@ -77,7 +79,7 @@ export function cruiseRows(boat: Boat, result: BoatResult, unit: PowerUnit, spee
   const cal = shown !== result.cruise && shown.some((row, i) => rpmOf(row) !== rpmOf(result.cruise[i]));
   return {
     sameRpmAsDataSheet: shown !== result.cruise && !cal,
-    columns: [{ ...left('Cruise setting'), shorten: true }, right('Asked'), right('Engine rpm'), ...(cal ? [{ ...right(DATA_SHEET_HEADER), optional: true }] : []), right(`Power (${unit})`), right(speedHeader(speedUnit)), right('Fuel (L/h, est.)'), left('Note')],
+    columns: [{ ...words('Cruise setting'), shorten: true }, right('Asked'), right('Engine rpm'), ...(cal ? [{ ...right(DATA_SHEET_HEADER), optional: true }] : []), right(`Power (${unit})`), right(speedHeader(speedUnit)), right('Fuel (L/h, est.)'), words('Note')],
     rows: shown.map((row, i) => [
       row.label,
       cruiseAsked(row, boat, unit),
@@ -118,14 +120,14 @@ export function alternativeRows(result: BoatResult, unit: PowerUnit, speedUnit: 
   const cal = result.calibrated !== undefined;
   return {
     columns: [
-      left('Impeller'),
+      words('Impeller'),
       right('WOT band'),
       right('Most likely'),
       ...(cal ? [{ ...right(DATA_SHEET_HEADER), optional: true }] : []),
       right(`Power (${unit})`),
       right(speedHeader(speedUnit, 'Top')),
-      left('Status'),
-      left('Across the band'),
+      words('Status'),
+      words('Across the band'),
     ],
     rows: result.alternatives.map((a) => {
       const b = a.calibratedBand ?? a.band;

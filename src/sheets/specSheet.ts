@@ -5,13 +5,14 @@
 import type { SheetRequest } from '../data/types.ts';
 import type { Scene } from '../scene/types.ts';
 import { analyseBoat, isWarning } from '../analysis/index.ts';
-import { boatChart } from './chart/boatChart.ts';
+import { boatChart, chartImpellersNote } from './chart/boatChart.ts';
 import { alternativeRows, cruiseRows, estimatesNote, fittedRows, trialDatesText, wotHeadline, wotSubLines } from './boatTables.ts';
 import { calibratedChartView } from './calibratedView.ts';
 import { calibrationText, MAX_TRIAL_ROWS, trialRows } from './trialTables.ts';
-import { assembleScene, assertFits } from './kit/assemble.ts';
+import { assembleScene } from './kit/assemble.ts';
 import { paragraph, type Block } from './kit/block.ts';
-import { cautionsBlock } from './kit/cautions.ts';
+import { cautionsFlow } from './kit/cautions.ts';
+import { flowPages, splittable, whole, type Flowable } from './kit/flow.ts';
 import { sheetFrame } from './kit/frame.ts';
 import { stack, type Part } from './kit/stack.ts';
 import { INK, WARN, typeScale } from './kit/style.ts';
@@ -30,12 +31,30 @@ const TIGHT_GAP_MM = 2.5;
 const COMPACT_NOTE = 'Speed and fuel are estimates; band and estimate explanations left out for room.';
 
 /** A heading followed by a table, as one part. */
-export function tablePart(args: { heading: string; columns: Column[]; rows: Cell[][]; header?: boolean; sizePt: number; minSizePt: number; headingPt: number; role: string; where: string }): Part {
-  return ({ x, y, widthMm }): Block => {
-    const h = paragraph({ x, y, widthMm, text: args.heading, sizePt: args.headingPt, weight: 'bold', role: 'heading', where: args.where });
-    const t = table({ x, y: y + h.heightMm + 0.5, maxWidthMm: widthMm, columns: args.columns, rows: args.rows, sizePt: args.sizePt, minSizePt: args.minSizePt, fullWidth: true, header: args.header, role: args.role, where: `${args.where}: ${args.heading}` });
+export function tablePart(args: TableFlowArgs): Part {
+  return tableFlow(args).layout;
+}
+
+interface TableFlowArgs {
+  heading: string;
+  columns: Column[];
+  rows: Cell[][];
+  header?: boolean;
+  sizePt: number;
+  minSizePt: number;
+  headingPt: number;
+  role: string;
+  where: string;
+}
+
+/** A heading and a table that splits between rows over columns and pages (the heading says "continued", widths stay). */
+export function tableFlow(args: TableFlowArgs): Flowable {
+  return splittable(args.rows.length, (from, to, { x, y, widthMm }) => {
+    const heading = from > 0 ? `${args.heading} (continued)` : args.heading;
+    const h = paragraph({ x, y, widthMm, text: heading, sizePt: args.headingPt, weight: 'bold', role: 'heading', where: args.where });
+    const t = table({ x, y: y + h.heightMm + 0.5, maxWidthMm: widthMm, columns: args.columns, rows: args.rows.slice(from, to), measureRows: args.rows, firstRowIndex: from, noNote: to < args.rows.length, sizePt: args.sizePt, minSizePt: args.minSizePt, fullWidth: true, header: args.header, role: args.role, where: `${args.where}: ${args.heading}` });
     return { nodes: [...h.nodes, ...t.nodes], heightMm: h.heightMm + 0.5 + t.heightMm };
-  };
+  }, 0, true);
 }
 
 /** Builds the spec-sheet scene. */
@@ -46,7 +65,9 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
   const unit = site.powerUnitFirst;
   const result = analyseBoat({ boat, project: ctx.project });
   const type = typeScale(request.paper);
-  const frame = sheetFrame({ paper: request.paper, site, title: boat.name, titleSuffix: ': spec sheet', subtitle: `${boat.engine.label} · ${boat.jet.label} · impeller ${result.impellerLabel}`, dateIso: ctx.dateIso, type, where });
+  const frameArgs = { paper: request.paper, site, title: boat.name, subtitle: `${boat.engine.label} · ${boat.jet.label} · impeller ${result.impellerLabel}`, dateIso: ctx.dateIso, type, where };
+  const frame = sheetFrame({ ...frameArgs, titleSuffix: ': spec sheet' });
+  const continuedFrame = (n: number) => sheetFrame({ ...frameArgs, titleSuffix: `: spec sheet, page ${n + 1}` });
   const box = frame.contentBox;
   const shownWot = result.calibrated?.wot ?? result.wot;
   const warn = isWarning(shownWot.nominal.status);
@@ -60,9 +81,9 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
   const cruiseHeading = !calibratedTo ? 'Cruise settings' : `Cruise settings, calibrated to ${calibratedTo}${cruise.sameRpmAsDataSheet ? ' (rpm as on the data sheet)' : ''}`;
   const alts = alternativeRows(result, unit, speedUnit);
   const trialCount = result.calibrated?.calibration.trials.length ?? 0;
-  const parts = (chartMm: number, trials: ReturnType<typeof trialRows>, compact: boolean): Part[] => [
-    tablePart({ heading: 'Fitted combination', ...fitted, header: false, ...common, role: 'fitted-table' }),
-    ({ x, y, widthMm }) => {
+  const parts = (chartMm: number, trials: ReturnType<typeof trialRows>, compact: boolean): Flowable[] => [
+    tableFlow({ heading: 'Fitted combination', ...fitted, header: false, ...common, role: 'fitted-table' }),
+    whole(({ x, y, widthMm }) => {
       const head = paragraph({ x, y, widthMm, text: wotHeadline(result, unit), sizePt: type.heading, weight: 'bold', colour: warn ? WARN : INK, role: 'wot-headline', where });
       let cursor = y + head.heightMm + 0.5;
       const nodes = [...head.nodes];
@@ -73,36 +94,39 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
         cursor += line.heightMm;
       }
       return { nodes, heightMm: cursor - y };
-    },
-    ({ x, y, widthMm }) => {
+    }),
+    whole(({ x, y, widthMm }) => {
       const chart = boatChart({ ...(view ?? { boat, result }), box: { x, y, width: widthMm, height: chartMm }, sizePt: type.small, powerUnitFirst: unit, where });
-      const notes = chart.notes.map((n) => `(${n.number}) ${n.text}`).join('  ');
+      const notes = [chartImpellersNote(boat), chart.notes.map((n) => `(${n.number}) ${n.text}`).join('  ')].filter((t) => t !== '').join('  ');
       const note = notes ? paragraph({ x, y: y + chartMm + 1, widthMm, text: notes, sizePt: type.small, where }) : { nodes: [], heightMm: 0 };
       return { nodes: [chart.node, ...note.nodes], heightMm: chartMm + 1 + note.heightMm };
-    },
-    tablePart({ heading: cruiseHeading, columns: cruise.columns, rows: cruise.rows, ...common, role: 'cruise-table' }),
-    tablePart({ heading: calibratedTo ? `Every impeller of this jet on this boat, calibrated to ${calibratedTo}` : 'Every impeller of this jet on this boat', ...alts, ...common, role: 'alternatives-table' }),
+    }),
+    tableFlow({ heading: cruiseHeading, columns: cruise.columns, rows: cruise.rows, ...common, role: 'cruise-table' }),
+    tableFlow({ heading: calibratedTo ? `Every impeller of this jet on this boat, calibrated to ${calibratedTo}` : 'Every impeller of this jet on this boat', ...alts, ...common, role: 'alternatives-table' }),
     ...(trials.rows.length > 0
       ? [
-          tablePart({ heading: 'Sea trials', columns: trials.columns, rows: trials.rows, ...common, role: 'trials-table' }),
+          tableFlow({ heading: 'Sea trials', columns: trials.columns, rows: trials.rows, ...common, role: 'trials-table' }),
         ]
       : []),
-    ({ x, y, widthMm }) => {
+    whole(({ x, y, widthMm }) => {
       const hidden = trials.hidden > 0 ? (trials.rows.length > 0 ? ` ${trials.hidden} older trial(s) not listed.` : ` The ${trials.hidden} sea trial(s) are not listed, for room.`) : '';
       const calibration = trialCount > 0 ? `${compact ? '' : calibrationText(result)}${hidden} ` : '';
       const refused = result.trialsNotUsed ? `${result.trialsNotUsed} ` : '';
       const estimates = `${refused}${compact ? COMPACT_NOTE : estimatesNote(result)}`;
       return paragraph({ x, y, widthMm, text: `${calibration}${estimates}`.trim(), sizePt: type.small, role: 'estimates-note', where });
-    },
-    ({ x, y, widthMm }) => cautionsBlock({ site, x, y, widthMm, sizePt: type.body, headingPt: type.heading, where }),
+    }),
+    cautionsFlow({ site, sizePt: type.body, headingPt: type.heading, where }),
   ];
   // The chart gives up height when the tables, sea trials and notes need it (its figures are in the tables
   // too), down to CHART_MIN_MM, while the gaps between parts close from GAP_MM to TIGHT_GAP_MM; then older
   // sea trials leave the table (down to the latest one); then the band and estimate explanations shrink to
-  // one line saying so; then the trial table goes (the note counts it); below that the sheet needs larger paper.
+  // one line saying so; then the trial table goes (the note counts it). When even that does not fit one
+  // page, the sheet keeps everything at its full size and continues on a second page of the same paper
+  // (tables split between rows, the cautions between paragraphs).
+  const onePage = (p: Flowable[], gapMm: number) => stack({ x: box.x, y: box.y, widthMm: box.width, gapMm, parts: p.map((f) => f.layout) });
   const layout = (shownTrials: number, compact: boolean) => {
     const trials = trialRows(result, boat.jet.family.tolerancePct, { maxRows: shownTrials });
-    const at = (chartMm: number, gapMm: number) => stack({ x: box.x, y: box.y, widthMm: box.width, gapMm, parts: parts(chartMm, trials, compact) });
+    const at = (chartMm: number, gapMm: number) => onePage(parts(chartMm, trials, compact), gapMm);
     const first = at(CHART_MAX_MM, GAP_MM);
     const over = first.bottomMm - (box.y + box.height);
     if (over <= 0) return first;
@@ -116,15 +140,19 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
     { shown: Math.min(most, 1), compact: true },
     { shown: 0, compact: true },
   ];
+  const fits = (l: { bottomMm: number }) => l.bottomMm <= box.y + box.height + 1e-6;
   let laid = layout(steps[0].shown, steps[0].compact);
   for (const step of steps.slice(1)) {
-    if (laid.bottomMm <= box.y + box.height + 1e-6) break;
+    if (fits(laid)) break;
     laid = layout(step.shown, step.compact);
   }
-  assertFits(box, laid.bottomMm, where);
+  const pages = fits(laid)
+    ? [{ frame, nodes: laid.nodes }]
+    : flowPages({ frame: (n) => (n === 0 ? frame : continuedFrame(n)), gapMm: GAP_MM, parts: parts(Math.min(CHART_MAX_MM, Math.max(CHART_MIN_MM, box.height * 0.45)), trialRows(result, boat.jet.family.tolerancePct, { maxRows: most }), false), where });
   return assembleScene({
     frame,
-    content: laid.nodes,
+    content: pages[0].nodes,
+    more: pages.slice(1).map((p) => ({ frame: p.frame, content: p.nodes })),
     title: `${boat.name}: spec sheet`,
     description: `Spec sheet for ${boat.name}: ${wotHeadline(result, unit)}; cruise table, every impeller of ${boat.jet.label}, and cautions.`,
     subject: 'Boat spec sheet',

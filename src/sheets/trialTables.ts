@@ -6,6 +6,7 @@ import type { Cell, Column } from './kit/table.ts';
 
 const left = (header: string): Column => ({ header, align: 'left' });
 const right = (header: string): Column => ({ header, align: 'right' });
+const words = (header: string): Column => ({ header, align: 'left', wrap: true });
 
 const TRIAL_STATUS: Readonly<Record<string, string>> = {
   measured: '',
@@ -31,7 +32,7 @@ export function trialRows(result: BoatResult, tolerancePct: number, opts: { maxR
   const trials = [...all].sort((a, b) => (a.date < b.date ? 1 : a.date > b.date ? -1 : 0)).slice(0, opts.maxRows ?? MAX_TRIAL_ROWS).reverse();
   return {
     hidden: all.length - trials.length,
-    columns: [left('Trial'), left('Impeller'), right('Measured WOT'), right('Calibrated model'), right(RESIDUAL_HEADER), right('Rating vs nominal'), left(`Rating within ± ${tolerancePct} %`)],
+    columns: [left('Trial'), words('Impeller'), right('Measured WOT'), right('Calibrated model'), right(RESIDUAL_HEADER), right('Rating vs nominal'), words(`Rating within ± ${tolerancePct} %`)],
     rows: trials.map((t) => {
       const off = t.insideTolerance === 'no' && t.deviationPct !== undefined;
       // The residual is taken from the two printed (rounded) figures, so a reader's subtraction always agrees.

@@ -6,7 +6,7 @@
 import type { SheetRequest } from '../data/types.ts';
 import type { Scene } from '../scene/types.ts';
 import { analyseBoat, engineCurveAt, isWarning, type WindowPlace } from '../analysis/index.ts';
-import { boatChart } from './chart/boatChart.ts';
+import { boatChart, chartImpellersNote } from './chart/boatChart.ts';
 import type { EngineSeries } from './chart/seriesTypes.ts';
 import { assembleScene, assertFits } from './kit/assemble.ts';
 import { paragraph } from './kit/block.ts';
@@ -109,7 +109,7 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
       paragraph({ x, y, widthMm, text: `Same impeller, more power: WOT rpm rises only a little, as the impeller takes power as rpm to the power ${kText} (x % more power, about x/${kText} % more rpm). Aim only for WOT inside the window (${rpmText(result.limits.windowLowRpm)}–${rpmText(result.limits.windowHighRpm)} rpm); never past the maximum (${rpmText(result.limits.maxRpm)} rpm).`, sizePt: type.body, where }),
     ({ x, y, widthMm }) => {
       const chart = boatChart({ ...(view ?? { boat, result }), box: { x, y, width: widthMm, height: chartMm }, sizePt: type.small, powerUnitFirst: unit, engines, points: 'fitted', where });
-      const notes = chart.notes.map((n) => `(${n.number}) ${n.text}`).join('  ');
+      const notes = [chartImpellersNote(boat), chart.notes.map((n) => `(${n.number}) ${n.text}`).join('  ')].filter((t) => t !== '').join('  ');
       const note = notes ? paragraph({ x, y: y + chartMm + 1, widthMm, text: notes, sizePt: type.small, where }) : { nodes: [], heightMm: 0 };
       return { nodes: [chart.node, ...note.nodes], heightMm: chartMm + 1 + note.heightMm };
     },
@@ -120,8 +120,8 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
         { header: 'WOT rpm', align: 'right' },
         { header: 'Power at WOT', align: 'right' },
         { header: speedHeader(speedUnit, 'Top'), align: 'right' },
-        { header: 'Status', align: 'left' },
-        { header: 'Best impeller for the new power', align: 'left' },
+        { header: 'Status', align: 'left', wrap: true },
+        { header: 'Best impeller for the new power', align: 'left', wrap: true },
       ],
       rows: upgradeRows,
       ...common,
@@ -129,7 +129,7 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
     }),
     tablePart({
       heading: 'Power needed for more WOT rpm',
-      columns: [{ header: 'Gain', align: 'left' }, { header: 'Target WOT', align: 'right' }, { header: 'Power change needed', align: 'right' }, { header: 'Target against the window', align: 'left' }],
+      columns: [{ header: 'Gain', align: 'left', wrap: true }, { header: 'Target WOT', align: 'right' }, { header: 'Power change needed', align: 'right' }, { header: 'Target against the window', align: 'left', wrap: true }],
       rows: gainRows,
       ...common,
       role: 'rpm-gain-table',

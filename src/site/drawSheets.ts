@@ -32,8 +32,18 @@ function printPageName(scene: Scene): string {
   return `p${Math.round(scene.widthMm * 10)}x${Math.round(scene.heightMm * 10)}`;
 }
 
+/** File name (without extension) of a sheet's n-th page (1-based): the first keeps the sheet's slug. */
+export function pageFile(slug: string, n: number): string {
+  return n === 1 ? `sheets/${slug}` : `sheets/${slug}-page-${n}`;
+}
+
 function sheetView(slug: string, request: SheetRequest, scene: Scene, files: OutputFiles): SheetView {
+  const more = (scene.morePages ?? []).map((_, i) => {
+    const file = pageFile(slug, i + 2);
+    return { svgInline: () => inlineSvg(files.readText(`${file}.svg`), `${slug}-page-${i + 2}`), downloads: { svg: `${file}.svg`, png: `${file}.png` } };
+  });
   return {
+    ...(more.length > 0 ? { morePages: more } : {}),
     slug,
     kind: request.kind,
     title: scene.title,
@@ -72,6 +82,10 @@ export async function drawSheets(args: DrawArgs): Promise<{ views: Map<string, S
         args.files.write(`sheets/${slug}.svg`, rendered.svg);
         args.files.write(`sheets/${slug}.pdf`, rendered.pdf);
         args.files.write(`sheets/${slug}.png`, rendered.png);
+        (rendered.morePages ?? []).forEach((page, i) => {
+          args.files.write(`${pageFile(slug, i + 2)}.svg`, page.svg);
+          args.files.write(`${pageFile(slug, i + 2)}.png`, page.png);
+        });
         views.set(slug, sheetView(slug, request, scene, args.files));
         args.onProgress?.(views.size, total);
       },

@@ -13,6 +13,8 @@ export interface RenderedSheet {
   readonly svg: string;
   readonly pdf: Uint8Array;
   readonly png: Uint8Array;
+  /** SVG and PNG of the sheet's further pages (Scene.morePages); the PDF holds every page. */
+  readonly morePages?: readonly { readonly svg: string; readonly png: Uint8Array }[];
 }
 
 export interface BuildCache {

@@ -7,7 +7,7 @@ import { join } from 'node:path';
 import type { Book, Project } from '../data/types.ts';
 import { renderPdf, type PdfOptions } from '../render/index.ts';
 import { FONT_FILES } from '../scene/fonts.ts';
-import type { Scene } from '../scene/types.ts';
+import { scenePages, type Scene } from '../scene/types.ts';
 import { PACKAGE_ROOT } from './eleventySetup.ts';
 import { GUIDE_IMAGES_DIR, readGuides } from './guides.ts';
 import { outputFiles } from './outputFiles.ts';
@@ -48,7 +48,9 @@ async function bookPdf(args: {
   cache?: BuildCache;
   renderer?: SheetRenderer;
 }): Promise<Uint8Array> {
-  const { book, scenes } = args;
+  const { book } = args;
+  // A sheet that continues on further pages puts every page in the book.
+  const scenes = args.scenes.flatMap(scenePages);
   const key = args.cache ? jsonHash({ title: book.title, audience: book.audience, scenes: scenes.map(sceneHash) }) : '';
   const cached = args.cache?.books.get(key);
   if (cached) return cached;

@@ -51,6 +51,8 @@ export interface SheetView {
   readonly widthMm: number;
   readonly heightMm: number;
   readonly downloads: Downloads;
+  /** The sheet's further pages (a sheet that continues on a second page of the same paper). */
+  readonly morePages?: readonly { readonly svgInline: () => string; readonly downloads: Omit<Downloads, 'pdf'> }[];
 }
 
 export interface LinkView {

@@ -39,11 +39,38 @@ function curveValuesKw(curve: EngineCurve, loRpm: number, hiRpm: number): number
   return [a, b, ...knots].map((x) => curve.powerKwUnchecked(x));
 }
 
+/**
+ * Most impellers a boat chart draws: six keeps every curve its own colour (style.ts) and the labels
+ * readable in a half-page chart; a larger jet shows the six around the fitted one (its tables list all).
+ */
+export const BOAT_CHART_IMPELLERS = 6;
+
+/** The ids of the impellers a boat chart draws: all, or the `most` consecutive ones around the fitted one. */
+export function chartImpellerIds(boat: Boat, most = BOAT_CHART_IMPELLERS): string[] {
+  const ids = boat.jet.impellers.map((i) => i.id);
+  if (ids.length <= most) return ids;
+  const fitted = Math.max(0, ids.indexOf(boat.impellerId));
+  const start = Math.min(Math.max(0, fitted - Math.floor((most - 1) / 2)), ids.length - most);
+  return ids.slice(start, start + most);
+}
+
+/** The sentence a sheet prints under a chart that leaves impellers out ('' when it draws them all). */
+export function chartImpellersNote(boat: Boat): string {
+  const shown = chartImpellerIds(boat);
+  const all = boat.jet.impellers;
+  if (shown.length === all.length) return '';
+  const label = (id: string) => all.find((i) => i.id === id)?.label ?? id;
+  return `The chart draws the ${shown.length} impellers around the fitted one (${label(shown[0])} to ${label(shown[shown.length - 1])}) of the jet's ${all.length}; the table lists every one.`;
+}
+
 /** Match chart for one boat in a box. `engines` overrides the site curve (upgrade sheets). */
 export function boatChart(args: { boat: Boat; result: BoatResult; box: Box; sizePt: number; powerUnitFirst: PowerUnit; engines?: readonly EngineSeries[]; points?: 'all' | 'fitted'; where: string }): MatchChart {
-  const { boat, result } = args;
+  const { boat } = args;
+  // A jet with many impellers: the chart draws those around the fitted one, styled as on every sheet.
+  const ids = new Set(chartImpellerIds(boat));
+  const result = { ...args.result, alternatives: args.result.alternatives.filter((a) => ids.has(a.impellerId)) };
   const engines = args.engines ?? engineSeries({ family: boatFamily(boat), ambient: boat.site.ambient });
-  const impellers = impellerSeries({ jet: boat.jet, driveLine: boat.driveLine, waterDensityKgM3: boat.water.densityKgM3 });
+  const impellers = impellerSeries({ jet: boat.jet, driveLine: boat.driveLine, waterDensityKgM3: boat.water.densityKgM3 }).filter((s) => ids.has(s.id));
   const shown = args.points === 'fitted' ? result.alternatives.filter((a) => a.fitted === 'yes') : result.alternatives;
   const d = boatDomains(result, engines.flatMap((e) => [e.site, ...(e.reference ? [e.reference] : [])]));
   return matchChart({

@@ -115,7 +115,7 @@ export function matchChart(args: MatchChartArgs): MatchChart {
   const bounds = { x: area.x + 0.4, y: area.y + 0.4, width: area.width - 0.8, height: area.height - 0.8 };
   const placed = placeLabels([...pointLabels, ...labels], { bounds, obstacles, where: args.where });
   const strip = { x: area.x, y: args.box.y, width: area.width, height: area.y - args.box.y };
-  const placedTop = placeLabels(topLabels, { bounds: strip, obstacles: [], where: args.where });
+  const placedTop = placeLabels(topLabels, { bounds: strip, obstacles: [], where: args.where, numbersBefore: placed.notes.length });
   const node: SceneNode = {
     type: 'group',
     role: 'match-chart',

@@ -52,25 +52,33 @@ export function label(args: {
   return textNode({ ...rest, weight, colour: args.colour ?? INK });
 }
 
-/** Greedy word wrap to a width (mm). A single word wider than the width is a LayoutError. */
+/** Greedy word wrap to a width (mm). A single word wider than the width is broken between letters. */
 export function wrapLines(args: { text: string; sizePt: number; weight: FontWeight; widthMm: number; where: string }): string[] {
-  const words = args.text.split(/\s+/).filter((w) => w.length > 0);
+  const fits = (t: string) => measureTextMm({ text: t, sizePt: args.sizePt, weight: args.weight }) <= args.widthMm;
+  // A word too wide for the column (a long part number or name without spaces) goes onto as many lines as it needs.
+  const pieces = (word: string): string[] => {
+    if (fits(word)) return [word];
+    const out: string[] = [];
+    let rest = [...word];
+    while (rest.length > 0) {
+      let n = rest.length;
+      while (n > 1 && !fits(rest.slice(0, n).join(''))) n -= 1;
+      out.push(rest.slice(0, n).join(''));
+      rest = rest.slice(n);
+    }
+    return out;
+  };
+  const words = args.text.split(/\s+/).filter((w) => w.length > 0).flatMap(pieces);
   const lines: string[] = [];
   let current = '';
   for (const word of words) {
     const candidate = current === '' ? word : `${current} ${word}`;
-    if (measureTextMm({ text: candidate, sizePt: args.sizePt, weight: args.weight }) <= args.widthMm) {
+    if (fits(candidate)) {
       current = candidate;
       continue;
     }
-    if (current === '') {
-      throw new LayoutError(args.where, `the word "${word}" is wider than the ${args.widthMm.toFixed(1)} mm column; shorten it`);
-    }
-    lines.push(current);
+    if (current !== '') lines.push(current);
     current = word;
-    if (measureTextMm({ text: current, sizePt: args.sizePt, weight: args.weight }) > args.widthMm) {
-      throw new LayoutError(args.where, `the word "${word}" is wider than the ${args.widthMm.toFixed(1)} mm column; shorten it`);
-    }
   }
   if (current !== '') lines.push(current);
   return lines;

@@ -5,6 +5,7 @@
 import type { SiteConfig } from '../../data/types.ts';
 import type { SceneNode } from '../../scene/types.ts';
 import { type Block, linePitchMm, paragraph, label, ascentMm } from './block.ts';
+import { splittable, type Flowable } from './flow.ts';
 import { STROKE, WARN, INK, stroke } from './style.ts';
 
 /** Built-in cautions, in the order printed: sea-trial confirmation, maximum rpm, who does the work. */
@@ -38,6 +39,9 @@ export function cautionsBlock(args: {
   sizePt: number;
   headingPt: number;
   where: string;
+  /** Print only cautions [from, to) of cautionsFor(site); a block that does not start at the first is headed "Cautions (continued)". */
+  from?: number;
+  to?: number;
 }): Block {
   const barMm = 1.2;
   const indentMm = barMm + 2;
@@ -47,7 +51,7 @@ export function cautionsBlock(args: {
   const heading = label({
     x: innerX,
     y: args.y + ascentMm(args.headingPt, 'bold'),
-    text: 'Cautions',
+    text: (args.from ?? 0) > 0 ? 'Cautions (continued)' : 'Cautions',
     sizePt: args.headingPt,
     weight: 'bold',
     colour: INK,
@@ -57,7 +61,7 @@ export function cautionsBlock(args: {
   nodes.push(heading);
   let cursor = args.y + linePitchMm(args.headingPt, 'bold');
   const gap = linePitchMm(args.sizePt) * 0.25;
-  for (const text of cautionsFor(args.site)) {
+  for (const text of cautionsFor(args.site).slice(args.from ?? 0, args.to)) {
     const p = paragraph({
       x: innerX,
       y: cursor,
@@ -82,4 +86,9 @@ export function cautionsBlock(args: {
     stroke: stroke(WARN, STROKE.hairline),
   });
   return { nodes: [{ type: 'group', role: 'cautions', children: nodes }], heightMm };
+}
+
+/** The cautions block as a part that splits between cautions (over a column or page break). */
+export function cautionsFlow(args: { site: SiteConfig; sizePt: number; headingPt: number; where: string }): Flowable {
+  return splittable(cautionsFor(args.site).length, (from, to, at) => cautionsBlock({ ...args, ...at, from, to }));
 }

@@ -77,15 +77,16 @@ export function sheetFrame(args: {
   const footerTop = safe.y + safe.height - footerPitch;
   const footerBaseline = footerTop + ascentMm(type.small);
   const slotMm = Math.min(PAGE_SLOT_WIDTH_MM, safe.width * 0.2);
-  // The long form where it fits; the cautions block carries the sea-trial advice anyway.
-  const footerText = [
+  // The long form where it fits; the cautions block carries the sea-trial advice anyway. On a narrow card
+  // the short form, and a data revision too long even for that is shortened with an ellipsis.
+  const roomMm = safe.width - slotMm - 2;
+  const forms = [
     `Issued ${args.dateIso} · Data revision ${args.site.dataRevision} · Estimates only: confirm by sea trial`,
     `Issued ${args.dateIso} · Data revision ${args.site.dataRevision}`,
-  ].find((t) => measureTextMm({ text: t, sizePt: type.small, weight: 'regular' }) <= safe.width - slotMm - 2) ?? `Issued ${args.dateIso} · Data revision ${args.site.dataRevision}`;
+    `${args.dateIso} · Rev. ${args.site.dataRevision}`,
+  ];
+  const footerText = forms.find((t) => measureTextMm({ text: t, sizePt: type.small, weight: 'regular' }) <= roomMm) ?? fitText({ text: forms[2], sizePt: type.small, weight: 'regular', maxWidthMm: roomMm, minSizePt: type.small }).text;
   const footer = label({ x: safe.x, y: footerBaseline, text: footerText, sizePt: type.small, colour: INK_SOFT, role: 'revision-line', where: args.where });
-  if (footer.widthMm > safe.width - slotMm - 2) {
-    throw new LayoutError(args.where, `the footer line is ${footer.widthMm.toFixed(0)} mm, wider than the ${(safe.width - slotMm).toFixed(0)} mm it has; shorten the data revision`);
-  }
   const footerRuleY = footerTop - 1.5;
   nodes.push(rule(safe.x, right, footerRuleY, 'footer-rule'), footer, {
     type: 'rect',

@@ -83,7 +83,7 @@ function farSpot(args: { x: number; y: number; w: number; h: number; bounds: Box
 }
 
 /** Places labels in order (earlier = higher priority); see the file comment for the rules. */
-export function placeLabels(requests: readonly LabelRequest[], opts: { bounds: Box; obstacles: readonly Box[]; where: string }): PlacedLabels {
+export function placeLabels(requests: readonly LabelRequest[], opts: { bounds: Box; obstacles: readonly Box[]; where: string; /** Callout numbers continue after this many (a chart placing labels in two areas). */ numbersBefore?: number }): PlacedLabels {
   const occupied: Box[] = [...opts.obstacles];
   const nodes: SceneNode[] = [];
   const notes: { number: number; key: string; text: string }[] = [];
@@ -112,7 +112,7 @@ export function placeLabels(requests: readonly LabelRequest[], opts: { bounds: B
       emit(req, req.text, spot, weight, 'direct-label');
       continue;
     }
-    const number = notes.length + 1;
+    const number = (opts.numbersBefore ?? 0) + notes.length + 1;
     const numText = String(number);
     const nw = measureTextMm({ text: numText, sizePt: req.sizePt, weight: 'bold' });
     const numSpot = findSpot({ x: req.x, y: req.y, w: nw, h, prefer, bounds: opts.bounds, occupied }) ?? farSpot({ x: req.x, y: req.y, w: nw, h, bounds: opts.bounds, occupied });

@@ -1,12 +1,14 @@
 /**
  * Tables with columns measured from their real text: each column is as wide as its widest cell plus
- * padding. A table too wide at the sheet's smallest type size shortens the text of its `shorten` columns
- * (names and labels) with an ellipsis and says so in a note under it; when that is not enough either,
- * LayoutError (never clipped). Alternate rows get a light tint so a row can be followed across a wide sheet.
+ * padding. A table too wide shrinks its type to the sheet's smallest size; then its headers and `wrap`
+ * columns break onto more lines at spaces; then the text of its `shorten` columns (names and labels) is
+ * shortened with an ellipsis and a note under it says so; when even that is not enough (figures alone
+ * wider than the paper), LayoutError (never clipped). A long table can be drawn in parts (rows split over
+ * columns or pages) with one set of widths: see splitTable. Alternate rows get a light tint so a row can be followed across a wide sheet.
  */
 import type { Colour, FontWeight, SceneNode } from '../../scene/types.ts';
 import { fitText, measureTextMm } from '../../scene/text.ts';
-import { ascentMm, label, linePitchMm, paragraph, type Block } from './block.ts';
+import { ascentMm, label, linePitchMm, paragraph, wrapLines, type Block } from './block.ts';
 import { LayoutError } from './errors.ts';
 import { INK, STROKE, stroke } from './style.ts';
 
@@ -17,6 +19,8 @@ export interface Column {
   readonly shorten?: boolean;
   /** A column the table can do without (its figures are elsewhere): left out, with a note, before shortening. */
   readonly optional?: boolean;
+  /** Words and sentences: may break onto more lines (at spaces) when the table is too wide at its smallest type. */
+  readonly wrap?: boolean;
 }
 
 /** The note a table prints under itself when it shortened any entry. */
@@ -55,11 +59,11 @@ function columnWidths(columns: readonly Column[], rows: readonly (readonly Cell[
 export function table(args: TableArgs): Block & { widthMm: number; sizePt: number } {
   const optional = args.columns.flatMap((c, i) => (c.optional ? [i] : []));
   if (optional.length === 0 || (args.groups ?? []).length > 0) return fittedTable(args);
-  const fullMm = columnWidths(args.columns, args.rows, args.minSizePt, args.header ?? true).reduce((a, b) => a + b, 0);
+  const fullMm = columnWidths(args.columns, args.measureRows ?? args.rows, args.minSizePt, args.header ?? true).reduce((a, b) => a + b, 0);
   if (fullMm <= args.maxWidthMm) return fittedTable(args);
   const keep = (_: unknown, i: number) => !optional.includes(i);
   const left = `Left out to fit the page: ${optional.map((i) => args.columns[i].header).join(', ')}.`;
-  return fittedTable({ ...args, columns: args.columns.filter(keep), rows: args.rows.map((r) => r.filter(keep)), extraNote: left });
+  return fittedTable({ ...args, columns: args.columns.filter(keep), rows: args.rows.map((r) => r.filter(keep)), ...(args.measureRows ? { measureRows: args.measureRows.map((r) => r.filter(keep)) } : {}), extraNote: left });
 }
 
 interface TableArgs {
@@ -80,10 +84,16 @@ interface TableArgs {
   where: string;
   /** A note printed under the table (columns left out). */
   extraNote?: string;
+  /** The whole table's rows when only some are drawn here (a table split over pages): widths come from them. */
+  measureRows?: readonly (readonly Cell[])[];
+  /** Index of the first row drawn, so the alternate-row tint carries on across a split. */
+  firstRowIndex?: number;
+  /** Leave out the note under the table (a split table prints it under its last part only). */
+  noNote?: boolean;
 }
 
 function fittedTable(args: TableArgs): Block & { widthMm: number; sizePt: number } {
-  for (const row of args.rows) {
+  for (const row of [...args.rows, ...(args.measureRows ?? [])]) {
     if (row.length !== args.columns.length) {
       throw new LayoutError(args.where, `a table row has ${row.length} cells, expected ${args.columns.length}`);
     }
@@ -92,9 +102,12 @@ function fittedTable(args: TableArgs): Block & { widthMm: number; sizePt: number
   if (groups.length > 0 && groups.reduce((a, g) => a + g.span, 0) !== args.columns.length) {
     throw new LayoutError(args.where, `the column groups span ${groups.reduce((a, g) => a + g.span, 0)} columns, expected ${args.columns.length}`);
   }
+  const withHeader = args.header ?? true;
+  // Widths come from every row of the table, also when only some of them are drawn here (a table split
+  // over columns or pages keeps one set of widths).
+  const all = args.measureRows ?? args.rows;
   // A group header wider than its columns widens the group's last column.
-  const measure = (size: number, rows: readonly (readonly Cell[])[]): number[] => {
-    const w = columnWidths(args.columns, rows, size, args.header ?? true);
+  const widen = (w: number[], size: number): number[] => {
     let first = 0;
     for (const g of groups) {
       const need = measureTextMm({ text: g.header, sizePt: size, weight: 'bold' }) + 2 * PAD_MM;
@@ -104,11 +117,13 @@ function fittedTable(args: TableArgs): Block & { widthMm: number; sizePt: number
     }
     return w;
   };
+  const measure = (size: number, rows: readonly (readonly Cell[])[]): number[] => widen(columnWidths(args.columns, rows, size, withHeader), size);
   let sizePt = args.sizePt;
   let rows = args.rows;
-  let widths = measure(sizePt, rows);
+  let widths = measure(sizePt, all);
   let total = widths.reduce((a, b) => a + b, 0);
   let shortened = false;
+  let wrapping = false;
   if (total > args.maxWidthMm) {
     // Text width is proportional to size and padding is fixed, so one step lands on the size that fits
     // (rounded down to 0.1 pt).
@@ -116,14 +131,25 @@ function fittedTable(args: TableArgs): Block & { widthMm: number; sizePt: number
     sizePt = Math.floor(((sizePt * (args.maxWidthMm - padTotal)) / (total - padTotal)) * 10) / 10;
     if (!(sizePt >= args.minSizePt)) {
       sizePt = args.minSizePt;
-      const short = shortenColumns({ columns: args.columns, rows, widths: measure(sizePt, rows), maxWidthMm: args.maxWidthMm, sizePt, header: args.header ?? true });
-      if (!short) {
-        throw new LayoutError(args.where, `the table needs ${total.toFixed(0)} mm at ${args.sizePt} pt but has ${args.maxWidthMm.toFixed(0)} mm, and would need type under ${args.minSizePt} pt; use wider paper or fewer columns`);
+      // At the smallest size, headers and `wrap` columns break onto more lines (at spaces) before any
+      // name is shortened.
+      const wrapped = wrappedWidths({ columns: args.columns, rows: all, sizePt, header: withHeader, maxWidthMm: args.maxWidthMm, natural: measure(sizePt, all) });
+      if (wrapped) {
+        widths = wrapped;
+        wrapping = true;
+      } else {
+        const short = shortenColumns({ columns: args.columns, rows: all, widths: measure(sizePt, all), maxWidthMm: args.maxWidthMm, sizePt, header: withHeader });
+        if (!short) {
+          throw new LayoutError(args.where, `the table needs ${total.toFixed(0)} mm at ${args.sizePt} pt but has ${args.maxWidthMm.toFixed(0)} mm, and would need type under ${args.minSizePt} pt; use wider paper or fewer columns`);
+        }
+        const index = new Map(all.map((r, i) => [r, i]));
+        rows = rows.map((r) => short[index.get(r) ?? 0]);
+        shortened = true;
+        widths = measure(sizePt, short);
       }
-      rows = short;
-      shortened = true;
+    } else {
+      widths = measure(sizePt, all);
     }
-    widths = measure(sizePt, rows);
     total = widths.reduce((a, b) => a + b, 0);
     if (total > args.maxWidthMm + 1e-6) {
       throw new LayoutError(args.where, `the table needs ${total.toFixed(0)} mm at ${sizePt} pt with names shortened but has ${args.maxWidthMm.toFixed(0)} mm; use wider paper or fewer columns`);
@@ -134,31 +160,42 @@ function fittedTable(args: TableArgs): Block & { widthMm: number; sizePt: number
     widths = widths.map((w) => w + extra);
     total = args.maxWidthMm;
   }
-  const rowPitch = linePitchMm(sizePt, 'bold') + 0.6;
+  const linePitch = linePitchMm(sizePt, 'bold');
   const baselineOffset = 0.3 + ascentMm(sizePt, 'bold');
   const nodes: SceneNode[] = [];
   const lefts = widths.map((_, i) => args.x + widths.slice(0, i).reduce((a, b) => a + b, 0));
-  const emitRow = (cells: readonly Cell[], top: number, header: boolean): void => {
+  // Each cell's lines: one line unless the table wraps, then as many as its column's width needs.
+  const cellLines = (cell: { text: string; weight: FontWeight }, c: number, header: boolean): string[] =>
+    wrapping && (header || args.columns[c].wrap) && measureTextMm({ text: cell.text, sizePt, weight: cell.weight }) > widths[c] - 2 * PAD_MM + 1e-9
+      ? wrapLines({ text: cell.text, sizePt, weight: cell.weight, widthMm: widths[c] - 2 * PAD_MM, where: args.where })
+      : [cell.text];
+  const emitRow = (cells: readonly Cell[], top: number, header: boolean): number => {
+    let most = 1;
     cells.forEach((raw, c) => {
       const cell = header ? { text: cellText(raw).text, weight: 'bold' as const, colour: INK } : cellText(raw);
       const right = args.columns[c].align === 'right';
-      nodes.push(
-        label({
-          x: right ? lefts[c] + widths[c] - PAD_MM : lefts[c] + PAD_MM,
-          y: top + baselineOffset,
-          text: cell.text,
-          sizePt,
-          weight: cell.weight,
-          colour: cell.colour,
-          anchor: right ? 'end' : 'start',
-          role: header ? 'table-header' : 'table-cell',
-          where: args.where,
-        }),
+      const lines = cellLines(cell, c, header);
+      most = Math.max(most, lines.length);
+      lines.forEach((text, i) =>
+        nodes.push(
+          label({
+            x: right ? lefts[c] + widths[c] - PAD_MM : lefts[c] + PAD_MM,
+            y: top + baselineOffset + i * linePitch,
+            text,
+            sizePt,
+            weight: cell.weight,
+            colour: cell.colour,
+            anchor: right ? 'end' : 'start',
+            role: header ? 'table-header' : 'table-cell',
+            where: args.where,
+          }),
+        ),
       );
     });
+    return most * linePitch + 0.6;
   };
-  const withHeader = args.header ?? true;
   const groupRows = groups.length > 0 ? 1 : 0;
+  const rowPitch = linePitch + 0.6;
   let first = 0;
   for (const g of groups) {
     if (g.header !== '') {
@@ -169,21 +206,48 @@ function fittedTable(args: TableArgs): Block & { widthMm: number; sizePt: number
     first += g.span;
   }
   const headerTop = args.y + groupRows * rowPitch;
-  if (withHeader) emitRow(args.columns.map((c) => c.header), headerTop, true);
-  const bodyTop = withHeader ? headerTop + rowPitch : headerTop;
+  const bodyTop = withHeader ? headerTop + emitRow(args.columns.map((c) => c.header), headerTop, true) : headerTop;
+  let top = bodyTop;
   rows.forEach((row, r) => {
-    const top = bodyTop + r * rowPitch;
-    if (r % 2 === 1) nodes.push({ type: 'rect', role: 'table-zebra', x: args.x, y: top, width: total, height: rowPitch, fill: { colour: ZEBRA } });
-    emitRow(row, top, false);
+    const at = nodes.length;
+    const height = emitRow(row, top, false);
+    if ((r + (args.firstRowIndex ?? 0)) % 2 === 1) nodes.splice(at, 0, { type: 'rect', role: 'table-zebra', x: args.x, y: top, width: total, height, fill: { colour: ZEBRA } });
+    top += height;
   });
-  const tableMm = rowPitch * (rows.length + (withHeader ? 1 : 0) + groupRows);
+  const tableMm = top - args.y;
   const line = (y: number, w: number): SceneNode => ({ type: 'path', role: 'table-rule', segments: [{ op: 'M', x: args.x, y }, { op: 'L', x: args.x + total, y }], stroke: stroke(INK, w) });
   nodes.push(line(args.y, STROKE.rule), ...(withHeader ? [line(bodyTop, STROKE.rule)] : []), line(args.y + tableMm, STROKE.rule));
-  const noteText = [args.extraNote ?? '', shortened ? SHORTENED_NOTE : ''].filter((t) => t !== '').join(' ');
+  const noteText = args.noNote ? '' : [args.extraNote ?? '', shortened ? SHORTENED_NOTE : ''].filter((t) => t !== '').join(' ');
   const note = noteText ? paragraph({ x: args.x, y: args.y + tableMm + 0.5, widthMm: args.maxWidthMm, text: noteText, sizePt: args.minSizePt, role: 'shortened-note', where: args.where }) : undefined;
   if (note) nodes.push(...note.nodes);
   const heightMm = note ? tableMm + 0.5 + note.heightMm : tableMm;
   return { nodes: [{ type: 'group', role: args.role ?? 'table', children: nodes }], heightMm, widthMm: total, sizePt };
+}
+
+/** Width (mm) of the widest single word of a text. */
+function widestWordMm(text: string, sizePt: number, weight: FontWeight): number {
+  return Math.max(0, ...text.split(/\s+/).filter((w) => w !== '').map((w) => measureTextMm({ text: w, sizePt, weight })));
+}
+
+/**
+ * Column widths when headers and `wrap` columns may break at spaces, or undefined when even their widest
+ * words leave the table too wide. Every column starts at the least it needs (its widest unbreakable
+ * text); the room left goes to the columns that would wrap, in proportion to what each lacks.
+ */
+function wrappedWidths(args: { columns: readonly Column[]; rows: readonly (readonly Cell[])[]; sizePt: number; header: boolean; maxWidthMm: number; natural: readonly number[] }): number[] | undefined {
+  const least = args.columns.map((col, c) => {
+    let w = args.header ? widestWordMm(col.header, args.sizePt, 'bold') : 0;
+    for (const row of args.rows) {
+      const cell = cellText(row[c]);
+      w = Math.max(w, col.wrap ? widestWordMm(cell.text, args.sizePt, cell.weight) : measureTextMm({ text: cell.text, sizePt: args.sizePt, weight: cell.weight }));
+    }
+    return Math.min(w + 2 * PAD_MM, args.natural[c]);
+  });
+  const spare = args.maxWidthMm - least.reduce((a, b) => a + b, 0);
+  if (spare < 0) return undefined;
+  const lack = least.map((w, c) => args.natural[c] - w);
+  const lackTotal = lack.reduce((a, b) => a + b, 0);
+  return least.map((w, c) => (lackTotal > 0 ? w + (spare * lack[c]) / lackTotal : w));
 }
 
 /**

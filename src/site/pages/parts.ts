@@ -55,7 +55,9 @@ export function downloads(sheet: SheetView, root: string): SafeHtml {
   return html`<p class="downloads">Download ${sheet.title}:
 <a href="${root}${d.pdf}" download>PDF</a>
 <a href="${root}${d.svg}" download>SVG</a>
-<a href="${root}${d.png}" download>PNG (150 dpi)</a></p>`;
+<a href="${root}${d.png}" download>PNG (150 dpi)</a>${(sheet.morePages ?? []).map((p, i) => html`
+<a href="${root}${p.downloads.svg}" download>SVG page ${i + 2}</a>
+<a href="${root}${p.downloads.png}" download>PNG page ${i + 2}</a>`)}</p>`;
 }
 
 /**
@@ -67,6 +69,7 @@ export function sheetFigure(sheet: SheetView, root: string): SafeHtml {
   const descId = `desc-${sheet.slug}`;
   return html`<figure class="sheet" id="sheet-${sheet.slug}" data-sheet-kind="${sheet.kind}" style="page: ${sheet.printPage}" aria-describedby="${descId}">
 <div class="sheet-art">${trustedHtml(sheet.svgInline())}</div>
+${(sheet.morePages ?? []).map((p) => html`<div class="sheet-art sheet-page">${trustedHtml(p.svgInline())}</div>`)}
 <figcaption><span class="sheet-title">${sheet.title}</span>
 <details class="text-alternative"><summary>Chart in words</summary><p id="${descId}">${sheet.description}</p></details>
 ${downloads(sheet, root)}</figcaption>

@@ -1,0 +1,132 @@
+/**
+ * Flowing a sheet's parts over columns and pages: parts are laid top to bottom in the first slot (a
+ * column of a page); a part that does not fit what is left of a slot either splits (a table by rows, the
+ * cautions by paragraph: the part that fits stays, the rest goes on) or moves whole to the next slot. The
+ * slots are the page's columns, then the next page's. A part taller than an empty slot that cannot split
+ * is a LayoutError (nothing inside the documented limits is).
+ */
+import type { Box, SceneNode } from '../../scene/types.ts';
+import type { Block } from './block.ts';
+import { LayoutError } from './errors.ts';
+import type { SheetFrame } from './frame.ts';
+import type { Part } from './stack.ts';
+
+export interface Flowable {
+  readonly layout: Part;
+  /**
+   * The most of the part that fits in maxHeightMm and the rest (to lay in the next slot), or undefined
+   * when not even its first piece fits.
+   */
+  readonly split?: (at: { x: number; y: number; widthMm: number }, maxHeightMm: number) => { head: Block; rest: Flowable } | undefined;
+  /** Start this part at the top of a new slot (the advice column of a landscape card). */
+  readonly breakBefore?: boolean;
+  /** Move whole to the next slot rather than split, when it fits there whole (tables). */
+  readonly keepTogether?: boolean;
+}
+
+/** A part that never splits. */
+export const whole = (layout: Part, breakBefore = false): Flowable => ({ layout, breakBefore });
+
+export interface FlowedSlot {
+  readonly nodes: SceneNode[];
+  readonly bottomMm: number;
+}
+
+/**
+ * Lays the parts into slots; slot(i) gives the i-th slot's box (page = i div columns). Returns what went
+ * into each slot used, in order.
+ */
+export function flow(args: { slot: (index: number) => Box; gapMm: number; parts: readonly Flowable[]; where: string; maxSlots?: number }): FlowedSlot[] {
+  const maxSlots = args.maxSlots ?? 16;
+  const slots: { nodes: SceneNode[]; bottomMm: number; empty: boolean }[] = [];
+  let index = 0;
+  const open = (): { box: Box; slot: (typeof slots)[number] } => {
+    while (slots.length <= index) {
+      const box = args.slot(slots.length);
+      slots.push({ nodes: [], bottomMm: box.y, empty: true });
+    }
+    return { box: args.slot(index), slot: slots[index] };
+  };
+  const next = (): void => {
+    index += 1;
+    if (index >= maxSlots) throw new LayoutError(args.where, `the content needs more than ${maxSlots} columns or pages; use larger paper`);
+  };
+  for (const original of args.parts) {
+    let part: Flowable = original;
+    if (part.breakBefore && !open().slot.empty) next();
+    for (;;) {
+      const { box, slot } = open();
+      const y = slot.empty ? box.y : slot.bottomMm + args.gapMm;
+      const at = { x: box.x, y, widthMm: box.width };
+      const room = box.y + box.height - y;
+      const block = part.layout(at);
+      if (block.heightMm <= room + 1e-6) {
+        slot.nodes.push(...block.nodes);
+        slot.bottomMm = y + block.heightMm;
+        slot.empty = false;
+        break;
+      }
+      // A part that would fit whole at the top of the next slot moves there rather than split (a table
+      // stays together where it can).
+      const fitsNext = part.keepTogether === true && block.heightMm <= args.slot(index + 1).height + 1e-6;
+      const piece = slot.empty || !fitsNext ? part.split?.(at, room) : undefined;
+      if (piece) {
+        slot.nodes.push(...piece.head.nodes);
+        slot.bottomMm = y + piece.head.heightMm;
+        slot.empty = false;
+        part = piece.rest;
+        next();
+        continue;
+      }
+      if (!slot.empty) {
+        next();
+        continue;
+      }
+      throw new LayoutError(args.where, `a part of the sheet is ${(block.heightMm - room).toFixed(1)} mm taller than a whole page; use larger paper`);
+    }
+  }
+  return slots.map(({ nodes, bottomMm }) => ({ nodes, bottomMm }));
+}
+
+/**
+ * A list of pieces (table rows, paragraphs) as a part that splits between pieces: draw(from, to, at)
+ * lays pieces [from, to) out (to = count: the last part, which carries any note under it).
+ */
+export function splittable(count: number, draw: (from: number, to: number, at: { x: number; y: number; widthMm: number }) => Block, from = 0, keepTogether = false): Flowable {
+  return {
+    keepTogether,
+    layout: (at) => draw(from, count, at),
+    split: (at, maxHeightMm) => {
+      // The most pieces that fit, at least one, and never all (then the part would fit whole).
+      let best = 0;
+      for (let to = from + 1; to < count; to++) {
+        if (draw(from, to, at).heightMm <= maxHeightMm + 1e-6) best = to;
+        else break;
+      }
+      if (best === 0) return undefined;
+      return { head: draw(from, best, at), rest: splittable(count, draw, best, keepTogether) };
+    },
+  };
+}
+
+/**
+ * Flows parts over the content box of a sheet's pages, in `columns` columns per page (gap columnGapMm);
+ * frame(n) is the n-th page's frame (0-based). Returns each page used with its frame and content.
+ */
+export function flowPages(args: { frame: (page: number) => SheetFrame; columns?: number; columnGapMm?: number; gapMm: number; parts: readonly Flowable[]; where: string }): { frame: SheetFrame; nodes: SceneNode[] }[] {
+  const columns = args.columns ?? 1;
+  const gap = args.columnGapMm ?? 5;
+  const frames: SheetFrame[] = [];
+  const frameOf = (page: number): SheetFrame => {
+    while (frames.length <= page) frames.push(args.frame(frames.length));
+    return frames[page];
+  };
+  const slot = (i: number): Box => {
+    const box = frameOf(Math.floor(i / columns)).contentBox;
+    const width = (box.width - gap * (columns - 1)) / columns;
+    return { x: box.x + (i % columns) * (width + gap), y: box.y, width, height: box.height };
+  };
+  const slots = flow({ slot, gapMm: args.gapMm, parts: args.parts, where: args.where });
+  const pages = Math.ceil(slots.length / columns);
+  return Array.from({ length: pages }, (_, p) => ({ frame: frameOf(p), nodes: slots.slice(p * columns, (p + 1) * columns).flatMap((s) => s.nodes) }));
+}

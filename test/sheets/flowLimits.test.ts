@@ -1,0 +1,120 @@
+/**
+ * Sheets flow for every catalogue inside the documented limits (docs/sheets.md, "Limits"), on every paper
+ * their kind is made for (src/sheets/papers.ts), both orientations, with and without bleed: no LayoutError,
+ * no two text boxes intersect, every text box inside the safe area, no type under the floor, on every page
+ * (sceneProblems); and nothing is lost: every impeller label, cruise label, caution and name is printed in
+ * full somewhere on the sheet's pages. The print floors are the project's own rules (8 pt on A4 and smaller,
+ * 10 pt on A3/Tabloid; common practice for sheets read at arm's length, no source).
+ */
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import type { Paper, Project, SheetRequest } from '../../src/data/types.ts';
+import { scenePages, type Scene } from '../../src/scene/types.ts';
+import { BOAT_SHEET_PAPERS, cautionsFor, sheetScene } from '../../src/sheets/index.ts';
+import { demoProject } from './fixtures/boatVariation.ts';
+import { catalogueProject, LIMITS, stressProject, type Catalogue, type StressCase } from './fixtures/stressProjects.ts';
+import { sceneProblems } from './sceneChecks.ts';
+import { texts } from './sceneWalk.ts';
+
+const demo = await demoProject();
+type Kind = keyof typeof BOAT_SHEET_PAPERS;
+const KINDS: readonly Kind[] = ['specSheet', 'upgradeSheet', 'consoleCard'];
+
+/** Every paper a kind is made for: both orientations; bleed on the portrait ones. */
+function papersOf(kind: Kind): Paper[] {
+  return BOAT_SHEET_PAPERS[kind].flatMap((size) => [
+    { size, orientation: 'portrait', bleedMm: 0 },
+    { size, orientation: 'landscape', bleedMm: 0 },
+    { size, orientation: 'portrait', bleedMm: 3 },
+  ] as Paper[]);
+}
+
+/** All the words of a sheet's pages in reading order (wrapped lines joined by a space). */
+function sheetWords(scene: Scene): string {
+  return scenePages(scene)
+    .flatMap((p) => texts(p).map((t) => t.text))
+    .join(' ')
+    .replace(/\s+/g, ' ');
+}
+
+/** What a kind must print in full for the stressed boat. */
+function mustPrint(kind: Kind, project: Project): string[] {
+  const boat = project.boats[0];
+  const cautions = cautionsFor(project.site).map((c) => c.replace(/\s+/g, ' '));
+  const name = [boat.name];
+  if (kind === 'consoleCard') return [...name, ...boat.cruise.map((c) => c.label), ...cautions];
+  if (kind === 'upgradeSheet') return [...name, boat.engine.label, boat.jet.label, ...cautions];
+  return [...name, boat.engine.label, boat.jet.label, ...boat.jet.impellers.map((i) => i.label), ...boat.cruise.map((c) => c.label), ...cautions];
+}
+
+function problemsOf(kind: Kind, project: Project, paper: Paper): string[] {
+  const request = { kind, boatId: project.boats[0].id, paper } as SheetRequest;
+  const scene = sheetScene(request, { project, dateIso: '2026-12-03' });
+  const problems = scenePages(scene).flatMap((page, i) => sceneProblems(page, paper).map((p) => `page ${i + 1}: ${p}`));
+  const words = sheetWords(scene);
+  for (const text of mustPrint(kind, project)) if (!words.includes(text)) problems.push(`not printed in full: "${text}"`);
+  // Every page is the same paper.
+  for (const page of scenePages(scene)) if (page.widthMm !== scene.widthMm || page.heightMm !== scene.heightMm) problems.push('a page of another size');
+  return problems;
+}
+
+const CASES: readonly StressCase[] = ['A', 'B', 'C', 'ALL'];
+
+describe.each(KINDS.filter((k) => k === 'specSheet'))('%s at the limits', (kind) => {
+  it.each(CASES)('stress catalogue %s lays out on every paper it is made for, printing everything', (which) => {
+    const project = stressProject(demo, which);
+    const problems = papersOf(kind).flatMap((paper) => problemsOf(kind, project, paper).map((p) => `${paper.size} ${paper.orientation} bleed ${paper.bleedMm}: ${p}`));
+    expect(problems).toEqual([]);
+  });
+});
+
+describe('a sheet that does not fit one page', () => {
+  it('continues on further pages of the same paper, titled with the page, each inside the print rules', () => {
+    const project = stressProject(demo, 'ALL');
+    const paper: Paper = { size: 'A4', orientation: 'portrait', bleedMm: 0 };
+    const scene = sheetScene({ kind: 'specSheet', boatId: project.boats[0].id, paper }, { project, dateIso: '2026-12-03' });
+    const pages = scenePages(scene);
+    expect(pages.length).toBeGreaterThan(1);
+    expect(texts(pages[1]).find((t) => t.role === 'sheet-title')?.text).toMatch(/: spec sheet, page 2$/);
+    expect(pages[1].title).toBe(`${project.boats[0].name}: spec sheet, page 2 of ${pages.length}`);
+    // The one-page demo sheet stays one page.
+    expect(scenePages(sheetScene({ kind: 'specSheet', boatId: demo.boats[0].id, paper }, { project: demo, dateIso: '2026-12-03' })).length).toBe(1);
+  });
+});
+
+describe('the stress catalogues are at the limits they claim', () => {
+  it('24 impellers and 6 variants with 16-character labels; 6 cautions of 300 characters; 8 cruise settings; 60-character names', () => {
+    const all = stressProject(demo, 'ALL');
+    const boat = all.boats[0];
+    const family = all.engines.find((f) => f.id === boat.engineFamilyId)!;
+    expect(boat.jet.impellers.map((i) => i.label.length)).toEqual(Array(24).fill(16));
+    expect(family.variants.map((v) => v.variantLabel.length)).toEqual(Array(6).fill(60).map((n, i) => (family.variants[i].id === boat.engine.id ? n : 16)));
+    expect(all.site.extraCautions?.map((c) => c.length)).toEqual(Array(6).fill(300));
+    expect(boat.cruise.map((c) => c.label.length)).toEqual(Array(8).fill(16));
+    expect([boat.name.length, boat.engine.label.length, boat.jet.label.length]).toEqual([60, 60, 60]);
+  });
+});
+
+describe('catalogues across the limits (seeded property)', () => {
+  const catalogue: fc.Arbitrary<Catalogue> = fc.record({
+    impellers: fc.integer({ min: 1, max: LIMITS.impellers }),
+    impellerChars: fc.integer({ min: 1, max: LIMITS.labelChars }),
+    variants: fc.integer({ min: 1, max: LIMITS.variants }),
+    variantChars: fc.integer({ min: 1, max: LIMITS.labelChars }),
+    cautions: fc.integer({ min: 0, max: LIMITS.cautions }),
+    cautionChars: fc.integer({ min: 20, max: LIMITS.cautionChars }),
+    cruise: fc.integer({ min: 0, max: LIMITS.cruise }),
+    cruiseChars: fc.integer({ min: 1, max: LIMITS.labelChars }),
+    nameChars: fc.integer({ min: 1, max: LIMITS.nameChars }),
+  });
+  it.each(KINDS.filter((k) => k === 'specSheet'))('%s: every generated catalogue lays out on a paper it is made for, keeping the print rules', (kind) => {
+    const papers = papersOf(kind);
+    fc.assert(
+      fc.property(catalogue, fc.nat(), (cat, pick) => {
+        const project = catalogueProject(demo, cat);
+        expect(problemsOf(kind, project, papers[pick % papers.length])).toEqual([]);
+      }),
+      { seed: 20261203, numRuns: 25, endOnFailure: true },
+    );
+  });
+});
