@@ -10,6 +10,7 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { GUIDES, guideHref } from '../src/site/guides.ts';
 import { pdfPages } from './reliability/outputTree.ts';
 
 const REPO = fileURLToPath(new URL('../', import.meta.url));
@@ -116,6 +117,8 @@ describe('npx matchbook start, then npx matchbook build, in the shop folder', ()
     // The pages come from templates inside node_modules/matchbook (Eleventy skips node_modules by default).
     expect(readFileSync(join(shop, 'out/index.html'), 'utf8')).toContain('Example Runabout');
     expect(existsSync(join(shop, 'out/boats/example-runabout/index.html'))).toBe(true);
+    // The guides are read from node_modules/matchbook/docs, so the package must carry them.
+    for (const guide of GUIDES) expect(existsSync(join(shop, 'out', guideHref(guide.slug))), guide.file).toBe(true);
     const book = pdfPages(join(shop, 'out/books/example-book.pdf'));
     expect(book).toHaveLength(3); // wall chart, spec sheet, console card, as books/example-book.yaml lists
     expect(book.join('\n')).toContain('Example Runabout');
