@@ -3,6 +3,7 @@ import { hpToKw } from '../../units.ts';
 import { resolve, type Registry } from '../references.ts';
 import type { RawBookFile, RawPaper, RawSheet } from '../schema/book.ts';
 import type { Boat, Book, DataError, EngineFamily, JetUnit, Paper, SheetRequest } from '../types.ts';
+import { at } from '../validate.ts';
 import type { YamlSource } from '../yamlSource.ts';
 import { toSite, toWater } from './conditions.ts';
 import type { Normalised } from './shared.ts';
@@ -28,6 +29,21 @@ export function normaliseBook(source: YamlSource, raw: RawBookFile, reg: BookReg
       check({ path: ['sheets', i, 'boat'], id: s.boat, registry: reg.boats, what: 'boats', dir: 'boats' });
     }
   });
+  // One paper per book, unless the book asks for a mix: a stray paper: line is usually a leftover.
+  if (!raw.mixed_paper) {
+    const book = paperWords(raw.paper);
+    raw.sheets.forEach((s, i) => {
+      if (s.paper && paperWords(s.paper) !== book) {
+        errors.push(
+          at(source, ['sheets', i, 'paper'], {
+            expected: `must match the book's paper (${book}); a book prints on one paper size`,
+            found: paperWords(s.paper),
+            fix: 'remove this paper: line, move the sheet to a book of its own, or add mixed_paper: true to the book',
+          }),
+        );
+      }
+    });
+  }
   if (errors.length > 0) return { ok: false, errors, warnings: [] };
   const book: Book = {
     id: raw.id,
@@ -37,6 +53,11 @@ export function normaliseBook(source: YamlSource, raw: RawBookFile, reg: BookReg
     source: { file: source.file },
   };
   return { ok: true, value: book, warnings: [] };
+}
+
+/** "A4 portrait", "4x6 landscape with 3 mm bleed": a paper as the file writes it, for messages. */
+function paperWords(p: RawPaper): string {
+  return `${p.size} ${p.orientation}${p.bleed_mm > 0 ? ` with ${p.bleed_mm} mm bleed` : ''}`;
 }
 
 /** File paper → Paper; "4x6" is the 4 × 6 in card. */

@@ -46,6 +46,8 @@ export const bookFile = () =>
       title: text(),
       audience: z.enum(['shop', 'dealer', 'owner'], { error: 'must be shop, dealer or owner' }),
       paper: paper(),
+      /** A book prints on one paper; a sheet's own paper that differs is refused unless this is true. */
+      mixed_paper: z.boolean({ error: 'must be true or false' }).default(false),
       sheets: z.array(sheet(), { error: 'must be a list of sheets' }).min(1, { error: 'must list at least one sheet' }),
     })
     .meta({ title: 'matchbook chart book', description: 'A chart book for one audience: data/books/<id>.yaml' });
