@@ -25,8 +25,10 @@ Set SOURCE_DATE_EPOCH to fix the date printed on the sheets.
 `,
   check: `Usage: matchbook check [--data DIR]
 
-Checks the definitions in DIR (default: data) without writing anything and lists every problem
-with its file, line, column and field. Exit status 1 when there is a problem.
+Checks the definitions in DIR (default: data) without writing anything: every field, every
+reference, the text the sheet font can print, and the layout of every sheet the build would draw.
+Lists every problem with its file, line, column and field; check OK means build OK.
+Exit status 1 when there is a problem.
 `,
   serve: `Usage: matchbook serve [--data DIR] [--out DIR] [--port N]
 

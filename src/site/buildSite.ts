@@ -8,6 +8,8 @@ import { printedError } from '../data/errors.ts';
 import type { DataError } from '../data/types.ts';
 import { checkOutputFolder, createStaging, discardStaging, swapIn } from './atomicDir.ts';
 import { buildDateIso } from './dateIso.ts';
+import { SheetDrawError } from './errors.ts';
+import { sheetDrawProblem } from './sheetProblems.ts';
 import type { BuildCache } from './renderCache.ts';
 import { createRenderPool, type SheetRenderer } from './renderPool.ts';
 import { writePages } from './runEleventy.ts';
@@ -62,6 +64,8 @@ export async function buildSite(opts: BuildOptions): Promise<BuildOutcome> {
     return { ok: true, counts: { ...counts, pages }, warningsText };
   } catch (error) {
     discardStaging(staging);
+    // `check` lays out the same sheets, so this is rare; it is still said at the definition's line.
+    if (error instanceof SheetDrawError) return { ok: false, errorsText: formatDataErrors([sheetDrawProblem(loaded.project, error)], 'problem'), warningsText };
     throw error;
   } finally {
     if (!opts.renderer) await renderer.close();

@@ -8,10 +8,18 @@
 const USER_FIXABLE = new Set(['LayoutError', 'UnsupportedCharacterError']);
 
 export class SheetDrawError extends Error {
-  constructor(slug: string, cause: Error) {
+  constructor(
+    readonly slug: string,
+    cause: Error,
+  ) {
     super(`sheet ${slug} cannot be drawn: ${cause.message}`, { cause });
     this.name = 'SheetDrawError';
   }
+}
+
+/** A drawing error the user fixes in the data (as opposed to a fault in matchbook). */
+export function isUserFixable(error: unknown): error is Error {
+  return error instanceof Error && USER_FIXABLE.has(error.name);
 }
 
 /** Runs fn; turns the two user-fixable drawing errors into a SheetDrawError naming the sheet. */
@@ -19,7 +27,7 @@ export async function drawingSheet<T>(slug: string, fn: () => T | Promise<T>): P
   try {
     return await fn();
   } catch (error) {
-    if (error instanceof Error && USER_FIXABLE.has(error.name)) throw new SheetDrawError(slug, error);
+    if (isUserFixable(error)) throw new SheetDrawError(slug, error);
     throw error;
   }
 }

@@ -11,12 +11,13 @@
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { loadProject } from '../data/load.ts';
-import type { DataError } from '../data/types.ts';
+import type { DataError, Project } from '../data/types.ts';
 import { BUILT_IN_CAUTIONS } from '../sheets/kit/cautions.ts';
 import { OUTPUT_MARKER } from './atomicDir.ts';
 import { formatDataErrors } from './buildSite.ts';
 import { buildDateIso } from './dateIso.ts';
 import { SheetDrawError } from './errors.ts';
+import { sheetDrawProblem } from './sheetProblems.ts';
 import { unprintableText } from './unprintable.ts';
 import { createBuildCache } from './renderCache.ts';
 import { writeSiteFiles } from './siteFiles.ts';
@@ -50,6 +51,7 @@ export function liveSiteData(opts: LiveSiteOptions): () => Promise<SiteData> {
   };
   return async () => {
     const startMs = performance.now();
+    let project: Project | undefined;
     try {
       const loaded = await loadProject(opts.dataDir);
       report(formatDataErrors(loaded.warnings, 'warning'));
@@ -57,6 +59,7 @@ export function liveSiteData(opts: LiveSiteOptions): () => Promise<SiteData> {
         report(formatDataErrors(loaded.errors, 'problem'));
         return broken(loaded.errors.map(problemView));
       }
+      project = loaded.project;
       const unprintable = unprintableText(loaded.project, { dataDir: opts.dataDir });
       if (unprintable.length > 0) {
         report(formatDataErrors(unprintable, 'problem'));
@@ -70,9 +73,10 @@ export function liveSiteData(opts: LiveSiteOptions): () => Promise<SiteData> {
       report(`rebuilt ${counts.sheets} sheets in ${((performance.now() - startMs) / 1000).toFixed(1)} s\n`);
       return site;
     } catch (error) {
-      if (error instanceof SheetDrawError) {
-        report(`${error.message}\n`);
-        return broken([{ where: '', message: error.message, detail: [] }]);
+      if (error instanceof SheetDrawError && project) {
+        const problem = sheetDrawProblem(project, error);
+        report(formatDataErrors([problem], 'problem'));
+        return broken([problemView(problem)]);
       }
       // A fault in matchbook: say so on the page and in the terminal, and keep serving.
       const message = error instanceof Error ? error.message.split('\n')[0] : String(error);

@@ -1,0 +1,106 @@
+/**
+ * The layout half of `check`, and the words of a sheet that cannot be drawn. `check` lays out every
+ * sheet the build would draw (the same plan, the same scene code, no rendering), so a catalogue that
+ * passes `check` builds. A sheet that cannot be laid out is reported at the definition that asked for
+ * it — the book's sheets[i] entry, the boat file, or for a default wall chart the jet's impellers — with
+ * file:line:column, never only a sheet slug.
+ */
+import { readFileSync } from 'node:fs';
+import { dataError, fieldName } from '../data/errors.ts';
+import type { DataError, Project, SheetRequest } from '../data/types.ts';
+import { parseYaml, type PathSegment } from '../data/yamlSource.ts';
+import { sheetScene } from '../sheets/index.ts';
+import { isUserFixable, type SheetDrawError } from './errors.ts';
+import { planSheets, type SheetPlan } from './planSheets.ts';
+
+const KIND_WORDS: Readonly<Record<SheetRequest['kind'], string>> = {
+  wallChart: 'a wall chart',
+  specSheet: 'a spec sheet',
+  consoleCard: 'a console card',
+  upgradeSheet: 'an upgrade sheet',
+};
+
+export interface SheetProblemOptions {
+  /** Reads a definition file to find the line; defaults to the disk. Undefined when it cannot be read. */
+  readonly readText?: (file: string) => string | undefined;
+}
+
+/** Every sheet of the build laid out; a located error for each one that cannot be. */
+export function layoutProblems(project: Project, opts: SheetProblemOptions & { dateIso: string; plan?: SheetPlan }): DataError[] {
+  const plan = opts.plan ?? planSheets(project);
+  const problems: DataError[] = [];
+  for (const { slug, request } of plan.sheets) {
+    try {
+      sheetScene(request, { project, dateIso: opts.dateIso });
+    } catch (error) {
+      if (!isUserFixable(error)) throw error;
+      problems.push(sheetProblem({ project, plan, slug, request, cause: error, readText: opts.readText }));
+    }
+  }
+  return problems;
+}
+
+/** A SheetDrawError from the build, said at the definition that asked for the sheet. */
+export function sheetDrawProblem(project: Project, error: SheetDrawError, opts: SheetProblemOptions = {}): DataError {
+  const plan = planSheets(project);
+  const planned = plan.sheets.find((s) => s.slug === error.slug);
+  const cause = error.cause instanceof Error ? error.cause : error;
+  if (!planned) return dataError({ file: 'site.yaml', line: 1, column: 1 }, { field: '', expected: `must give a sheet ${error.slug} that can be drawn`, found: cause.message });
+  return sheetProblem({ project, plan, slug: error.slug, request: planned.request, cause, readText: opts.readText });
+}
+
+interface Origin {
+  readonly file: string;
+  readonly path: PathSegment[];
+}
+
+/** Which definition asked for the sheet: a book entry first (its paper is part of the problem), then the boat, then the pairing. */
+function originOf(project: Project, plan: SheetPlan, slug: string, request: SheetRequest): Origin {
+  for (const book of project.books) {
+    const i = (plan.byBook.get(book.id) ?? []).indexOf(slug);
+    if (i >= 0) return { file: book.source.file, path: ['sheets', i] };
+  }
+  if (request.kind !== 'wallChart') {
+    const boat = project.boats.find((b) => b.id === request.boatId);
+    if (boat) return { file: boat.source.file, path: ['name'] };
+  } else {
+    const jet = project.jets.find((j) => j.id === request.jetId);
+    if (jet) return { file: jet.source.file, path: ['impellers'] };
+  }
+  return { file: 'site.yaml', path: [] };
+}
+
+function sheetProblem(args: { project: Project; plan: SheetPlan; slug: string; request: SheetRequest; cause: Error; readText?: SheetProblemOptions['readText'] }): DataError {
+  const { request } = args;
+  const origin = originOf(args.project, args.plan, args.slug, request);
+  const read = args.readText ?? ((file: string) => readText(file));
+  const text = read(origin.file);
+  const parsed = text === undefined ? undefined : parseYaml({ file: origin.file, text });
+  const where = parsed?.ok ? parsed.source.locate(origin.path, { at: 'key' }) : { line: 1, column: 1 };
+  const p = request.paper;
+  const paper = `${p.size === 'Card4x6' ? '4x6' : p.size} ${p.orientation}${p.bleedMm > 0 ? ' with bleed' : ''}`;
+  const about = request.kind === 'wallChart' ? `engine family ${request.engineFamilyId} with jet ${request.jetId}` : `boat ${request.boatId}`;
+  // The cause reads "<part of the sheet>: <what> ; <fix>"; keep the what, offer its fix.
+  const part = (args.cause as { where?: unknown }).where;
+  const message = typeof part === 'string' && args.cause.message.startsWith(`${part}: `) ? args.cause.message.slice(part.length + 2) : args.cause.message;
+  const split = message.lastIndexOf('; ');
+  const found = split > 0 ? message.slice(0, split) : message;
+  const fix = split > 0 ? message.slice(split + 2) : 'shorten the text or use larger paper';
+  return dataError(
+    { file: origin.file, line: where.line, column: where.column },
+    {
+      field: fieldName(origin.path),
+      expected: `asks for ${KIND_WORDS[request.kind]} (${about}, ${paper}; file ${args.slug}) that must fit its paper`,
+      found,
+      fix,
+    },
+  );
+}
+
+function readText(file: string): string | undefined {
+  try {
+    return readFileSync(file, 'utf8');
+  } catch {
+    return undefined;
+  }
+}

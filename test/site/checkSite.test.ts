@@ -1,0 +1,68 @@
+/**
+ * `check` lays out every sheet the build draws (same plan, same scene code, no rendering), and a sheet
+ * that cannot be laid out is said at the definition that asked for it, never only by its slug.
+ */
+import { describe, expect, it } from 'vitest';
+import { loadProject } from '../../src/data/load.ts';
+import type { JetUnit, Project } from '../../src/data/types.ts';
+import { LayoutError } from '../../src/sheets/index.ts';
+import { checkSite } from '../../src/site/checkSite.ts';
+import { SheetDrawError } from '../../src/site/errors.ts';
+import { planSheets } from '../../src/site/planSheets.ts';
+import { layoutProblems, sheetDrawProblem } from '../../src/site/sheetProblems.ts';
+
+async function demo(): Promise<Project> {
+  const r = await loadProject('data');
+  if (!r.ok) throw new Error(r.errors.map((e) => e.message).join('\n'));
+  return r.project;
+}
+
+/** The demo with one jet given n impellers (far past what a wall chart holds), built in memory past the loader's limits. */
+function withImpellers(project: Project, jetId: string, n: number): Project {
+  const jet = project.jets.find((j) => j.id === jetId)!;
+  const extra = Array.from({ length: n - jet.impellers.length }, (_, i) => ({ ...jet.impellers[0], id: `x${i}`, label: `X${i}-EXTRA-LABEL`, ratingKw: 1 + i * 0.05 }));
+  const bigger: JetUnit = { ...jet, impellers: [...jet.impellers, ...extra] };
+  return {
+    ...project,
+    jets: project.jets.map((j) => (j.id === jetId ? bigger : j)),
+    boats: project.boats.map((b) => (b.jetId === jetId ? { ...b, jet: bigger } : b)),
+  };
+}
+
+describe('check lays out what build draws', () => {
+  it('passes the demo with the same one-line summary as before', async () => {
+    const report = await checkSite('data', { sourceDateEpoch: '1767225600' });
+    expect(report).toEqual({ exitCode: 0, text: 'OK data: 3 engine families (6 variants), 2 jet units (11 impellers), 6 boats (2 sea trials), 3 books (15 sheets), 0 warnings\n' });
+  });
+
+  it('lays out every planned sheet of the demo without a problem', async () => {
+    const project = await demo();
+    // 6 default wall charts (3 engine families × 2 jets), 3 sheets for each of 6 boats, 4 more the books ask for.
+    expect(planSheets(project).sheets.length).toBe(28);
+    expect(layoutProblems(project, { dateIso: '2026-01-01' })).toEqual([]);
+  });
+
+  it('says a wall chart that cannot be laid out at the jet file\'s impellers: line and at the book entry that asks for it', async () => {
+    const project = withImpellers(await demo(), 'tarnwell-212', 80);
+    const problems = layoutProblems(project, { dateIso: '2026-01-01' }).filter((e) => e.expected.startsWith('asks for a wall chart'));
+    const places = problems.map((e) => `${e.file}:${e.line}:${e.column} ${e.field}`);
+    // The two default wall charts of the pairing: the jet's impellers list (line 10 of the demo file).
+    expect(places).toContain('data/jets/tarnwell-212.yaml:10:1 impellers');
+    // The book's own wall charts of the pairing: its sheets[0] and sheets[2] entries.
+    expect(places).toContain('data/books/shop-wall-charts.yaml:11:5 sheets[0]');
+    expect(places).toContain('data/books/shop-wall-charts.yaml:24:5 sheets[2]');
+    const first = problems.find((e) => e.file === 'data/jets/tarnwell-212.yaml')!;
+    expect(first.message).toMatch(
+      /^data\/jets\/tarnwell-212\.yaml:10:1 impellers asks for a wall chart \(engine family (corbrick-four|harrowgate-v8) with jet tarnwell-212, A3 landscape; file wall-chart-\S+\) that must fit its paper, found 80 impellers × \d engine variants .* — use fewer impellers per jet \(at most 24\)/,
+    );
+  });
+
+  it('words a SheetDrawError from a build at the definition, not the slug alone', async () => {
+    const project = await demo();
+    const error = new SheetDrawError('upgrade-greyling', new LayoutError('upgrade-greyling: results table', 'the content is 4.5 mm too tall for the sheet; use larger paper or fewer rows'));
+    const e = sheetDrawProblem(project, error);
+    expect(e.message).toBe(
+      'data/boats/greyling.yaml:4:1 name asks for an upgrade sheet (boat greyling, A4 portrait; file upgrade-greyling) that must fit its paper, found the content is 4.5 mm too tall for the sheet — use larger paper or fewer rows',
+    );
+  });
+});
