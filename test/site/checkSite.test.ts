@@ -37,7 +37,7 @@ describe('check lays out what build draws', () => {
 
   it('lays out every planned sheet of the demo without a problem', async () => {
     const project = await demo();
-    // 6 default wall charts (3 engine families × 2 jets), 3 sheets for each of 6 boats, 4 more the books ask for.
+    // 3 default wall charts (the pairings boats use), 3 sheets for each of 6 boats, 7 more the books ask for.
     expect(planSheets(project).sheets.length).toBe(28);
     expect(layoutProblems(project, { dateIso: '2026-01-01' })).toEqual([]);
   });
