@@ -1,8 +1,8 @@
 /**
  * The built demo site in a real browser (Debian's /usr/bin/chromium driven by playwright-core; no
  * browser is ever downloaded): every page loads without console errors, every link and download
- * answers, each chart carries its series, the print view fits the paper, and screenshots are saved
- * under test-results/ for a person to look at.
+ * answers, each chart carries its series, the guides show their images, no page is wider than a phone,
+ * the print view fits the paper, and screenshots are saved under test-results/ for a person to look at.
  */
 import { execFileSync } from 'node:child_process';
 import { mkdirSync, mkdtempSync, readFileSync } from 'node:fs';
@@ -214,6 +214,30 @@ describe('the built demo site in Chromium', { timeout: 600_000 }, () => {
     expect(warnings.length).toBeGreaterThan(0);
     for (const w of warnings) expect(Number(await w.evaluate((e) => getComputedStyle(e).fontWeight))).toBeGreaterThanOrEqual(700);
     await page.close();
+  });
+
+  it('shows every guide with its images drawn, its page marked in the navigation, and no page wider than a phone', async () => {
+    const guides = (await crawl()).filter((p) => p.startsWith('guides/'));
+    expect(guides).toHaveLength(4);
+    let images = 0;
+    for (const path of guides) {
+      const { page } = await open(path);
+      expect(await page.locator('nav[aria-label="Guides"] a[aria-current="page"]').getAttribute('href'), path).toBe(`../../${path}`);
+      const sizes = await page.$$eval('.guide img', (els) => els.map((e) => (e as HTMLImageElement).naturalWidth));
+      images += sizes.length;
+      expect(sizes.every((w) => w > 100), path).toBe(true);
+      await page.close();
+    }
+    expect(images).toBe(4); // the four sheet thumbnails of docs/sheets.md
+    // A phone held upright (420 CSS px): long code words wrap, tables and sheets scroll inside their boxes.
+    mkdirSync('test-results', { recursive: true });
+    for (const path of await crawl()) {
+      const { page } = await open(path);
+      await page.setViewportSize({ width: 420, height: 900 });
+      expect(await page.evaluate(() => document.documentElement.scrollWidth), path).toBeLessThanOrEqual(420);
+      if (path === 'guides/sheets/index.html') await page.screenshot({ path: 'test-results/site-guide-phone.png' });
+      await page.close();
+    }
   });
 
   it('saves screenshots of the index and one boat page under test-results/', async () => {
