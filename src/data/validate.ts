@@ -51,7 +51,9 @@ function locateIssue(source: YamlSource, issue: Issue): DataError[] {
       );
     });
   }
-  const where = source.locate(issue.path);
+  const valueAt = source.locate(issue.path);
+  // A list with too many entries is named at its key (impellers:), not at its first entry.
+  const where = issue.code === 'too_big' && valueAt.found.startsWith('a list') ? { ...source.locate(issue.path, { at: 'key' }), found: valueAt.found, exists: valueAt.exists } : valueAt;
   const place = { file: source.file, line: where.line, column: where.column };
   const field = fieldName(issue.path);
   if (!where.exists) {
@@ -59,7 +61,8 @@ function locateIssue(source: YamlSource, issue: Issue): DataError[] {
     const what = issue.message === 'is required' ? 'its value' : `a value that ${issue.message}`;
     return [dataError(place, { field, expected: 'is required', found: 'nothing', fix: `add ${String(issue.path[issue.path.length - 1])}: with ${what}` })];
   }
-  return [dataError(place, { field, expected: issue.message, found: issue.params?.found ?? where.found, fix: hint(issue) })];
+  const length = issue.code === 'too_big' && typeof issue.input === 'string' ? ` (${[...issue.input].length} characters)` : '';
+  return [dataError(place, { field, expected: issue.message, found: issue.params?.found ?? `${where.found}${length}`, fix: hint(issue) })];
 }
 
 /** A fix worth saying for common slips: quoted numbers, units typed after numbers, near-miss words. */

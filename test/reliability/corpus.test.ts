@@ -85,7 +85,7 @@ describe('generated large files', () => {
     const result = await loadProject(dataDir);
     expect(result.ok).toBe(false);
     if (result.ok) return;
-    expectLocated(result.errors, [{ file: CURVE, line: 12, column: 5, field: 'curve.points', found: 'a list of 100000 entries', expected: 'must have at most 200 rows' }], dataDir);
+    expectLocated(result.errors, [{ file: CURVE, line: 11, column: 3, field: 'curve.points', found: 'a list of 100000 entries', expected: 'must have at most 200 rows' }], dataDir);
   });
 
   it('refuses a file over the size cap at 1:1 without reading it into the parser', async () => {

@@ -12,7 +12,7 @@ export const HOSTILE = {
   shopName: `J&B <Jet> "Sons" 'Ltd'`,
   boatName: `<script>alert("x")</script> Ærø & Ωμέγα ]]>`,
   notes: `Tom's "quick" boat & <b>not bold</b> ]]> — café, naïve, Ελληνικά.`,
-  cruiseLabel: `Run "fast" & <far>`,
+  cruiseLabel: `Go "fast" &<far>`,
 } as const;
 
 /** Write the small data set into dir (created); `boatName` replaces the hostile name (emoji, right-to-left tests). */

@@ -1,6 +1,6 @@
 /** Schema of data/boats/<id>.yaml: one boat with its engine, jet, impeller, water, site and trials. */
 import * as z from 'zod';
-import { between, conditions, driveLine, isoDate, positive, rpm, slug, text, unitChoices, water } from './common.ts';
+import { atMost, between, conditions, driveLine, isoDate, label, LIMITS, name, positive, rpm, slug, text, unitChoices, water } from './common.ts';
 
 export const HULL_TYPES = ['runabout', 'cruiser', 'high-speed-runabout', 'workboat', 'race'] as const;
 const SPEED_KEYS = ['speed_kn', 'speed_mph', 'speed_kmh'] as const;
@@ -23,7 +23,7 @@ export const CRUISE_KEYS = ['power_kw', 'power_hp', 'rpm', ...SPEED_KEYS] as con
 
 const cruise = () =>
   unitChoices(
-    z.strictObject({ label: text(), power_kw: positive().optional(), power_hp: positive().optional(), rpm: rpm().optional(), ...speedFields }),
+    z.strictObject({ label: label(), power_kw: positive().optional(), power_hp: positive().optional(), rpm: rpm().optional(), ...speedFields }),
     [{ keys: CRUISE_KEYS, required: true }],
   );
 
@@ -50,7 +50,7 @@ export const boatFile = () =>
   unitChoices(
     z.strictObject({
       id: slug(),
-      name: text(),
+      name: name(),
       notes: text().optional(),
       hull: hull(),
       /** Engine family id (data/engines/<id>.yaml) and, when it has several, the variant id. */
@@ -61,7 +61,7 @@ export const boatFile = () =>
       drive_line: driveLine().default({ ratio: 1, efficiency: 0.97 }),
       water: water(),
       site: conditions().default({}),
-      cruise: z.array(cruise(), { error: 'must be a list of cruise settings' }).default([]),
+      cruise: atMost(z.array(cruise(), { error: 'must be a list of cruise settings' }), LIMITS.cruisePerBoat, 'the sheets list each cruise setting on its own row; keep the ones the owner uses').default([]),
       fuel_tank_l: between(1, 100000, 'L').optional(),
       fuel_tank_us_gal: between(0.3, 26000, 'US gal').optional(),
       trials: z.array(trial(), { error: 'must be a list of sea-trial records' }).default([]),

@@ -14,6 +14,33 @@ export const slug = () =>
 /** Non-empty text. */
 export const text = () => z.string().min(1, { error: 'must not be empty' });
 
+/**
+ * What the sheets are laid out for (docs/sheets.md, "Limits every sheet lays out"): every catalogue
+ * inside these prints on every paper its sheets are made for; past them `check` says which field to trim.
+ */
+export const LIMITS = {
+  /** Impeller, variant and cruise labels: a table cell, a curve's end label, a ladder row. */
+  labelChars: 16,
+  /** Boat, engine family and jet names: a sheet title. */
+  nameChars: 60,
+  impellersPerJet: 24,
+  variantsPerFamily: 6,
+  cruisePerBoat: 8,
+  cautions: 6,
+  cautionChars: 300,
+} as const;
+
+const tooLong = (max: number, what: string) => `must be at most ${max} characters (${what})`;
+
+/** A short label printed in table cells and beside curves. */
+export const label = () => text().max(LIMITS.labelChars, { error: tooLong(LIMITS.labelChars, 'tables and curve labels print it') });
+
+/** A name printed in sheet titles. */
+export const name = () => text().max(LIMITS.nameChars, { error: tooLong(LIMITS.nameChars, 'sheet titles print it') });
+
+/** A list with at most max entries, told in words of what the sheets can show. */
+export const atMost = <T extends z.ZodType>(list: z.ZodArray<T>, max: number, why: string) => list.max(max, { error: `must have at most ${max} entries (${why})` });
+
 /** A calendar date written YYYY-MM-DD (checked to exist: no 2026-02-30). */
 export const isoDate = () =>
   z

@@ -1,7 +1,7 @@
 /** Schema of data/engines/<id>.yaml: an engine family and its variants (tunes). */
 import * as z from 'zod';
 import { checkEngineLimits } from './engineLimits.ts';
-import { between, optionalShape, positive, rpm, slug, text, tolerancePct, unitChoices } from './common.ts';
+import { atMost, between, label, LIMITS, name, optionalShape, positive, rpm, slug, text, tolerancePct, unitChoices } from './common.ts';
 
 export const POWER_UNITS = ['kW', 'hp', 'PS'] as const;
 export const TORQUE_UNITS = ['N·m', 'Nm', 'lbf·ft', 'lbf-ft'] as const;
@@ -100,19 +100,23 @@ const tuneShape = {
 const curveChoice = [{ keys: ['curve', 'known_point'], required: false }] as const;
 
 export const engineVariant = () =>
-  unitChoices(z.strictObject({ id: slug(), label: text(), notes: text().optional(), ...optionalShape(tuneShape) }), curveChoice);
+  unitChoices(z.strictObject({ id: slug(), label: label(), notes: text().optional(), ...optionalShape(tuneShape) }), curveChoice);
 
 export const engineFile = () =>
   unitChoices(
     z.strictObject({
       id: slug(),
-      label: text(),
-      maker: text(),
+      label: name(),
+      maker: name(),
       fuel: z.enum(['petrol', 'gasoline', 'diesel'], { error: 'must be petrol, gasoline or diesel' }),
       aspiration: z.enum(['natural', 'turbocharged'], { error: 'must be natural or turbocharged' }),
       notes: text().optional(),
       ...optionalShape(tuneShape),
-      variants: z.array(engineVariant(), { error: 'must be a list of variants, each with id and label' }).min(1, { error: 'must list at least one variant' }),
+      variants: atMost(
+        z.array(engineVariant(), { error: 'must be a list of variants, each with id and label' }).min(1, { error: 'must list at least one variant' }),
+        LIMITS.variantsPerFamily,
+        'a wall chart gives each variant a column; put further variants in a second engine family file',
+      ),
     }),
     curveChoice,
   )

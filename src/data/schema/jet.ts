@@ -1,12 +1,12 @@
 /** Schema of data/jets/<id>.yaml: a jet unit (housing) and its impeller family. */
 import * as z from 'zod';
-import { between, positive, slug, text, tolerancePct, unitChoices, water } from './common.ts';
+import { atMost, between, label, LIMITS, name, positive, slug, text, tolerancePct, unitChoices, water } from './common.ts';
 
 export const impeller = () =>
   unitChoices(
     z.strictObject({
       id: slug(),
-      label: text(),
+      label: label(),
       /** Shaft power absorbed at the family's reference speed and water density. */
       rating_kw: positive().describe('Power absorbed at the reference speed and water, kW').optional(),
       rating_hp: positive().describe('Power absorbed at the reference speed and water, hp (550 ft·lbf/s)').optional(),
@@ -19,8 +19,8 @@ export const jetFile = () =>
   z
     .strictObject({
       id: slug(),
-      label: text(),
-      maker: text(),
+      label: name(),
+      maker: name(),
       notes: text().optional(),
       /** Impeller speed at which the ratings are stated. */
       reference_speed_rpm: between(100, 10000, 'rpm').describe('Impeller speed at which ratings are stated, rpm').default(1000),
@@ -28,7 +28,11 @@ export const jetFile = () =>
       exponent: between(2, 4).describe('Absorption exponent k in P ∝ n^k (3 = cube law)').default(3),
       tolerance_pct: tolerancePct().describe('± % manufacturing tolerance on every rating').default(5),
       reference_water: water().default('fresh'),
-      impellers: z.array(impeller(), { error: 'must be a list of impellers, each with id, label and rating_kw or rating_hp' }).min(1, { error: 'must list at least one impeller' }),
+      impellers: atMost(
+        z.array(impeller(), { error: 'must be a list of impellers, each with id, label and rating_kw or rating_hp' }).min(1, { error: 'must list at least one impeller' }),
+        LIMITS.impellersPerJet,
+        'a wall chart gives each impeller a row; put further impellers in a second jet file',
+      ),
     })
     .meta({ title: 'matchbook jet unit', description: 'A jet unit with its impeller family: data/jets/<id>.yaml' });
 

@@ -1,6 +1,6 @@
 /** Schema of data/site.yaml: the shop's name, units preference and data revision. */
 import * as z from 'zod';
-import { isoDate, text } from './common.ts';
+import { atMost, isoDate, LIMITS, text } from './common.ts';
 
 export const siteFile = () =>
   z
@@ -15,9 +15,13 @@ export const siteFile = () =>
         .default({ power: 'kW', speed: 'kn' }),
       data_revision: text(),
       issue_date: isoDate(),
-      cautions: z
-        .array(text(), { error: 'must be a list of sentences' })
-        .min(1, { error: 'must list at least one caution, or be left out' })
+      cautions: atMost(
+        z
+          .array(text().max(LIMITS.cautionChars, { error: `must be at most ${LIMITS.cautionChars} characters (every sheet prints every caution); shorten it or split it in two` }), { error: 'must be a list of sentences' })
+          .min(1, { error: 'must list at least one caution, or be left out' }),
+        LIMITS.cautions,
+        'every sheet prints every caution after the built-in ones; merge or drop some',
+      )
         .optional()
         .describe("Extra cautions, printed after the built-in ones (sea trial, maker's maximum rpm, qualified marine technician), which always print; one sentence each"),
     })
