@@ -6,14 +6,15 @@ import type { SheetRequest } from '../data/types.ts';
 import type { Scene } from '../scene/types.ts';
 import { analyseBoat, type BandResult, type LimitsResult } from '../analysis/index.ts';
 import type { MatchStatus } from '../analysis/index.ts';
-import { assembleScene, assertFits } from './kit/assemble.ts';
+import { assembleScene } from './kit/assemble.ts';
 import { ascentMm, label, linePitchMm, paragraph, type Block } from './kit/block.ts';
-import { cautionsBlock } from './kit/cautions.ts';
+import { cautionsFlow } from './kit/cautions.ts';
+import { flowPages, splittable, whole, type Flowable } from './kit/flow.ts';
 import { rpmBandText, rpmText } from './kit/format.ts';
 import { sheetFrame } from './kit/frame.ts';
-import { stack, type Part } from './kit/stack.ts';
+import { stack } from './kit/stack.ts';
 import { INK, WARN, typeScale } from './kit/style.ts';
-import { table } from './kit/table.ts';
+import { table, type Column } from './kit/table.ts';
 import { findBoat, type SheetContext } from './context.ts';
 import { speedText, trialDatesText } from './boatTables.ts';
 import { exactRpmText } from './trialTables.ts';
@@ -23,6 +24,8 @@ type BoatRequest = Extract<SheetRequest, { kind: 'consoleCard' }>;
 
 /** Cards are trimmed cleanly and held in the hand: 5 mm keeps text clear of the cut (common practice, no source). */
 const CARD_MARGIN_MM = 5;
+
+const CRUISE_COLUMNS: readonly Column[] = [{ header: 'Cruise', align: 'left', shorten: true, wrap: true }, { header: 'Engine', align: 'right' }, { header: 'Speed (est.)', align: 'right' }];
 
 /** What to look at, in order of how often it is the cause (common practice, no source). */
 export const OFF_RANGE_CHECKS: readonly string[] = [
@@ -54,7 +57,9 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
   const site = ctx.project.site;
   const result = analyseBoat({ boat, project: ctx.project });
   const type = typeScale(request.paper);
-  const frame = sheetFrame({ paper: request.paper, site, title: boat.name, subtitle: `Console card · impeller ${result.impellerLabel}`, dateIso: ctx.dateIso, type, marginMm: CARD_MARGIN_MM, where });
+  const frameArgs = { paper: request.paper, site, title: boat.name, dateIso: ctx.dateIso, type, marginMm: CARD_MARGIN_MM, where };
+  const frame = sheetFrame({ ...frameArgs, subtitle: `Console card · impeller ${result.impellerLabel}` });
+  const backFrame = (n: number) => sheetFrame({ ...frameArgs, shop: false, subtitle: `Console card, page ${n + 1} · impeller ${result.impellerLabel}` });
   const box = frame.contentBox;
   const b = result.calibrated?.wot ?? result.wot;
   const measured = result.calibrated?.fittedMeasured;
@@ -67,12 +72,10 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
     .map((c) => [c.label, { text: `${rpmText(c.speedRpm as number)} rpm`, weight: 'bold' as const }, c.speedKn !== undefined ? `~${speedText(c.speedKn, speedUnit)} ${speedUnit}` : '–']);
   // A card first tries its full layout (level 0); a full card then closes its gaps and leaves out the line
   // naming the trials when it shows the measured rpm (1); then it sets the big range a tenth smaller and the
-  // cruise table at body size, and runs the checks on as one paragraph (2); then it drops cruise rows from
-  // the end, with a note saying how many are left for the spec sheet.
-  const build = (level: 0 | 1 | 2, shownCruise = cruiseRows.length) => {
-    const hiddenCruise = cruiseRows.length - shownCruise;
-    const figures: Part[] = [
-      ({ x, y, widthMm }): Block => {
+  // cruise table at body size, and runs the checks on as one paragraph (2); then it continues on the back.
+  const parts = (level: 0 | 1 | 2, cautionPt: number = type.small): { figures: Flowable[]; advice: Flowable[] } => {
+    const figures: Flowable[] = [
+      whole(({ x, y, widthMm }): Block => {
         const head = label({ x, y: y + ascentMm(type.heading, 'bold'), text: 'Expected WOT rpm', sizePt: type.heading, weight: 'bold', role: 'heading', where });
         // The big figure shrinks only as far as it must to fit the card; below the heading size is an error.
         let sizePt = level === 2 ? Math.round(type.display * 0.9) : type.display;
@@ -98,16 +101,20 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
           return p.nodes;
         });
         return { nodes: [head, node, ...subNodes], heightMm: cursor - y };
-      },
-      ...(shownCruise > 0
-        ? [({ x, y, widthMm }: { x: number; y: number; widthMm: number }): Block => table({ x, y, maxWidthMm: widthMm, columns: [{ header: 'Cruise', align: 'left', shorten: true }, { header: 'Engine', align: 'right' }, { header: 'Speed (est.)', align: 'right' }], rows: cruiseRows.slice(0, shownCruise), sizePt: level === 2 ? type.body : type.body + 1, minSizePt: type.min, fullWidth: true, role: 'cruise-table', where })]
-        : []),
-      ...(hiddenCruise > 0
-        ? [({ x, y, widthMm }: { x: number; y: number; widthMm: number }): Block => paragraph({ x, y, widthMm, text: `${hiddenCruise} more cruise setting${hiddenCruise > 1 ? 's' : ''} on the spec sheet.`, sizePt: type.small, role: 'cruise-hidden-note', where })]
+      }),
+      ...(cruiseRows.length > 0
+        ? [
+            splittable(
+              cruiseRows.length,
+              (from, to, { x, y, widthMm }) => table({ x, y, maxWidthMm: widthMm, columns: CRUISE_COLUMNS, rows: cruiseRows.slice(from, to), measureRows: cruiseRows, firstRowIndex: from, noNote: to < cruiseRows.length, sizePt: level === 2 ? type.body : type.body + 1, minSizePt: type.min, fullWidth: true, role: 'cruise-table', where }),
+              0,
+              true,
+            ),
+          ]
         : []),
     ];
-    const advice: Part[] = [
-      ({ x, y, widthMm }): Block => {
+    const advice: Flowable[] = [
+      whole(({ x, y, widthMm }): Block => {
         const head = paragraph({ x, y, widthMm, text: 'WOT rpm outside the range? Check:', sizePt: type.body, weight: 'bold', role: 'heading', where });
         let cursor = y + head.heightMm;
         const nodes = [...head.nodes];
@@ -122,31 +129,54 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
           cursor += p.heightMm;
         }
         return { nodes, heightMm: cursor - y };
-      },
-      ({ x, y, widthMm }) => cautionsBlock({ site, x, y, widthMm, sizePt: type.small, headingPt: type.body, where }),
+      }, true),
+      cautionsFlow({ site, sizePt: cautionPt, headingPt: type.body, where }),
     ];
+    return { figures, advice };
+  };
+  const columns = box.width > box.height ? 2 : 1;
+  const build = (level: 0 | 1 | 2) => {
+    const { figures, advice } = parts(level);
     // Landscape cards read as two columns (figures | advice); portrait cards as one.
     const gapMm = level === 0 ? 2.5 : level === 1 ? 1.5 : 1;
-    return box.width > box.height
+    return columns === 2
       ? [
-          stack({ x: box.x, y: box.y, widthMm: (box.width - 5) / 2, gapMm, parts: figures }),
-          stack({ x: box.x + (box.width + 5) / 2, y: box.y, widthMm: (box.width - 5) / 2, gapMm, parts: advice }),
+          stack({ x: box.x, y: box.y, widthMm: (box.width - 5) / 2, gapMm, parts: figures.map((f) => f.layout) }),
+          stack({ x: box.x + (box.width + 5) / 2, y: box.y, widthMm: (box.width - 5) / 2, gapMm, parts: advice.map((f) => f.layout) }),
         ]
-      : [stack({ x: box.x, y: box.y, widthMm: box.width, gapMm, parts: [...figures, ...advice] })];
+      : [stack({ x: box.x, y: box.y, widthMm: box.width, gapMm, parts: [...figures, ...advice].map((f) => f.layout) })];
   };
   const fits = (cols: ReturnType<typeof build>) => cols.every((c) => c.bottomMm <= box.y + box.height + 1e-6);
-  // Last, the cruise table keeps its first rows only (a note counts the rest) rather than fail.
-  const tries = [() => build(0), () => build(1), ...Array.from({ length: cruiseRows.length + 1 }, (_, i) => () => build(2, cruiseRows.length - i))];
-  let columns = tries[0]();
-  for (const t of tries.slice(1)) {
-    if (fits(columns)) break;
-    columns = t();
+  // A full card closes its gaps and sets its figures tighter (levels 1 and 2); when even that does not fit,
+  // it keeps everything at full size and continues on the back (a second page of the same paper): the
+  // cruise table moves there whole or splits between rows, the cautions split between paragraphs.
+  let laid = build(0);
+  for (const level of [1, 2] as const) {
+    if (fits(laid)) break;
+    laid = build(level);
   }
-  for (const c of columns) assertFits(box, c.bottomMm, where);
-  const laid = { nodes: columns.flatMap((c) => c.nodes) };
+  // On the back the cautions are fine print (7 pt on A6 and 4 × 6 in); the front says where they are.
+  const pages = fits(laid)
+    ? [{ frame, nodes: laid.flatMap((c) => c.nodes) }]
+    : (() => {
+        const { figures, advice } = parts(1, type.fine);
+        const flowed = flowPages({ frame: (n) => (n === 0 ? frame : backFrame(n)), columns, columnGapMm: 5, gapMm: 1.5, parts: [...figures, ...advice], where });
+        const front = flowed[0];
+        const hasCautions = front.nodes.some(function has(n): boolean {
+          return n.role === 'cautions' || (n.type === 'group' && n.children.some(has));
+        });
+        const last = front.slots[front.slots.length - 1];
+        const pitch = linePitchMm(type.small, 'bold');
+        const text = `Cautions: see ${flowed.length === 2 ? 'page 2' : flowed.length === 3 ? 'pages 2 and 3' : `pages 2 to ${flowed.length}`}.`;
+        if (!hasCautions && last.y + last.height - last.bottomMm >= pitch + 1) {
+          front.nodes.push(label({ x: last.x, y: last.y + last.height - pitch + ascentMm(type.small, 'bold'), text, sizePt: type.small, weight: 'bold', colour: WARN, role: 'cautions-pointer', where }));
+        }
+        return flowed;
+      })();
   return assembleScene({
     frame,
-    content: laid.nodes,
+    content: pages[0].nodes,
+    more: pages.slice(1).map((p) => ({ frame: p.frame, content: p.nodes })),
     title: `${boat.name}: console card`,
     description: `Console card for ${boat.name}: expected WOT ${rangeText}, most likely ${rpmText(b.nominal.speedRpm)} rpm; cruise rpm; checks when WOT rpm is outside the range; cautions.`,
     subject: 'Console card',

@@ -67,7 +67,7 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
   const type = typeScale(request.paper);
   const frameArgs = { paper: request.paper, site, title: boat.name, subtitle: `${boat.engine.label} · ${boat.jet.label} · impeller ${result.impellerLabel}`, dateIso: ctx.dateIso, type, where };
   const frame = sheetFrame({ ...frameArgs, titleSuffix: ': spec sheet' });
-  const continuedFrame = (n: number) => sheetFrame({ ...frameArgs, titleSuffix: `: spec sheet, page ${n + 1}` });
+  const continuedFrame = (n: number) => sheetFrame({ ...frameArgs, shop: false, titleSuffix: `: spec sheet, page ${n + 1}` });
   const box = frame.contentBox;
   const shownWot = result.calibrated?.wot ?? result.wot;
   const warn = isWarning(shownWot.nominal.status);

@@ -8,15 +8,16 @@ import type { Scene } from '../scene/types.ts';
 import { analyseBoat, engineCurveAt, isWarning, type WindowPlace } from '../analysis/index.ts';
 import { boatChart, chartImpellersNote } from './chart/boatChart.ts';
 import type { EngineSeries } from './chart/seriesTypes.ts';
-import { assembleScene, assertFits } from './kit/assemble.ts';
+import { assembleScene } from './kit/assemble.ts';
 import { paragraph } from './kit/block.ts';
-import { cautionsBlock } from './kit/cautions.ts';
+import { cautionsFlow } from './kit/cautions.ts';
+import { flowPages, whole, type Flowable } from './kit/flow.ts';
 import { numberText, percentText, powerText, rpmText } from './kit/format.ts';
 import { sheetFrame } from './kit/frame.ts';
-import { stack, type Part } from './kit/stack.ts';
+import { stack } from './kit/stack.ts';
 import { INK, STROKE, WARN, typeScale } from './kit/style.ts';
 import { findBoat, type SheetContext } from './context.ts';
-import { tablePart } from './specSheet.ts';
+import { tableFlow } from './specSheet.ts';
 import { speedHeader, speedText, trialDatesText } from './boatTables.ts';
 import { calibratedChartView } from './calibratedView.ts';
 
@@ -48,7 +49,9 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
   const unit = site.powerUnitFirst;
   const result = analyseBoat({ boat, project: ctx.project });
   const type = typeScale(request.paper);
-  const frame = sheetFrame({ paper: request.paper, site, title: boat.name, titleSuffix: ': engine upgrade', subtitle: `${boat.engine.label} · ${boat.jet.label} · impeller ${result.impellerLabel} kept`, dateIso: ctx.dateIso, type, where });
+  const frameArgs = { paper: request.paper, site, title: boat.name, subtitle: `${boat.engine.label} · ${boat.jet.label} · impeller ${result.impellerLabel} kept`, dateIso: ctx.dateIso, type, where };
+  const frame = sheetFrame({ ...frameArgs, titleSuffix: ': engine upgrade' });
+  const continuedFrame = (n: number) => sheetFrame({ ...frameArgs, shop: false, titleSuffix: `: engine upgrade, page ${n + 1}` });
   const box = frame.contentBox;
   const common = { sizePt: type.body, minSizePt: type.min, headingPt: type.heading, where };
   const speedUnit = site.speedUnit;
@@ -104,16 +107,16 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
       { text: TARGET_WORDS[g.window], weight: aim ? ('regular' as const) : ('bold' as const), colour: aim ? INK : WARN },
     ];
   });
-  const parts = (chartMm: number, compact: boolean): Part[] => [
-    ({ x, y, widthMm }) =>
-      paragraph({ x, y, widthMm, text: `Same impeller, more power: WOT rpm rises only a little, as the impeller takes power as rpm to the power ${kText} (x % more power, about x/${kText} % more rpm). Aim only for WOT inside the window (${rpmText(result.limits.windowLowRpm)}–${rpmText(result.limits.windowHighRpm)} rpm); never past the maximum (${rpmText(result.limits.maxRpm)} rpm).`, sizePt: type.body, where }),
-    ({ x, y, widthMm }) => {
+  const parts = (chartMm: number, compact: boolean): Flowable[] => [
+    whole(({ x, y, widthMm }) =>
+      paragraph({ x, y, widthMm, text: `Same impeller, more power: WOT rpm rises only a little, as the impeller takes power as rpm to the power ${kText} (x % more power, about x/${kText} % more rpm). Aim only for WOT inside the window (${rpmText(result.limits.windowLowRpm)}–${rpmText(result.limits.windowHighRpm)} rpm); never past the maximum (${rpmText(result.limits.maxRpm)} rpm).`, sizePt: type.body, where })),
+    whole(({ x, y, widthMm }) => {
       const chart = boatChart({ ...(view ?? { boat, result }), box: { x, y, width: widthMm, height: chartMm }, sizePt: type.small, powerUnitFirst: unit, engines, points: 'fitted', where });
       const notes = [chartImpellersNote(boat), chart.notes.map((n) => `(${n.number}) ${n.text}`).join('  ')].filter((t) => t !== '').join('  ');
       const note = notes ? paragraph({ x, y: y + chartMm + 1, widthMm, text: notes, sizePt: type.small, where }) : { nodes: [], heightMm: 0 };
       return { nodes: [chart.node, ...note.nodes], heightMm: chartMm + 1 + note.heightMm };
-    },
-    tablePart({
+    }),
+    tableFlow({
       heading: `Engine power change with impeller ${result.impellerLabel}${onModel}`,
       columns: [
         { header: 'Power change', align: 'left' },
@@ -127,32 +130,37 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
       ...common,
       role: 'upgrade-table',
     }),
-    tablePart({
+    tableFlow({
       heading: 'Power needed for more WOT rpm',
       columns: [{ header: 'Gain', align: 'left', wrap: true }, { header: 'Target WOT', align: 'right' }, { header: 'Power change needed', align: 'right' }, { header: 'Target against the window', align: 'left', wrap: true }],
       rows: gainRows,
       ...common,
       role: 'rpm-gain-table',
     }),
-    ({ x, y, widthMm }) =>
-      paragraph({ x, y, widthMm, text: `Speeds are estimates (Crouch’s planing formula, hull constant ${Math.round(result.estimates.hull.crouchConstant)}, ${result.estimates.hull.source}). ${compact ? 'Power needed for more top speed left out for room.' : speedGainText}`, sizePt: type.small, role: 'speed-gain-note', where }),
-    ({ x, y, widthMm }) => cautionsBlock({ site, x, y, widthMm, sizePt: type.body, headingPt: type.heading, where }),
+    whole(({ x, y, widthMm }) =>
+      paragraph({ x, y, widthMm, text: `Speeds are estimates (Crouch’s planing formula, hull constant ${Math.round(result.estimates.hull.crouchConstant)}, ${result.estimates.hull.source}). ${compact ? 'Power needed for more top speed left out for room.' : speedGainText}`, sizePt: type.small, role: 'speed-gain-note', where })),
+    cautionsFlow({ site, sizePt: type.body, headingPt: type.heading, where }),
   ];
   // The chart gives up height first (its figures are in the table too) down to CHART_MIN_MM while the gaps
-  // close; then the speed-gain sentences give way to a note saying so; below that the sheet needs larger paper.
+  // close; then the speed-gain sentences give way to a note saying so. When even that does not fit one
+  // page, the sheet keeps everything and continues on a second page of the same paper.
   const layout = (compact: boolean) => {
-    const at = (chartMm: number, gapMm: number) => stack({ x: box.x, y: box.y, widthMm: box.width, gapMm, parts: parts(chartMm, compact) });
+    const at = (chartMm: number, gapMm: number) => stack({ x: box.x, y: box.y, widthMm: box.width, gapMm, parts: parts(chartMm, compact).map((f) => f.layout) });
     const first = at(CHART_MAX_MM, GAP_MM);
     if (first.bottomMm <= box.y + box.height) return first;
     const tight = at(CHART_MAX_MM, TIGHT_GAP_MM);
     return at(Math.max(CHART_MIN_MM, CHART_MAX_MM - (tight.bottomMm - (box.y + box.height))), TIGHT_GAP_MM);
   };
+  const fits = (l: { bottomMm: number }) => l.bottomMm <= box.y + box.height + 1e-6;
   const full = layout(false);
-  const laid = full.bottomMm <= box.y + box.height + 1e-6 ? full : layout(true);
-  assertFits(box, laid.bottomMm, where);
+  const laid = fits(full) ? full : layout(true);
+  const pages = fits(laid)
+    ? [{ frame, nodes: laid.nodes }]
+    : flowPages({ frame: (n) => (n === 0 ? frame : continuedFrame(n)), gapMm: GAP_MM, parts: parts(Math.min(CHART_MAX_MM, Math.max(CHART_MIN_MM, box.height * 0.45)), false), where });
   return assembleScene({
     frame,
-    content: laid.nodes,
+    content: pages[0].nodes,
+    more: pages.slice(1).map((p) => ({ frame: p.frame, content: p.nodes })),
     title: `${boat.name}: engine upgrade`,
     description: `Engine upgrade sheet for ${boat.name}: WOT rpm and power for engine power changes of +5 to +50 % with impeller ${result.impellerLabel}, and the power change needed for WOT rpm gains.`,
     subject: 'Engine upgrade sheet',

@@ -2,7 +2,7 @@
 import type { Paper } from '../../src/data/types.ts';
 import type { Scene } from '../../src/scene/types.ts';
 import { boxesOverlap, boxInside } from '../../src/sheets/kit/boxes.ts';
-import { MIN_STROKE_MM } from '../../src/sheets/kit/style.ts';
+import { FINE_PRINT_CARD_PT, FINE_PRINT_ROLES, MIN_STROKE_MM } from '../../src/sheets/kit/style.ts';
 import { leaves, markBox, texts } from './sceneWalk.ts';
 
 /** Marks outside the safe area, overlapping text boxes, type or strokes under the minimum, NaN-like text. */
@@ -15,9 +15,12 @@ export function sceneProblems(scene: Scene, paper: Paper): string[] {
     if (n.type !== 'text' && n.type !== 'group' && n.stroke && n.stroke.widthMm < MIN_STROKE_MM) problems.push(`stroke under 0.5 pt: ${n.role}`);
   }
   const minPt = paper.size === 'A3' || paper.size === 'Tabloid' ? 10 : 8;
+  // Fine print (the cautions) may go to 7 pt on a hand-held card: A6 and 4 × 6 in.
+  const card = paper.size === 'A6' || paper.size === 'Card4x6';
   const boxes = texts(scene).map((t) => ({ t, box: markBox(t)! }));
   for (const { t } of boxes) {
-    if (t.sizePt < minPt) problems.push(`type under ${minPt} pt: "${t.text}"`);
+    const floor = card && FINE_PRINT_ROLES.has(t.role ?? '') ? FINE_PRINT_CARD_PT : minPt;
+    if (t.sizePt < floor) problems.push(`type under ${floor} pt: "${t.text}"`);
     if (/NaN|Infinity|undefined|null/.test(t.text)) problems.push(`bad value in "${t.text}"`);
   }
   for (let i = 0; i < boxes.length; i++) {

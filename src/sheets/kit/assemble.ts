@@ -1,13 +1,6 @@
-/** Turns a laid-out sheet into a Scene, and checks that stacked content stays inside its box. */
+/** Turns a laid-out sheet (one page or more) into a Scene. */
 import type { Box, Scene, SceneNode } from '../../scene/types.ts';
-import { LayoutError } from './errors.ts';
 import type { SheetFrame } from './frame.ts';
-
-/** Throws when content stacked down to `bottomMm` overflows the box. */
-export function assertFits(box: Box, bottomMm: number, where: string): void {
-  const over = bottomMm - (box.y + box.height);
-  if (over > 1e-6) throw new LayoutError(where, `the content is ${over.toFixed(1)} mm too tall for the sheet; use larger paper or fewer rows`);
-}
 
 /** The finished scene: frame nodes, then the sheet's content. */
 export function assembleScene(args: {

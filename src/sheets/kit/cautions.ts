@@ -4,8 +4,8 @@
  */
 import type { SiteConfig } from '../../data/types.ts';
 import type { SceneNode } from '../../scene/types.ts';
-import { type Block, linePitchMm, paragraph, label, ascentMm } from './block.ts';
-import { splittable, type Flowable } from './flow.ts';
+import { type Block, linePitchMm, paragraph, label, ascentMm, wrapLines } from './block.ts';
+import type { Flowable } from './flow.ts';
 import { STROKE, WARN, INK, stroke } from './style.ts';
 
 /** Built-in cautions, in the order printed: sea-trial confirmation, maximum rpm, who does the work. */
@@ -30,6 +30,10 @@ function sameWords(sentence: string): string {
   return sentence.trim().replace(/\s+/g, ' ').toLowerCase();
 }
 
+const BAR_MM = 1.2;
+/** Text indent from the block's left edge: the warning bar and a gap. */
+const INDENT_MM = BAR_MM + 2;
+
 /** Cautions block: a heading and one paragraph per caution, with a warning bar at the left edge. */
 export function cautionsBlock(args: {
   site: SiteConfig;
@@ -39,19 +43,20 @@ export function cautionsBlock(args: {
   sizePt: number;
   headingPt: number;
   where: string;
-  /** Print only cautions [from, to) of cautionsFor(site); a block that does not start at the first is headed "Cautions (continued)". */
-  from?: number;
-  to?: number;
+  /** The cautions to print instead of cautionsFor(site): a part of a block split over columns or pages. */
+  list?: readonly string[];
+  /** Headed "Cautions (continued)": the part after a split. */
+  continued?: boolean;
 }): Block {
-  const barMm = 1.2;
-  const indentMm = barMm + 2;
+  const barMm = BAR_MM;
+  const indentMm = INDENT_MM;
   const innerX = args.x + indentMm;
   const innerW = args.widthMm - indentMm;
   const nodes: SceneNode[] = [];
   const heading = label({
     x: innerX,
     y: args.y + ascentMm(args.headingPt, 'bold'),
-    text: (args.from ?? 0) > 0 ? 'Cautions (continued)' : 'Cautions',
+    text: args.continued === true ? 'Cautions (continued)' : 'Cautions',
     sizePt: args.headingPt,
     weight: 'bold',
     colour: INK,
@@ -61,7 +66,7 @@ export function cautionsBlock(args: {
   nodes.push(heading);
   let cursor = args.y + linePitchMm(args.headingPt, 'bold');
   const gap = linePitchMm(args.sizePt) * 0.25;
-  for (const text of cautionsFor(args.site).slice(args.from ?? 0, args.to)) {
+  for (const text of args.list ?? cautionsFor(args.site)) {
     const p = paragraph({
       x: innerX,
       y: cursor,
@@ -88,7 +93,29 @@ export function cautionsBlock(args: {
   return { nodes: [{ type: 'group', role: 'cautions', children: nodes }], heightMm };
 }
 
-/** The cautions block as a part that splits between cautions (over a column or page break). */
-export function cautionsFlow(args: { site: SiteConfig; sizePt: number; headingPt: number; where: string }): Flowable {
-  return splittable(cautionsFor(args.site).length, (from, to, at) => cautionsBlock({ ...args, ...at, from, to }));
+/**
+ * The cautions block as a part that splits between lines (over a column or page break): the lines that
+ * fit stay, the rest of that caution and the ones after it go on under "Cautions (continued)".
+ */
+export function cautionsFlow(args: { site: SiteConfig; sizePt: number; headingPt: number; where: string }, rest?: readonly string[]): Flowable {
+  const continued = rest !== undefined;
+  const all = rest ?? cautionsFor(args.site);
+  const block = (at: { x: number; y: number; widthMm: number }, list: readonly string[]) => cautionsBlock({ ...args, ...at, list, continued });
+  return {
+    layout: (at) => block(at, all),
+    split: (at, maxHeightMm) => {
+      // Lines as the block sets them (same width and size); keep the most that fit, at least one.
+      const lines = all.map((text) => wrapLines({ text, sizePt: args.sizePt, weight: 'regular', widthMm: at.widthMm - INDENT_MM, where: args.where }));
+      let best: { head: string[]; tail: string[] } | undefined;
+      search: for (let c = 0; c < lines.length; c++) {
+        for (let l = 1; l <= lines[c].length; l++) {
+          if (c === lines.length - 1 && l === lines[c].length) break search;
+          const head = [...all.slice(0, c), lines[c].slice(0, l).join(' ')];
+          if (block(at, head).heightMm > maxHeightMm + 1e-6) break search;
+          best = { head, tail: [...(l < lines[c].length ? [lines[c].slice(l).join(' ')] : []), ...all.slice(c + 1)] };
+        }
+      }
+      return best && { head: block(at, best.head), rest: cautionsFlow(args, best.tail) };
+    },
+  };
 }

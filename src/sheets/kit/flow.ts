@@ -113,7 +113,7 @@ export function splittable(count: number, draw: (from: number, to: number, at: {
  * Flows parts over the content box of a sheet's pages, in `columns` columns per page (gap columnGapMm);
  * frame(n) is the n-th page's frame (0-based). Returns each page used with its frame and content.
  */
-export function flowPages(args: { frame: (page: number) => SheetFrame; columns?: number; columnGapMm?: number; gapMm: number; parts: readonly Flowable[]; where: string }): { frame: SheetFrame; nodes: SceneNode[] }[] {
+export function flowPages(args: { frame: (page: number) => SheetFrame; columns?: number; columnGapMm?: number; gapMm: number; parts: readonly Flowable[]; where: string }): { frame: SheetFrame; nodes: SceneNode[]; slots: (Box & { bottomMm: number })[] }[] {
   const columns = args.columns ?? 1;
   const gap = args.columnGapMm ?? 5;
   const frames: SheetFrame[] = [];
@@ -128,5 +128,8 @@ export function flowPages(args: { frame: (page: number) => SheetFrame; columns?:
   };
   const slots = flow({ slot, gapMm: args.gapMm, parts: args.parts, where: args.where });
   const pages = Math.ceil(slots.length / columns);
-  return Array.from({ length: pages }, (_, p) => ({ frame: frameOf(p), nodes: slots.slice(p * columns, (p + 1) * columns).flatMap((s) => s.nodes) }));
+  return Array.from({ length: pages }, (_, p) => {
+    const mine = slots.slice(p * columns, (p + 1) * columns);
+    return { frame: frameOf(p), nodes: mine.flatMap((s) => s.nodes), slots: mine.map((s, i) => ({ ...slot(p * columns + i), bottomMm: s.bottomMm })) };
+  });
 }

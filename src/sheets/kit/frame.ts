@@ -35,6 +35,8 @@ export function sheetFrame(args: {
   type: TypeScale;
   /** Safe margin inside the trim (mm); the paper's default when absent. */
   marginMm?: number;
+  /** False on a sheet's further pages: the shop's name and contact are on its first page. */
+  shop?: boolean;
   where: string;
 }): SheetFrame {
   const page = pageFrame({ paper: args.paper, ...(args.marginMm !== undefined ? { marginMm: args.marginMm } : {}) });
@@ -45,7 +47,8 @@ export function sheetFrame(args: {
 
   // Shop block at the top right (name over contact); on narrow sheets it goes under the title instead.
   const shopName = { text: args.site.shopName, sizePt: type.heading, weight: 'bold' as const };
-  const shopWidth = Math.max(measureTextMm(shopName), measureTextMm({ text: args.site.contactLine, sizePt: type.small, weight: 'regular' }));
+  const withShop = args.shop ?? true;
+  const shopWidth = withShop ? Math.max(measureTextMm(shopName), measureTextMm({ text: args.site.contactLine, sizePt: type.small, weight: 'regular' })) : -6;
   const suffix = args.titleSuffix ?? '';
   const fullTitle = `${args.title}${suffix}`;
   const titleWidth = measureTextMm({ text: fullTitle, sizePt: type.title, weight: 'bold' });
@@ -62,7 +65,9 @@ export function sheetFrame(args: {
   };
   if (title.shortened) lines(`Full name: ${args.title}`, type.small, 'full-name-note');
   lines(args.subtitle, type.body, 'sheet-subtitle');
-  if (sideBySide) {
+  if (!withShop) {
+    // A further page: title and subtitle only.
+  } else if (sideBySide) {
     nodes.push(label({ x: right, y: safe.y + ascentMm(type.heading, 'bold'), ...shopName, anchor: 'end', role: 'shop-name', where: args.where }));
     nodes.push(label({ x: right, y: safe.y + linePitchMm(type.heading, 'bold') + ascentMm(type.small), text: args.site.contactLine, sizePt: type.small, anchor: 'end', colour: INK_SOFT, role: 'shop-contact', where: args.where }));
     cursor = Math.max(cursor, safe.y + linePitchMm(type.heading, 'bold') + linePitchMm(type.small));

@@ -106,6 +106,8 @@ export const MIN_STROKE_MM = 0.5 * MM_PER_PT;
 /** Type sizes (pt) of one sheet; `min` is the smallest size the sheet may use anywhere. */
 export interface TypeScale {
   readonly min: number;
+  /** Fine print (the cautions on the back of a card): 7 pt on A6 and 4 × 6 in, else the minimum. */
+  readonly fine: number;
   readonly small: number;
   readonly body: number;
   readonly heading: number;
@@ -116,6 +118,12 @@ export interface TypeScale {
 
 const LARGE_PAPER: ReadonlySet<PaperSize> = new Set<PaperSize>(['A3', 'Tabloid']);
 
+const CARD_PAPER: ReadonlySet<PaperSize> = new Set<PaperSize>(['A6', 'Card4x6']);
+/** Fine print on a card held in the hand (A6, 4 × 6 in): 7 pt (the project's floor; common practice, no source). */
+export const FINE_PRINT_CARD_PT = 7;
+/** Roles that are fine print: the only text that may use TypeScale.fine. */
+export const FINE_PRINT_ROLES: ReadonlySet<string> = new Set(['caution']);
+
 /** Smallest type allowed on the paper: 10 pt on A3/Tabloid (read across a workshop), 8 pt on A4 and smaller. */
 export function minTypePt(paper: Paper): number {
   return LARGE_PAPER.has(paper.size) ? 10 : 8;
@@ -124,9 +132,9 @@ export function minTypePt(paper: Paper): number {
 /** Type scale for a paper size. */
 export function typeScale(paper: Paper): TypeScale {
   if (LARGE_PAPER.has(paper.size)) {
-    return { min: 10, small: 10, body: 11, heading: 14, title: 22, display: 36 };
+    return { min: 10, fine: 10, small: 10, body: 11, heading: 14, title: 22, display: 36 };
   }
-  return { min: 8, small: 8, body: 9, heading: 11, title: 16, display: 28 };
+  return { min: 8, fine: CARD_PAPER.has(paper.size) ? FINE_PRINT_CARD_PT : 8, small: 8, body: 9, heading: 11, title: 16, display: 28 };
 }
 
 /** A stroke from the tokens. */
