@@ -6,6 +6,7 @@ import { readdir, readFile, stat } from 'node:fs/promises';
 import { posix } from 'node:path';
 import { compareText, dataError, sortErrors } from './errors.ts';
 import { classify, KIND_DIRS, type FileKind, type SourceFile } from './files.ts';
+import { looseBoatReferences, looseBookReferences, memberIds } from './looseReferences.ts';
 import { normaliseBoat } from './normalise/boat.ts';
 import { normaliseBook } from './normalise/book.ts';
 import { normaliseEngine } from './normalise/engine.ts';
@@ -122,7 +123,7 @@ function loadFiles(files: readonly SourceFile[], opts: { dataDir?: string }): Lo
   errors.push(...built.errors);
   warnings.push(...built.warnings);
   if (!checked.some((c) => c.kind === 'site')) {
-    errors.push(dataError({ file: posix.join(root ?? '.', 'site.yaml'), line: 1, column: 1 }, { field: '', expected: 'must exist (shop name, contact line, data revision, issue date)', found: 'no such file', fix: 'create it; see docs/data-format.md' }));
+    errors.push(dataError({ file: posix.join(root ?? '.', 'site.yaml'), line: 1, column: 1 }, { field: '', expected: 'must exist (shop name, contact line, data revision, issue date)', found: 'no such file', fix: 'create it (matchbook start writes one in a new folder); see the data-format guide' }));
   }
   if (errors.length > 0 || !built.site) return { ok: false, errors: sortErrors(errors), warnings: sortErrors(warnings) };
   return { ok: true, project: { site: built.site, engines: built.engines, jets: built.jets, boats: built.boats, books: built.books }, warnings: sortErrors(warnings) };
@@ -177,6 +178,12 @@ function buildProject(checked: readonly Checked[]): Built {
   const jets = registry('jet', (c) => normaliseJet(c.source, c.raw as never));
   const boats = registry('boat', (c) => normaliseBoat(c.source, c.raw as never, { engines, jets }));
   const books = registry('book', (c) => normaliseBook(c.source, c.raw as never, { engines, jets, boats }));
+  // References in files that did not load, and into files that did not load: every problem in one run.
+  const ids = (kind: FileKind, key: string) => new Map(of(kind).flatMap((c) => (c.source ? [[c.stem, memberIds(c.source.value, key)] as const] : [])));
+  const variantIds = ids('engine', 'variants');
+  const impellerIds = ids('jet', 'impellers');
+  for (const c of of('boat')) if (c.source) errors.push(...looseBoatReferences({ source: c.source, engines, jets, variantIds, impellerIds }));
+  for (const c of of('book')) if (c.source) errors.push(...looseBookReferences({ source: c.source, engines, jets, boats }));
   const siteFileChecked = of('site')[0];
   const site = siteFileChecked?.raw !== undefined ? normaliseSite(siteFileChecked.raw as never) : undefined;
   const sorted = <T extends { id: string }>(m: Map<string, T | null>) => [...m.values()].filter((x): x is T => x !== null).sort((a, b) => compareText(a.id, b.id));

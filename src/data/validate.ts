@@ -111,9 +111,9 @@ function wording(raw: unknown): string {
       if (iss.origin === 'array') return `must have at most ${iss.maximum} entries`;
       return `must be at most ${iss.maximum}`;
     case 'invalid_union':
-      return 'must be one of the allowed forms (see docs/data-format.md)';
+      return 'must be one of the allowed forms (see the data-format guide, guides/data-format/ in the built site)';
     default:
-      return 'is not valid here (see docs/data-format.md)';
+      return 'is not valid here (see the data-format guide, guides/data-format/ in the built site)';
   }
 }
 

@@ -60,7 +60,7 @@ describe('loadProjectFromFiles() stays robust on hostile input', () => {
   it('reports a missing site.yaml and a missing data folder', () => {
     const noSite = loadProjectFromFiles(demoWith('data/site.yaml', '').filter((f) => f.path !== 'data/site.yaml'));
     expect(noSite.ok).toBe(false);
-    if (!noSite.ok) expect(noSite.errors.map((e) => e.message)).toContain('data/site.yaml:1:1 the file must exist (shop name, contact line, data revision, issue date), found no such file — create it; see docs/data-format.md');
+    if (!noSite.ok) expect(noSite.errors.map((e) => e.message)).toContain('data/site.yaml:1:1 the file must exist (shop name, contact line, data revision, issue date), found no such file — create it (matchbook start writes one in a new folder); see the data-format guide');
   });
 
   it('turns an unexpected failure into one located sentence instead of a stack trace', () => {
