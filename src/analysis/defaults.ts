@@ -93,3 +93,38 @@ export function defaultWallCharts(project: Project): SheetRequest[] {
     }));
   });
 }
+
+/** One way a chart's conditions differ from another's: a file-name word and the words for a title. */
+export interface ConditionsDifference {
+  /** "ratio-1p55", "salt", "1500m", "cruise-80-120-160kw". */
+  readonly slug: string;
+  /** "reduction 1.55:1", "salt water", "1500 m altitude", "cruise lines at 80, 120, 160 kW". */
+  readonly words: string;
+}
+
+const num = (n: number): string => String(Math.round(n * 100) / 100);
+
+/** How chart conditions a differ from b, in a fixed order; empty when they are the same. */
+export function conditionsDifferences(a: ChartConditions, b: ChartConditions, powerUnit: PowerUnit = 'kW'): ConditionsDifference[] {
+  const out: ConditionsDifference[] = [];
+  const word = (slug: string, words: string) => out.push({ slug, words });
+  if (a.driveLine.ratio !== b.driveLine.ratio) word(`ratio-${num(a.driveLine.ratio).replace('.', 'p')}`, a.driveLine.ratio === 1 ? 'direct drive' : `reduction ${a.driveLine.ratio.toFixed(2)}:1`);
+  if (a.driveLine.efficiency !== b.driveLine.efficiency) word(`eff-${Math.round(a.driveLine.efficiency * 100)}`, `${Math.round(a.driveLine.efficiency * 100)} % drive line`);
+  if (!sameWater(a.water, b.water)) {
+    word(a.water.kind === 'custom' ? `water-${Math.round(a.water.densityKgM3)}` : a.water.kind, a.water.kind === 'custom' ? `water of ${Math.round(a.water.densityKgM3)} kg/m³` : `${a.water.kind} water`);
+  }
+  const sa = a.site.ambient;
+  const sb = b.site.ambient;
+  if (a.site.altitudeM !== b.site.altitudeM || sa.pressureKpa !== sb.pressureKpa) {
+    if (a.site.altitudeM !== undefined) word(`${num(a.site.altitudeM).replace('.', 'p')}m`, `${num(a.site.altitudeM)} m altitude`);
+    else word(`${num(sa.pressureKpa).replace('.', 'p')}kpa`, `air at ${num(sa.pressureKpa)} kPa`);
+  }
+  if (sa.airTempC !== sb.airTempC) word(`${num(sa.airTempC).replace('.', 'p')}c`, `air at ${num(sa.airTempC)} °C`);
+  if (sa.relativeHumidityPct !== sb.relativeHumidityPct) word(`rh-${num(sa.relativeHumidityPct).replace('.', 'p')}`, `${num(sa.relativeHumidityPct)} % relative humidity`);
+  const kw = (c: readonly number[]): string => c.map((p) => Math.round(p)).join('-');
+  if (kw(a.cruisePowersKw) !== kw(b.cruisePowersKw)) {
+    const shown = a.cruisePowersKw.map((p) => Math.round(powerUnit === 'kW' ? p : kwToHp(p))).join(', ');
+    word(a.cruisePowersKw.length > 0 ? `cruise-${kw(a.cruisePowersKw)}kw` : 'no-cruise', a.cruisePowersKw.length > 0 ? `cruise lines at ${shown} ${powerUnit}` : 'no cruise lines');
+  }
+  return out;
+}

@@ -12,7 +12,7 @@
 import type { SheetRequest } from '../data/types.ts';
 import type { Scene, SceneNode } from '../scene/types.ts';
 import { analyseWallChart } from '../analysis/index.ts';
-import { pairingBoats } from '../analysis/defaults.ts';
+import { conditionsDifferences, defaultChartConditions, pairingBoats } from '../analysis/defaults.ts';
 import { engineSeries, impellerSeries, variantShortLabels } from './chart/series.ts';
 import { assembleScene } from './kit/assemble.ts';
 import { LayoutError } from './kit/errors.ts';
@@ -44,10 +44,14 @@ export function wallChartScene(request: WallChartRequest, ctx: SheetContext): Sc
   const unit = site.powerUnitFirst;
   const result = analyseWallChart({ family, jet, conditions });
   const type = typeScale(request.paper);
+  // A chart drawn under other conditions than the pairing's default chart says so in its title, so the
+  // two never pass for the same sheet on a wall or in a book.
+  const differs = conditionsDifferences(conditions, defaultChartConditions(family, unit, pairingBoats(ctx.project, family.id, jet.id)), unit).map((d) => d.words);
+  const differsText = differs.length > 0 ? ` (${differs.join(', ')})` : '';
   const frame = sheetFrame({
     paper: request.paper,
     site,
-    title: `${family.label} with ${jet.label}`,
+    title: `${family.label} with ${jet.label}${differsText}`,
     subtitle: `Impeller ladder: which impeller puts each engine variant in its WOT window · drawn for ${conditionsText(result.conditions)}`,
     dateIso: ctx.dateIso,
     type,
@@ -109,7 +113,7 @@ export function wallChartScene(request: WallChartRequest, ctx: SheetContext): Sc
       return assembleScene({
         frame,
         content,
-        title: `${family.label} with ${jet.label}: wall chart`,
+        title: `${family.label} with ${jet.label}: wall chart${differsText}`,
         description: `Impeller ladder for ${family.label} (${family.variants.length} variant${family.variants.length > 1 ? 's' : ''}) with ${jet.impellers.length} impellers of ${jet.label}: for each impeller and variant the predicted WOT rpm with its tolerance bar against the variant's recommended window and maximum rpm, and the status in words${room >= PANEL_MIN_HEIGHT_MM ? '; a power-against-rpm panel with every full-throttle and absorption curve' : ''}.`,
         subject: 'Impeller to engine match: wall chart',
         keywords: ['wall chart', family.id, jet.id],

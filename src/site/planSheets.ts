@@ -3,7 +3,7 @@
  * boat, and every sheet a book asks for. A sheet asked for twice (a boat's spec sheet in a book) is
  * drawn once.
  */
-import { defaultWallCharts } from '../analysis/index.ts';
+import { conditionsDifferences, defaultWallCharts } from '../analysis/index.ts';
 import type { Boat, Project, SheetRequest } from '../data/types.ts';
 import { sheetSlug } from '../sheets/index.ts';
 
@@ -37,32 +37,13 @@ function checkedSlug(slug: string): string {
   return slug;
 }
 
-const num = (n: number): string => String(Math.round(n * 100) / 100).replace('.', 'p');
-
 /**
  * Words naming how a wall chart's conditions differ from those of the first sheet with its base slug:
  * "ratio-1p55", "salt", "1500m", "cruise-80-120-160kw". Empty when the conditions are the same.
  */
 export function conditionsDifference(a: SheetRequest, b: SheetRequest): string[] {
   if (a.kind !== 'wallChart' || b.kind !== 'wallChart') return [];
-  const x = a.conditions;
-  const y = b.conditions;
-  const words: string[] = [];
-  if (x.driveLine.ratio !== y.driveLine.ratio) words.push(`ratio-${num(x.driveLine.ratio)}`);
-  if (x.driveLine.efficiency !== y.driveLine.efficiency) words.push(`eff-${Math.round(x.driveLine.efficiency * 100)}`);
-  if (x.water.kind !== y.water.kind || x.water.densityKgM3 !== y.water.densityKgM3) {
-    words.push(x.water.kind === 'custom' ? `water-${Math.round(x.water.densityKgM3)}` : x.water.kind);
-  }
-  const sa = x.site.ambient;
-  const sb = y.site.ambient;
-  if (x.site.altitudeM !== y.site.altitudeM || sa.pressureKpa !== sb.pressureKpa) {
-    words.push(x.site.altitudeM !== undefined ? `${num(x.site.altitudeM)}m` : `${num(sa.pressureKpa)}kpa`);
-  }
-  if (sa.airTempC !== sb.airTempC) words.push(`${num(sa.airTempC)}c`);
-  if (sa.relativeHumidityPct !== sb.relativeHumidityPct) words.push(`rh-${num(sa.relativeHumidityPct)}`);
-  const cruise = (c: readonly number[]): string => c.map((kw) => Math.round(kw)).join('-');
-  if (cruise(x.cruisePowersKw) !== cruise(y.cruisePowersKw)) words.push(x.cruisePowersKw.length > 0 ? `cruise-${cruise(x.cruisePowersKw)}kw` : 'no-cruise');
-  return words;
+  return conditionsDifferences(a.conditions, b.conditions).map((d) => d.slug);
 }
 
 const samePaper = (a: SheetRequest, b: SheetRequest): boolean =>
