@@ -12,7 +12,7 @@ import { calibrationText, MAX_TRIAL_ROWS, trialRows } from './trialTables.ts';
 import { assembleScene } from './kit/assemble.ts';
 import { paragraph, type Block } from './kit/block.ts';
 import { cautionsFlow } from './kit/cautions.ts';
-import { flowPages, splittable, whole, type Flowable } from './kit/flow.ts';
+import { chartHeightsMm, fewestPages, flowPages, splittable, whole, type Flowable } from './kit/flow.ts';
 import { sheetFrame } from './kit/frame.ts';
 import { stack, type Part } from './kit/stack.ts';
 import { INK, WARN, typeScale } from './kit/style.ts';
@@ -148,7 +148,7 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
   }
   const pages = fits(laid)
     ? [{ frame, nodes: laid.nodes }]
-    : flowPages({ frame: (n) => (n === 0 ? frame : continuedFrame(n)), gapMm: GAP_MM, parts: parts(Math.min(CHART_MAX_MM, Math.max(CHART_MIN_MM, box.height * 0.45)), trialRows(result, boat.jet.family.tolerancePct, { maxRows: most }), false), where });
+    : fewestPages(chartHeightsMm(box.height, CHART_MIN_MM, CHART_MAX_MM).map((chartMm) => () => flowPages({ frame: (n) => (n === 0 ? frame : continuedFrame(n)), gapMm: GAP_MM, parts: parts(chartMm, trialRows(result, boat.jet.family.tolerancePct, { maxRows: most }), false), where })));
   return assembleScene({
     frame,
     content: pages[0].nodes,

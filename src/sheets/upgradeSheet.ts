@@ -11,7 +11,7 @@ import type { EngineSeries } from './chart/seriesTypes.ts';
 import { assembleScene } from './kit/assemble.ts';
 import { paragraph } from './kit/block.ts';
 import { cautionsFlow } from './kit/cautions.ts';
-import { flowPages, whole, type Flowable } from './kit/flow.ts';
+import { chartHeightsMm, fewestPages, flowPages, whole, type Flowable } from './kit/flow.ts';
 import { numberText, percentText, powerText, rpmText } from './kit/format.ts';
 import { sheetFrame } from './kit/frame.ts';
 import { stack } from './kit/stack.ts';
@@ -156,7 +156,7 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
   const laid = fits(full) ? full : layout(true);
   const pages = fits(laid)
     ? [{ frame, nodes: laid.nodes }]
-    : flowPages({ frame: (n) => (n === 0 ? frame : continuedFrame(n)), gapMm: GAP_MM, parts: parts(Math.min(CHART_MAX_MM, Math.max(CHART_MIN_MM, box.height * 0.45)), false), where });
+    : fewestPages(chartHeightsMm(box.height, CHART_MIN_MM, CHART_MAX_MM).map((chartMm) => () => flowPages({ frame: (n) => (n === 0 ? frame : continuedFrame(n)), gapMm: GAP_MM, parts: parts(chartMm, false), where })));
   return assembleScene({
     frame,
     content: pages[0].nodes,

@@ -11,6 +11,9 @@ import { LayoutError } from './errors.ts';
 import type { SheetFrame } from './frame.ts';
 import type { Part } from './stack.ts';
 
+/** The least share of a keep-together part that may stay behind when it splits over a break. */
+const KEEP_SHARE = 0.4;
+
 export interface Flowable {
   readonly layout: Part;
   /**
@@ -66,10 +69,11 @@ export function flow(args: { slot: (index: number) => Box; gapMm: number; parts:
         slot.empty = false;
         break;
       }
-      // A part that would fit whole at the top of the next slot moves there rather than split (a table
-      // stays together where it can).
+      // A table that would fit whole at the top of the next slot moves there rather than leave a small
+      // piece behind: it splits here only when at least KEEP_SHARE of it fits.
       const fitsNext = part.keepTogether === true && block.heightMm <= args.slot(index + 1).height + 1e-6;
-      const piece = slot.empty || !fitsNext ? part.split?.(at, room) : undefined;
+      const split = part.split?.(at, room);
+      const piece = split && (slot.empty || !fitsNext || split.head.heightMm >= KEEP_SHARE * block.heightMm) ? split : undefined;
       if (piece) {
         slot.nodes.push(...piece.head.nodes);
         slot.bottomMm = y + piece.head.heightMm;
@@ -132,4 +136,23 @@ export function flowPages(args: { frame: (page: number) => SheetFrame; columns?:
     const mine = slots.slice(p * columns, (p + 1) * columns);
     return { frame: frameOf(p), nodes: mine.flatMap((s) => s.nodes), slots: mine.map((s, i) => ({ ...slot(p * columns + i), bottomMm: s.bottomMm })) };
   });
+}
+
+/**
+ * Chart heights (mm) a flowing sheet tries, largest first: as designed (at most 45 % of the content box),
+ * halfway, and the least.
+ */
+export function chartHeightsMm(boxHeightMm: number, minMm: number, maxMm: number): number[] {
+  const top = Math.min(maxMm, Math.max(minMm, boxHeightMm * 0.45));
+  return [...new Set([top, (top + minMm) / 2, minMm])];
+}
+
+/** The first of the layouts with the fewest pages (the candidates in order of preference). */
+export function fewestPages<T>(candidates: readonly (() => readonly T[])[]): readonly T[] {
+  let best: readonly T[] | undefined;
+  for (const make of candidates) {
+    const pages = make();
+    if (!best || pages.length < best.length) best = pages;
+  }
+  return best!;
 }
