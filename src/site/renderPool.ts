@@ -37,7 +37,8 @@ export function createRenderPool(opts: { size?: number } = {}): SheetRenderer {
         const job = pending.get(reply.id);
         pending.delete(reply.id);
         if (!job) return;
-        if (reply.ok) job.resolve({ svg: reply.svg, pdf: reply.pdf, png: reply.png });
+        // A sheet that continues on further pages brings their SVG and PNG too.
+        if (reply.ok) job.resolve({ svg: reply.svg, pdf: reply.pdf, png: reply.png, ...(reply.morePages ? { morePages: reply.morePages } : {}) });
         else job.reject(Object.assign(new Error(reply.message), { name: reply.name }));
       });
       worker.on('error', (error) => {

@@ -1,6 +1,7 @@
 /** The messages between the render pool (main thread) and its workers. */
 import type { PdfOptions } from '../render/index.ts';
 import type { Scene } from '../scene/types.ts';
+import type { RenderedSheet } from './renderCache.ts';
 
 export type RenderTask =
   | { readonly kind: 'sheet'; readonly scene: Scene }
@@ -9,5 +10,5 @@ export type RenderTask =
 export type RenderJob = RenderTask & { readonly id: number };
 
 export type RenderReply =
-  | { readonly id: number; readonly ok: true; readonly svg: string; readonly pdf: Uint8Array; readonly png: Uint8Array }
+  | { readonly id: number; readonly ok: true; readonly svg: string; readonly pdf: Uint8Array; readonly png: Uint8Array; readonly morePages?: RenderedSheet['morePages'] }
   | { readonly id: number; readonly ok: false; readonly name: string; readonly message: string };

@@ -5,10 +5,11 @@
  */
 import { parentPort } from 'node:worker_threads';
 import { renderPdf } from '../render/index.ts';
+import type { RenderedSheet } from './renderCache.ts';
 import type { RenderJob, RenderReply } from './renderProtocol.ts';
 import { renderSheetNow } from './renderSheet.ts';
 
-async function run(job: RenderJob): Promise<{ svg: string; pdf: Uint8Array; png: Uint8Array }> {
+async function run(job: RenderJob): Promise<RenderedSheet> {
   if (job.kind === 'sheet') return renderSheetNow(job.scene);
   return { svg: '', pdf: await renderPdf(job.scenes, job.options), png: new Uint8Array(0) };
 }
