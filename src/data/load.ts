@@ -182,8 +182,10 @@ function buildProject(checked: readonly Checked[]): Built {
   const ids = (kind: FileKind, key: string) => new Map(of(kind).flatMap((c) => (c.source ? [[c.stem, memberIds(c.source.value, key)] as const] : [])));
   const variantIds = ids('engine', 'variants');
   const impellerIds = ids('jet', 'impellers');
-  for (const c of of('boat')) if (c.source) errors.push(...looseBoatReferences({ source: c.source, engines, jets, variantIds, impellerIds }));
-  for (const c of of('book')) if (c.source) errors.push(...looseBookReferences({ source: c.source, engines, jets, boats }));
+  // A file that loaded had all its references resolved while normalising; only the others need the loose pass.
+  const failed = (c: Checked, registry: ReadonlyMap<string, unknown>) => c.source !== undefined && registry.get(c.stem) == null;
+  for (const c of of('boat')) if (failed(c, boats)) errors.push(...looseBoatReferences({ source: c.source!, engines, jets, variantIds, impellerIds }));
+  for (const c of of('book')) if (failed(c, books)) errors.push(...looseBookReferences({ source: c.source!, engines, jets, boats }));
   const siteFileChecked = of('site')[0];
   const site = siteFileChecked?.raw !== undefined ? normaliseSite(siteFileChecked.raw as never) : undefined;
   const sorted = <T extends { id: string }>(m: Map<string, T | null>) => [...m.values()].filter((x): x is T => x !== null).sort((a, b) => compareText(a.id, b.id));

@@ -53,7 +53,7 @@ function locateIssue(source: YamlSource, issue: Issue): DataError[] {
   }
   const valueAt = source.locate(issue.path);
   // A list with too many entries is named at its key (impellers:), not at its first entry.
-  const where = issue.code === 'too_big' && valueAt.found.startsWith('a list') ? { ...source.locate(issue.path, { at: 'key' }), found: valueAt.found, exists: valueAt.exists } : valueAt;
+  const where = issue.code === 'too_big' && Array.isArray(issue.input) ? { ...source.locate(issue.path, { at: 'key' }), found: valueAt.found, exists: valueAt.exists } : valueAt;
   const place = { file: source.file, line: where.line, column: where.column };
   const field = fieldName(issue.path);
   if (!where.exists) {

@@ -79,7 +79,7 @@ export function parseYaml(args: { file: string; text: string }): ParseResult {
             // A syntax error: find the real spot (the parser often stops a line late or at the end of
             // the file), say it in plain words, show the line with a caret, keep the parser's words last.
             const parsed = { code: e.code, message: e.message, start: e.pos[0], end: e.pos[1] };
-            const d = diagnoseSyntax(text, parsed);
+            const d = diagnoseSyntax(text, parsed, (offset) => lineCounter.linePos(offset));
             const parserAt = d.line === pos.line && d.column === pos.col ? '' : ` (it stopped at line ${pos.line}, column ${pos.col})`;
             return dataError(
               { file, line: d.line, column: d.column },
@@ -88,7 +88,7 @@ export function parseYaml(args: { file: string; text: string }): ParseResult {
             );
           }
           const keyPath = e.code === 'DUPLICATE_KEY' ? pathOfKeyAt(doc.contents as Node | null, e.pos[0], []) : undefined;
-          return dataError({ file, line: pos.line, column: pos.col }, yamlProblem({ code: e.code, message: e.message, excerpt: text.slice(e.pos[0], e.pos[1]), keyPath }));
+          return dataError({ file, line: pos.line, column: pos.col }, yamlProblem({ code: e.code, excerpt: text.slice(e.pos[0], e.pos[1]), keyPath }));
         }),
       };
     }
@@ -104,10 +104,8 @@ export function parseYaml(args: { file: string; text: string }): ParseResult {
 /** Parser codes that are not syntax mistakes and have their own wording below. */
 const KNOWN_CODES = new Set(['DUPLICATE_KEY', 'MULTIPLE_DOCS', 'TAG_RESOLVE_FAILED']);
 
-function yamlProblem(args: { code: string; message: string; excerpt: string; keyPath?: PathSegment[] }): { field: string; expected: string; found: string; fix?: string } {
-  const { code, message, excerpt, keyPath } = args;
-  // The parser's own message, cut before its " at line …" tail: our place prefix already says where.
-  const plain = message.split(/ at line \d+/)[0].replace(/\s+/g, ' ').trim();
+function yamlProblem(args: { code: string; excerpt: string; keyPath?: PathSegment[] }): { field: string; expected: string; found: string; fix?: string } {
+  const { code, excerpt, keyPath } = args;
   switch (code) {
     case 'DUPLICATE_KEY': {
       const key = keyPath?.length ? String(keyPath[keyPath.length - 1]) : excerpt;
@@ -116,10 +114,8 @@ function yamlProblem(args: { code: string; message: string; excerpt: string; key
     }
     case 'MULTIPLE_DOCS':
       return { field: '', expected: 'must hold one YAML document', found: 'a second document after ---', fix: 'remove the --- line or split the file' };
-    case 'TAG_RESOLVE_FAILED':
+    default: // TAG_RESOLVE_FAILED; every other code is a syntax error, worded by yamlSyntax.ts
       return { field: '', expected: 'must use plain YAML values without custom tags', found: shorten(excerpt, 40), fix: 'remove the tag' };
-    default:
-      return { field: '', expected: 'must be valid YAML', found: `a syntax error (${plain})` };
   }
 }
 

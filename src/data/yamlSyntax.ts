@@ -7,6 +7,10 @@
  * and names the real spot, in words, with the fix. Anything it does not recognise keeps the parser's
  * position and a plain translation of the parser's words.
  */
+import { shorten } from './errors.ts';
+
+/** Quoted text in a message: one line, at most 40 characters. */
+const clip = (text: string): string => shorten(text, 40);
 
 export interface ParserError {
   readonly code: string;
@@ -48,10 +52,10 @@ const KEY_LINE = /^(\s*(?:-\s+)*)([^\s\-?:#,[\]{}"'][^:#]*?|"[^"]*"|'[^']*'):(?=
 const PLAIN_WORD_KEY = /^(\s*(?:-\s+)*)([A-Za-z_][A-Za-z0-9_-]*):([^\s:])/;
 
 /** The real spot and plain words for the parser's first syntax error. */
-export function diagnoseSyntax(text: string, error: ParserError): SyntaxDiagnosis {
-  const starts = lineStarts(text);
-  const at = position(starts, error.start);
-  const endLine = position(starts, Math.max(error.start, error.end - 1)).line;
+export function diagnoseSyntax(text: string, error: ParserError, linePos: (offset: number) => { line: number; col: number }): SyntaxDiagnosis {
+  const start = linePos(error.start);
+  const at = { line: start.line, column: start.col };
+  const endLine = linePos(Math.max(error.start, error.end - 1)).line;
   const scan = scanText(text);
   const candidates: SyntaxDiagnosis[] = [];
   if (scan.quote && scan.quote.line <= Math.max(at.line, endLine)) {
@@ -302,28 +306,6 @@ function nextContent(lines: readonly ScannedLine[], i: number): ScannedLine | un
 function previousContent(lines: readonly ScannedLine[], i: number): ScannedLine | undefined {
   for (let j = i - 1; j >= 0; j--) if (lines[j].masked !== '' && !lines[j].inside) return lines[j];
   return undefined;
-}
-
-function lineStarts(text: string): number[] {
-  const starts = [0];
-  for (let i = 0; i < text.length; i++) if (text.charCodeAt(i) === 10) starts.push(i + 1);
-  return starts;
-}
-
-function position(starts: readonly number[], offset: number): { line: number; column: number } {
-  let lo = 0;
-  let hi = starts.length - 1;
-  while (lo < hi) {
-    const mid = (lo + hi + 1) >> 1;
-    if (starts[mid] <= offset) lo = mid;
-    else hi = mid - 1;
-  }
-  return { line: lo + 1, column: offset - starts[lo] + 1 };
-}
-
-function clip(text: string, max = 40): string {
-  const one = text.replace(/\s+/g, ' ').trim();
-  return one.length > max ? `${one.slice(0, max - 1)}…` : one;
 }
 
 /**

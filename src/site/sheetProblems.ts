@@ -8,7 +8,7 @@
 import { readFileSync } from 'node:fs';
 import { dataError, fieldName } from '../data/errors.ts';
 import type { DataError, Project, SheetRequest } from '../data/types.ts';
-import { parseYaml, type PathSegment } from '../data/yamlSource.ts';
+import { parseYaml, type PathSegment, type YamlSource } from '../data/yamlSource.ts';
 import { sheetScene } from '../sheets/index.ts';
 import { isUserFixable, type SheetDrawError } from './errors.ts';
 import { planSheets, type SheetPlan } from './planSheets.ts';
@@ -28,13 +28,14 @@ export interface SheetProblemOptions {
 /** Every sheet of the build laid out; a located error for each one that cannot be. */
 export function layoutProblems(project: Project, opts: SheetProblemOptions & { dateIso: string; plan?: SheetPlan }): DataError[] {
   const plan = opts.plan ?? planSheets(project);
+  const place = placeFinder(opts.readText);
   const problems: DataError[] = [];
   for (const { slug, request } of plan.sheets) {
     try {
       sheetScene(request, { project, dateIso: opts.dateIso });
     } catch (error) {
       if (!isUserFixable(error)) throw error;
-      problems.push(sheetProblem({ project, plan, slug, request, cause: error, readText: opts.readText }));
+      problems.push(sheetProblem({ project, plan, slug, request, cause: error, place }));
     }
   }
   return problems;
@@ -46,7 +47,7 @@ export function sheetDrawProblem(project: Project, error: SheetDrawError, opts: 
   const planned = plan.sheets.find((s) => s.slug === error.slug);
   const cause = error.cause instanceof Error ? error.cause : error;
   if (!planned) return dataError({ file: 'site.yaml', line: 1, column: 1 }, { field: '', expected: `must give a sheet ${error.slug} that can be drawn`, found: cause.message });
-  return sheetProblem({ project, plan, slug: error.slug, request: planned.request, cause, readText: opts.readText });
+  return sheetProblem({ project, plan, slug: error.slug, request: planned.request, cause, place: placeFinder(opts.readText) });
 }
 
 interface Origin {
@@ -70,13 +71,25 @@ function originOf(project: Project, plan: SheetPlan, slug: string, request: Shee
   return { file: 'site.yaml', path: [] };
 }
 
-function sheetProblem(args: { project: Project; plan: SheetPlan; slug: string; request: SheetRequest; cause: Error; readText?: SheetProblemOptions['readText'] }): DataError {
+type PlaceFinder = (file: string, path: readonly PathSegment[]) => { line: number; column: number };
+
+/** Where a field's key is in its file; each file is read and parsed once however many sheets it fails. */
+function placeFinder(read: SheetProblemOptions['readText'] = readText): PlaceFinder {
+  const sources = new Map<string, YamlSource | undefined>();
+  return (file, path) => {
+    if (!sources.has(file)) {
+      const text = read(file);
+      const parsed = text === undefined ? undefined : parseYaml({ file, text });
+      sources.set(file, parsed?.ok ? parsed.source : undefined);
+    }
+    return sources.get(file)?.locate(path, { at: 'key' }) ?? { line: 1, column: 1 };
+  };
+}
+
+function sheetProblem(args: { project: Project; plan: SheetPlan; slug: string; request: SheetRequest; cause: Error; place: PlaceFinder }): DataError {
   const { request } = args;
   const origin = originOf(args.project, args.plan, args.slug, request);
-  const read = args.readText ?? ((file: string) => readText(file));
-  const text = read(origin.file);
-  const parsed = text === undefined ? undefined : parseYaml({ file: origin.file, text });
-  const where = parsed?.ok ? parsed.source.locate(origin.path, { at: 'key' }) : { line: 1, column: 1 };
+  const where = args.place(origin.file, origin.path);
   const p = request.paper;
   const paper = `${p.size === 'Card4x6' ? '4x6' : p.size} ${p.orientation}${p.bleedMm > 0 ? ' with bleed' : ''}`;
   const about = request.kind === 'wallChart' ? `engine family ${request.engineFamilyId} with jet ${request.jetId}` : `boat ${request.boatId}`;
