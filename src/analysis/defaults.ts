@@ -4,13 +4,13 @@
  * boats that pair the two: their most common drive line, and their water and site when all of them share
  * one; anything the boats do not settle stays standard (direct drive, fresh water, a warm day at the coast).
  */
-import type { Boat, ChartConditions, EngineFamily, Project, SheetRequest, Site, Water } from '../data/types.ts';
+import type { Boat, BookSheet, ChartConditions, EngineFamily, Project, SheetRequest, Site, Water } from '../data/types.ts';
 import type { DriveLineSpec } from '../model/index.ts';
 import { engineCurve, FRESH_WATER_KG_M3 } from '../model/index.ts';
 import { hpToKw, kwToHp } from '../units.ts';
 import type { PowerUnit } from '../data/types.ts';
 import { curveKeyNumbers } from './results.ts';
-import { SEA_LEVEL_SITE } from '../data/normalise/conditions.ts';
+import { applySite, SEA_LEVEL_SITE } from '../data/normalise/conditions.ts';
 
 /**
  * The site a sheet assumes when nothing says otherwise: the same sea-level site (ISA pressure, 25 °C,
@@ -92,6 +92,28 @@ export function defaultWallCharts(project: Project): SheetRequest[] {
       paper: { size: 'A3' as const, orientation: 'landscape' as const, bleedMm: 0 },
     }));
   });
+}
+
+/**
+ * A book's sheet as a request: a wall chart's conditions completed field by field from the pairing's
+ * default chart (its boats' drive line, water and site, the automatic cruise lines), so a book chart that
+ * gives no conditions is the very chart the pairing gets anyway, and one that gives some differs only there.
+ */
+export function bookSheetRequest(project: Pick<Project, 'boats' | 'engines' | 'site'>, sheet: BookSheet): SheetRequest {
+  if (sheet.kind !== 'wallChart') return sheet;
+  const family = project.engines.find((f) => f.id === sheet.engineFamilyId);
+  if (!family) throw new Error(`book sheet names engine family "${sheet.engineFamilyId}", which the loader should have refused`);
+  const base = defaultChartConditions(family, project.site.powerUnitFirst, pairingBoats(project, family.id, sheet.jetId));
+  const given = sheet.conditions;
+  return {
+    ...sheet,
+    conditions: {
+      driveLine: given.driveLine ?? base.driveLine,
+      water: given.water ?? base.water,
+      site: given.site ? applySite(given.site, base.site) : base.site,
+      cruisePowersKw: given.cruisePowersKw ?? base.cruisePowersKw,
+    },
+  };
 }
 
 /** One way a chart's conditions differ from another's: a file-name word and the words for a title. */

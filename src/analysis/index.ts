@@ -2,7 +2,7 @@
 export { analyseWallChart, chartInstallation, type WallChartResult, type WallChartPairing, type WallChartVariant, type WallChartImpeller, type CruiseCrossing } from './wallChart.ts';
 export { analyseBoat, boatInstallation, RPM_GAINS, UPGRADE_STEPS_PCT, windowPlace, type BoatResult, type CalibratedFigures, type CruiseRow, type AlternativeRow, type UpgradeRow, type RpmGainRow, type WindowPlace } from './boat.ts';
 export { calibratedBand, calibratedBandNote, FIT_SE_MULTIPLE, READING_SCATTER_PCT } from './boatCalibratedBand.ts';
-export { conditionsDifferences, defaultWallCharts, defaultChartConditions, pairingBoats, DEFAULT_SITE, DEFAULT_CRUISE_FRACTIONS, type ConditionsDifference } from './defaults.ts';
+export { bookSheetRequest, conditionsDifferences, defaultWallCharts, defaultChartConditions, pairingBoats, DEFAULT_SITE, DEFAULT_CRUISE_FRACTIONS, type ConditionsDifference } from './defaults.ts';
 export { STATUS_WORDS, bandVerdict, isWarning, toleranceNote, worstStatus } from './status.ts';
 export type { PointResult, BandResult, ConditionsResult, CurveKeyNumbers, LimitsResult } from './results.ts';
 export { boatCalibration, boatTrials, calibratedBoatInstallation, calibrationResult, type CalibrationResult, type TrialRow } from './boatCalibration.ts';

@@ -64,6 +64,16 @@ export interface Site {
   readonly altitudeM?: number;
 }
 
+/** The site fields a file gives (kPa, °C, %), laid over another site for the ones it leaves out. */
+export interface SiteFields {
+  readonly label?: string;
+  readonly pressureKpa?: number;
+  /** Given with pressureKpa when the file gave an altitude. */
+  readonly altitudeM?: number;
+  readonly airTempC?: number;
+  readonly relativeHumidityPct?: number;
+}
+
 /** A cruise setting of interest: by power, by engine rpm, or by boat speed (knots). */
 export type CruiseSetting =
   | { readonly kind: 'power'; readonly label: string; readonly powerKw: number }
@@ -142,11 +152,34 @@ export type SheetRequest =
 
 export type Audience = 'shop' | 'dealer' | 'owner';
 
+/**
+ * A book's wall-chart conditions as its file gives them: what it leaves out comes from the pairing's
+ * default chart (analysis/defaults.ts), so a book chart without conditions is the pairing's own chart.
+ */
+export interface BookChartConditions {
+  readonly driveLine?: DriveLineSpec;
+  readonly water?: Water;
+  readonly site?: SiteFields;
+  /** Constant-power cruise lines, kW; the default chart's automatic ones when absent. */
+  readonly cruisePowersKw?: readonly number[];
+}
+
+/** A sheet a book lists: a SheetRequest, except that a wall chart's conditions are still to be completed. */
+export type BookSheet =
+  | Exclude<SheetRequest, { readonly kind: 'wallChart' }>
+  | {
+      readonly kind: 'wallChart';
+      readonly engineFamilyId: string;
+      readonly jetId: string;
+      readonly conditions: BookChartConditions;
+      readonly paper: Paper;
+    };
+
 export interface Book {
   readonly id: string;
   readonly title: string;
   readonly audience: Audience;
-  readonly sheets: readonly SheetRequest[];
+  readonly sheets: readonly BookSheet[];
   readonly source: SourceRef;
 }
 

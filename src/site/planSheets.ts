@@ -3,7 +3,7 @@
  * boat, and every sheet a book asks for. A sheet asked for twice (a boat's spec sheet in a book) is
  * drawn once.
  */
-import { conditionsDifferences, defaultWallCharts } from '../analysis/index.ts';
+import { bookSheetRequest, conditionsDifferences, defaultWallCharts } from '../analysis/index.ts';
 import type { Boat, Project, SheetRequest } from '../data/types.ts';
 import { sheetSlug } from '../sheets/index.ts';
 
@@ -90,6 +90,6 @@ export function planSheets(project: Project): SheetPlan {
     if (request.kind === 'wallChart') byFamily.get(request.engineFamilyId)?.push(add(request));
   }
   const byBoat = new Map(project.boats.map((b) => [b.id, boatSheetRequests(b).map(add)]));
-  const byBook = new Map(project.books.map((b) => [b.id, b.sheets.map(add)]));
+  const byBook = new Map(project.books.map((b) => [b.id, b.sheets.map((s) => add(bookSheetRequest(project, s)))]));
   return { sheets: [...sheets.values()], byFamily, byBoat, byBook };
 }

@@ -3,6 +3,7 @@ import { checkData } from '../../src/data/check.ts';
 import { loadProject } from '../../src/data/load.ts';
 import type { Project } from '../../src/data/types.ts';
 import { solveInstallation } from '../../src/model/installation.ts';
+import { bookSheetRequest } from '../../src/analysis/index.ts';
 import { demoFiles } from './helpers.ts';
 
 async function demo(): Promise<Project> {
@@ -60,7 +61,7 @@ describe('the demo data in data/ is an invented fleet that exercises every featu
       solveInstallation({ engine: b.engine, ambient: b.site.ambient, family: b.jet.family, impeller: b.jet.impellers.find((i) => i.id === b.impellerId)!, driveLine: b.driveLine, waterDensityKgM3: b.water.densityKgM3 }).status,
     );
     expect(statuses.filter((s) => s === 'matched').length).toBeGreaterThanOrEqual(4);
-    const wall = p.books.find((b) => b.id === 'shop-wall-charts')!.sheets[0];
+    const wall = bookSheetRequest(p, p.books.find((b) => b.id === 'shop-wall-charts')!.sheets[0]);
     if (wall.kind !== 'wallChart') throw new Error('expected a wall chart first');
     const engine = p.engines.find((e) => e.id === wall.engineFamilyId)!.variants[0];
     const jet = p.jets.find((j) => j.id === wall.jetId)!;

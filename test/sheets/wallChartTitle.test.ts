@@ -6,25 +6,50 @@
 import { describe, expect, it } from 'vitest';
 import { conditionsDifferences, defaultChartConditions } from '../../src/analysis/index.ts';
 import { loadProject } from '../../src/data/load.ts';
+import { applySite } from '../../src/data/normalise/conditions.ts';
 import type { ChartConditions } from '../../src/data/types.ts';
 import { sheetScene } from '../../src/sheets/index.ts';
 import { planSheets } from '../../src/site/planSheets.ts';
 
 describe('a wall chart says how its conditions differ from the default', () => {
-  it('in the demo: the default charts carry no note, the books\' charts name their cruise lines, title and slug agreeing', async () => {
+  it("in the demo: a book's chart without conditions is the pairing's own chart; one with conditions names what differs, title and slug agreeing", async () => {
     const r = await loadProject('data');
     if (!r.ok) throw new Error('demo did not load');
-    const titles = planSheets(r.project)
-      .sheets.filter((s) => s.request.kind === 'wallChart')
+    const plan = planSheets(r.project);
+    const titles = plan.sheets
+      .filter((s) => s.request.kind === 'wallChart')
       .map((s) => `${s.slug} | ${sheetScene(s.request, { project: r.project, dateIso: '2026-01-01' }).title}`);
     expect(titles).toEqual([
       'wall-chart-brindlecombe-td6-vennick-260 | Brindlecombe TD6 6.0 L with Vennick 260 jet unit: wall chart',
       'wall-chart-corbrick-four-tarnwell-212 | Corbrick 2.3 four with Tarnwell 212 jet unit: wall chart',
       'wall-chart-harrowgate-v8-tarnwell-212 | Harrowgate 5.7 V8 with Tarnwell 212 jet unit: wall chart',
-      'wall-chart-harrowgate-v8-tarnwell-212-cruise-80-120-160kw | Harrowgate 5.7 V8 with Tarnwell 212 jet unit: wall chart (cruise lines at 80, 120, 160 kW)',
-      'wall-chart-brindlecombe-td6-vennick-260-cruise-120-180-240kw | Brindlecombe TD6 6.0 L with Vennick 260 jet unit: wall chart (cruise lines at 120, 180, 240 kW)',
-      'wall-chart-corbrick-four-tarnwell-212-cruise-45-75kw | Corbrick 2.3 four with Tarnwell 212 jet unit: wall chart (cruise lines at 45, 75 kW)',
+      'wall-chart-corbrick-four-tarnwell-212-salt-cruise-45-75kw | Corbrick 2.3 four with Tarnwell 212 jet unit: wall chart (salt water, cruise lines at 45, 75 kW)',
     ]);
+    // data/books/shop-wall-charts.yaml: the first two entries give no conditions and are the default charts themselves.
+    expect(plan.byBook.get('shop-wall-charts')).toEqual(['wall-chart-harrowgate-v8-tarnwell-212', 'wall-chart-brindlecombe-td6-vennick-260', 'wall-chart-corbrick-four-tarnwell-212-salt-cruise-45-75kw']);
+  });
+
+  it("completes a book chart's conditions field by field from the pairing's default chart", async () => {
+    const r = await loadProject('data');
+    if (!r.ok) throw new Error('demo did not load');
+    const plan = planSheets(r.project);
+    const request = (slug: string) => plan.sheets.find((s) => s.slug === slug)!.request;
+    const pairing = request('wall-chart-corbrick-four-tarnwell-212');
+    const salt = request('wall-chart-corbrick-four-tarnwell-212-salt-cruise-45-75kw');
+    if (pairing.kind !== 'wallChart' || salt.kind !== 'wallChart') throw new Error('expected wall charts');
+    // The book gives water and cruise lines only: the drive line (the corbrick boats' 1.55:1, 96 %) and the site stay the pairing's.
+    expect(salt.conditions.driveLine).toEqual({ ratio: 1.55, efficiency: 0.96 });
+    expect(salt.conditions.driveLine).toEqual(pairing.conditions.driveLine);
+    expect(salt.conditions.site).toEqual(pairing.conditions.site);
+    expect(salt.conditions.water.kind).toBe('salt');
+    // 60 and 100 hp as typed (mechanical horsepower, 745.699 87 W, NIST SP 811 appendix B).
+    expect(salt.conditions.cruisePowersKw.map((kw) => kw / 0.74569987)).toEqual([expect.closeTo(60, 5), expect.closeTo(100, 5)]);
+  });
+
+  it('lays a partial site over the pairing site: only the fields the book gives change', () => {
+    const base = { label: 'Upland lake', altitudeM: 1500, ambient: { pressureKpa: 84.6, airTempC: 12, relativeHumidityPct: 60 } };
+    expect(applySite({ relativeHumidityPct: 80 }, base)).toEqual({ label: 'Upland lake', altitudeM: 1500, ambient: { pressureKpa: 84.6, airTempC: 12, relativeHumidityPct: 80 } });
+    expect(applySite({ airTempC: 30 }, base)).toEqual({ label: '1500 m altitude, 30 °C', altitudeM: 1500, ambient: { pressureKpa: 84.6, airTempC: 30, relativeHumidityPct: 60 } });
   });
 
   it('names every kind of difference in words and in a file-name word', async () => {

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { loadProject } from '../../src/data/load.ts';
+import { bookSheetRequest } from '../../src/analysis/index.ts';
 import { boatSheetRequests, planSheets } from '../../src/site/planSheets.ts';
 import type { Project } from '../../src/data/types.ts';
 
@@ -32,7 +33,7 @@ describe('planSheets()', () => {
       expect(bookSlugs.length).toBe(book.sheets.length);
       bookSlugs.forEach((slug, i) => {
         const planned = plan.sheets.find((s) => s.slug === slug);
-        expect(planned?.request).toEqual(book.sheets[i]);
+        expect(planned?.request).toEqual(bookSheetRequest(project, book.sheets[i]));
       });
     }
   });
@@ -44,12 +45,13 @@ describe('planSheets()', () => {
   it('names a book sheet after what differs from the default sheet: conditions, then paper only when it differs', async () => {
     const plan = planSheets(await demo());
     const slugs = plan.sheets.map((s) => s.slug);
-    // data/books/shop-wall-charts.yaml: same A3 landscape paper as the default charts, its own cruise lines
-    // (60 and 100 hp are 44.7 and 74.6 kW, 1 hp = 0.7457 kW, NIST SP 811).
+    // data/books/shop-wall-charts.yaml: same A3 landscape paper as the default charts; two give no conditions
+    // (the default charts themselves), one salt water and its own cruise lines (60 and 100 hp are 44.7 and
+    // 74.6 kW, 1 hp = 0.7457 kW, NIST SP 811).
     expect(plan.byBook.get('shop-wall-charts')).toEqual([
-      'wall-chart-harrowgate-v8-tarnwell-212-cruise-80-120-160kw',
-      'wall-chart-brindlecombe-td6-vennick-260-cruise-120-180-240kw',
-      'wall-chart-corbrick-four-tarnwell-212-cruise-45-75kw',
+      'wall-chart-harrowgate-v8-tarnwell-212',
+      'wall-chart-brindlecombe-td6-vennick-260',
+      'wall-chart-corbrick-four-tarnwell-212-salt-cruise-45-75kw',
     ]);
     expect(slugs).toContain('spec-brine-lark-letter-portrait');
     expect(slugs.filter((s) => s.includes('a3-landscape'))).toEqual([]);

@@ -2,10 +2,10 @@
 import { hpToKw } from '../../units.ts';
 import { resolve, type Registry } from '../references.ts';
 import type { RawBookFile, RawPaper, RawSheet } from '../schema/book.ts';
-import type { Boat, Book, DataError, EngineFamily, JetUnit, Paper, SheetRequest } from '../types.ts';
+import type { Boat, Book, BookChartConditions, BookSheet, DataError, EngineFamily, JetUnit, Paper } from '../types.ts';
 import { at } from '../validate.ts';
 import type { YamlSource } from '../yamlSource.ts';
-import { toSite, toWater } from './conditions.ts';
+import { siteFields, toWater } from './conditions.ts';
 import type { Normalised } from './shared.ts';
 
 export interface BookRegistries {
@@ -65,20 +65,15 @@ export function toPaper(p: RawPaper): Paper {
   return { size: p.size === '4x6' ? 'Card4x6' : p.size, orientation: p.orientation, bleedMm: p.bleed_mm };
 }
 
-function toSheet(s: RawSheet, paper: Paper): SheetRequest {
+function toSheet(s: RawSheet, paper: Paper): BookSheet {
   if (s.kind !== 'wallChart') return { kind: s.kind, boatId: s.boat, paper };
-  const c = s.conditions;
-  const cruisePowersKw = c.cruise_powers_kw ?? (c.cruise_powers_hp ?? []).map(hpToKw);
-  return {
-    kind: 'wallChart',
-    engineFamilyId: s.engine,
-    jetId: s.jet,
-    conditions: {
-      driveLine: { ratio: c.drive_line.ratio, efficiency: c.drive_line.efficiency },
-      water: toWater(c.water),
-      site: toSite(c.site),
-      cruisePowersKw: [...cruisePowersKw].sort((a, b) => a - b),
-    },
-    paper,
+  const c = s.conditions ?? {};
+  const cruisePowersKw = c.cruise_powers_kw ?? c.cruise_powers_hp?.map(hpToKw);
+  const conditions: BookChartConditions = {
+    ...(c.drive_line ? { driveLine: { ratio: c.drive_line.ratio, efficiency: c.drive_line.efficiency } } : {}),
+    ...(c.water !== undefined ? { water: toWater(c.water) } : {}),
+    ...(c.site ? { site: siteFields(c.site) } : {}),
+    ...(cruisePowersKw ? { cruisePowersKw: [...cruisePowersKw].sort((a, b) => a - b) } : {}),
   };
+  return { kind: 'wallChart', engineFamilyId: s.engine, jetId: s.jet, conditions, paper };
 }

@@ -4,7 +4,7 @@ import type { Ambient } from '../../model/types.ts';
 import { FRESH_WATER_KG_M3, SALT_WATER_KG_M3 } from '../../standards/water.ts';
 import { fToC, hpaToKpa, inHgToKpa } from '../../units.ts';
 import type { RawConditions } from '../schema/common.ts';
-import type { Site, Water } from '../types.ts';
+import type { Site, SiteFields, Water } from '../types.ts';
 
 /**
  * Reference conditions of a curve when the file states none: 100 kPa total, 25 °C, 30 % relative
@@ -30,17 +30,32 @@ export function toWater(raw: RawWater): Water {
 
 /** Conditions from a file, each field falling back to base (a trial falls back to its boat's site). */
 export function toSite(raw: RawConditions | undefined, base: Site = SEA_LEVEL_SITE): Site {
+  return applySite(siteFields(raw), base);
+}
+
+/** The site fields a file gives (any unit, in kPa and °C), without the ones it leaves out. */
+export function siteFields(raw: RawConditions | undefined): SiteFields {
   const r = raw ?? {};
   const pressure = pressureFrom(r);
-  const airTempC = r.air_temp_c ?? (r.air_temp_f !== undefined ? fToC(r.air_temp_f) : base.ambient.airTempC);
-  const ambient: Ambient = {
-    pressureKpa: pressure?.pressureKpa ?? base.ambient.pressureKpa,
-    airTempC,
-    relativeHumidityPct: r.humidity_pct ?? base.ambient.relativeHumidityPct,
+  const airTempC = r.air_temp_c ?? (r.air_temp_f !== undefined ? fToC(r.air_temp_f) : undefined);
+  return {
+    ...(r.label !== undefined ? { label: r.label } : {}),
+    ...(pressure ? { pressureKpa: pressure.pressureKpa, ...(pressure.altitudeM !== undefined ? { altitudeM: pressure.altitudeM } : {}) } : {}),
+    ...(airTempC !== undefined ? { airTempC } : {}),
+    ...(r.humidity_pct !== undefined ? { relativeHumidityPct: r.humidity_pct } : {}),
   };
-  const altitudeM = pressure ? pressure.altitudeM : base.altitudeM;
-  const changed = pressure !== undefined || r.air_temp_c !== undefined || r.air_temp_f !== undefined;
-  const label = r.label ?? (changed ? describe(ambient, altitudeM) : base.label);
+}
+
+/** Site fields laid over a base site: what the fields leave out comes from the base; a new label when pressure or temperature changed. */
+export function applySite(fields: SiteFields, base: Site = SEA_LEVEL_SITE): Site {
+  const ambient: Ambient = {
+    pressureKpa: fields.pressureKpa ?? base.ambient.pressureKpa,
+    airTempC: fields.airTempC ?? base.ambient.airTempC,
+    relativeHumidityPct: fields.relativeHumidityPct ?? base.ambient.relativeHumidityPct,
+  };
+  const altitudeM = fields.pressureKpa !== undefined ? fields.altitudeM : base.altitudeM;
+  const changed = fields.pressureKpa !== undefined || fields.airTempC !== undefined;
+  const label = fields.label ?? (changed ? describe(ambient, altitudeM) : base.label);
   return altitudeM === undefined ? { label, ambient } : { label, ambient, altitudeM };
 }
 

@@ -14,9 +14,9 @@ export const paper = () =>
 const chartConditions = () =>
   unitChoices(
     z.strictObject({
-      drive_line: driveLine().default({ ratio: 1, efficiency: 0.97 }),
-      water: water().default('fresh'),
-      site: conditions().default({}),
+      drive_line: driveLine().optional(),
+      water: water().optional(),
+      site: conditions().optional(),
       cruise_powers_kw: z.array(positive()).optional(),
       cruise_powers_hp: z.array(positive()).optional(),
     }),
@@ -31,7 +31,7 @@ const sheet = () =>
   z.discriminatedUnion(
     'kind',
     [
-      z.strictObject({ kind: z.literal('wallChart'), engine: slug(), jet: slug(), conditions: chartConditions().default({ drive_line: { ratio: 1, efficiency: 0.97 }, water: 'fresh', site: {} }), paper: paper().optional() }),
+      z.strictObject({ kind: z.literal('wallChart'), engine: slug(), jet: slug(), conditions: chartConditions().optional(), paper: paper().optional() }),
       boatSheet('specSheet'),
       boatSheet('consoleCard'),
       boatSheet('upgradeSheet'),
