@@ -9,7 +9,7 @@ import { wallChartScene } from './wallChart.ts';
 
 export { sheetSlug } from './slug.ts';
 export { LayoutError } from './kit/errors.ts';
-export { BOAT_SHEET_PAPERS } from './papers.ts';
+export { BOAT_SHEET_PAPERS, WALL_CHART_PAPERS } from './papers.ts';
 export { BUILT_IN_CAUTIONS, cautionsFor } from './kit/cautions.ts';
 export type { SheetContext } from './context.ts';
 

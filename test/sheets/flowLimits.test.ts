@@ -10,7 +10,8 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { Paper, Project, SheetRequest } from '../../src/data/types.ts';
 import { scenePages, type Scene } from '../../src/scene/types.ts';
-import { BOAT_SHEET_PAPERS, cautionsFor, sheetScene } from '../../src/sheets/index.ts';
+import { defaultWallCharts } from '../../src/analysis/index.ts';
+import { BOAT_SHEET_PAPERS, cautionsFor, sheetScene, WALL_CHART_PAPERS } from '../../src/sheets/index.ts';
 import { demoProject } from './fixtures/boatVariation.ts';
 import { catalogueProject, LIMITS, stressProject, type Catalogue, type StressCase } from './fixtures/stressProjects.ts';
 import { sceneProblems } from './sceneChecks.ts';
@@ -117,5 +118,64 @@ describe('catalogues across the limits (seeded property)', () => {
       }),
       { seed: 20261203, numRuns: 25, endOnFailure: true },
     );
+  });
+});
+
+describe('wall chart at the limits', () => {
+  /** A3 and Tabloid (the papers it is made for, src/sheets/papers.ts), both orientations, with and without bleed. */
+  const papers: Paper[] = WALL_CHART_PAPERS.flatMap((size) => [
+    { size, orientation: 'landscape', bleedMm: 0 },
+    { size, orientation: 'portrait', bleedMm: 0 },
+    { size, orientation: 'landscape', bleedMm: 3 },
+  ] as Paper[]);
+
+  it.each(CASES)('stress catalogue %s: every impeller of every variant on some page, each page inside the print rules', (which) => {
+    const project = stressProject(demo, which);
+    const boat = project.boats[0];
+    const family = project.engines.find((f) => f.id === boat.engineFamilyId)!;
+    const problems: string[] = [];
+    for (const paper of papers) {
+      const request = { ...defaultWallCharts(project).find((r) => r.kind === 'wallChart' && r.engineFamilyId === family.id && r.jetId === boat.jet.id)!, paper } as SheetRequest;
+      const scene = sheetScene(request, { project, dateIso: '2026-12-03' });
+      const pages = scenePages(scene);
+      const where = `${paper.size} ${paper.orientation} bleed ${paper.bleedMm}`;
+      pages.forEach((page, i) => problems.push(...sceneProblems(page, paper).map((p) => `${where} page ${i + 1}: ${p}`)));
+      // Each (impeller, variant) cell's predicted rpm is printed exactly once over the pages.
+      const cells = pages.flatMap((page) => texts(page).filter((t) => t.role === 'ladder-rpm').map((t) => t.key));
+      for (const imp of boat.jet.impellers) {
+        for (const v of family.variants) {
+          const n = cells.filter((k) => k === `impeller:${imp.id}|engine:${v.variantId}`).length;
+          if (n !== 1) problems.push(`${where}: ${imp.label} × ${v.label} printed ${n} times`);
+        }
+      }
+      // Every impeller label whole, the cautions on every page, every page the same paper.
+      const words = sheetWords(scene);
+      for (const imp of boat.jet.impellers) if (!words.includes(imp.label)) problems.push(`${where}: impeller label not printed in full: "${imp.label}"`);
+      for (const [i, page] of pages.entries()) {
+        const cautionWords = texts(page).filter((t) => t.role === 'caution').map((t) => t.text).join(' ').replace(/\s+/g, ' ');
+        for (const text of cautionsFor(project.site)) if (!cautionWords.includes(text.replace(/\s+/g, ' '))) problems.push(`${where} page ${i + 1}: caution not printed in full: "${text.slice(0, 40)}…"`);
+        if (page.widthMm !== scene.widthMm || page.heightMm !== scene.heightMm) problems.push(`${where}: a page of another size`);
+      }
+    }
+    expect(problems.join('\n')).toBe('');
+  });
+
+  it('continues over pages of the same paper when six variants are too wide for one, each page titled with its number and its variants', () => {
+    const project = stressProject(demo, 'A');
+    const boat = project.boats[0];
+    const family = project.engines.find((f) => f.id === boat.engineFamilyId)!;
+    const paper: Paper = { size: 'A3', orientation: 'landscape', bleedMm: 0 };
+    const request = { ...defaultWallCharts(project).find((r) => r.kind === 'wallChart' && r.engineFamilyId === family.id && r.jetId === boat.jet.id)!, paper } as SheetRequest;
+    const pages = scenePages(sheetScene(request, { project, dateIso: '2026-12-03' }));
+    expect(pages.length).toBe(2);
+    expect(texts(pages[0]).find((t) => t.role === 'sheet-title')?.text).toMatch(/: page 1 of 2$/);
+    expect(texts(pages[1]).find((t) => t.role === 'sheet-title')?.text).toMatch(/: page 2 of 2$/);
+    // Three variants a page, in the family's order; each page's subtitle names its own.
+    const headingsOf = (i: number) => texts(pages[i]).filter((t) => t.role === 'ladder-rpm').map((t) => t.key!.split('|engine:')[1]);
+    expect([...new Set(headingsOf(0))]).toEqual(family.variants.slice(0, 3).map((v) => v.variantId));
+    expect([...new Set(headingsOf(1))]).toEqual(family.variants.slice(3).map((v) => v.variantId));
+    const subtitle = texts(pages[1]).filter((t) => t.role === 'sheet-subtitle').map((t) => t.text).join(' ');
+    expect(subtitle).toContain(family.variants[3].label);
+    expect(subtitle).not.toContain(family.variants[0].label);
   });
 });

@@ -10,7 +10,7 @@ import { join } from 'node:path';
 import fc from 'fast-check';
 import { stringify } from 'yaml';
 import { LIMITS } from '../../src/data/schema/common.ts';
-import { BOAT_SHEET_PAPERS } from '../../src/sheets/index.ts';
+import { BOAT_SHEET_PAPERS, WALL_CHART_PAPERS } from '../../src/sheets/index.ts';
 
 /** The one limit a catalogue goes one past, or none. */
 export type PastLimit = 'none' | 'impellerLabel' | 'variantLabel' | 'cruiseLabel' | 'boatName' | 'engineName' | 'jetName' | 'makerName' | 'impellers' | 'variants' | 'cruise' | 'cautions' | 'cautionChars';
@@ -36,7 +36,7 @@ const yamlSize = (size: string): string => (size === 'Card4x6' ? '4x6' : size);
 
 /** The papers a sheet kind offers: the boat sheets' list of src/sheets/papers.ts; wall charts are made for A3 and Tabloid. */
 export const KIND_PAPERS: Readonly<Record<SheetKind, readonly string[]>> = {
-  wallChart: ['A3', 'Tabloid'],
+  wallChart: WALL_CHART_PAPERS.map(yamlSize),
   specSheet: BOAT_SHEET_PAPERS.specSheet.map(yamlSize),
   upgradeSheet: BOAT_SHEET_PAPERS.upgradeSheet.map(yamlSize),
   consoleCard: BOAT_SHEET_PAPERS.consoleCard.map(yamlSize),

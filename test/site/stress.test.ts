@@ -1,6 +1,8 @@
 /**
  * The hand-written stress catalogues of test/fixtures/stress/ (invented data at the limits of
- * docs/sheets.md, "Limits every sheet lays out"): (B) max-cautions — 6 shop cautions of 300 characters and 8 cruise settings
+ * docs/sheets.md, "Limits every sheet lays out"): (A) max-impellers — a jet of 24 impellers and an engine
+ * family of 6 variants, every label 16 characters, as wall charts on A3 landscape and Tabloid portrait
+ * (each continuing over pages), a spec sheet and a card; (B) max-cautions — 6 shop cautions of 300 characters and 8 cruise settings
  * with 16-character labels on each of two boats; (C) max-names — boat, engine, jet and maker names of 60
  * characters. Each goes through the real command line: `check` then `build` exit 0, and every book PDF
  * (its text read back with pdftotext of poppler-utils) holds every impeller, variant and cruise label,
@@ -57,9 +59,16 @@ function pdfText(file: string): string {
   return r.stdout;
 }
 
-const CATALOGUES = [{ name: 'max-cautions' }, { name: 'max-names' }] as const;
+const CATALOGUES = [{ name: 'max-impellers' }, { name: 'max-cautions' }, { name: 'max-names' }] as const;
 
 describe('the stress catalogues are at the limits they claim', () => {
+  it('A: 24 impellers and 6 engine variants, every label 16 characters', () => {
+    const a = join(STRESS, 'max-impellers');
+    const [jetA] = yamlIn(a, 'jets') as { impellers: Labelled[] }[];
+    const [engineA] = yamlIn(a, 'engines') as { variants: Labelled[] }[];
+    expect(jetA.impellers.map((i) => i.label.length)).toEqual(Array(24).fill(16));
+    expect(engineA.variants.map((v) => v.label.length)).toEqual(Array(6).fill(16));
+  });
   it('B: 6 cautions of 300 characters, 8 cruise labels of 16 on each boat; C: 60-character names and makers', () => {
     const b = join(STRESS, 'max-cautions');
     const siteB = parse(readFileSync(join(b, 'site.yaml'), 'utf8')) as { cautions: string[] };

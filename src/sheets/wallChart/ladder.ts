@@ -54,6 +54,8 @@ export interface LadderArgs {
   readonly headings: readonly string[];
   /** Type size of the limits line and tick labels. */
   readonly smallPt: number;
+  /** The cells' rpm range; the result's own (ladderRpmRange) when absent. A chart over several pages passes its whole family's. */
+  readonly range?: readonly [number, number];
   readonly where: string;
 }
 
@@ -81,6 +83,11 @@ export function ladderRpmRange(result: WallChartResult): [number, number] {
   return [Math.floor((low * 0.98) / 100) * 100, Math.ceil((high * 1.04) / 100) * 100];
 }
 
+/** The ladder's row order: lightest (lowest rating) first, ties by id. */
+export function ladderOrder<T extends { readonly ratingKw: number; readonly impellerId: string }>(impellers: readonly T[]): T[] {
+  return [...impellers].sort((a, b) => a.ratingKw - b.ratingKw || a.impellerId.localeCompare(b.impellerId));
+}
+
 /** Round tick values inside the range, spaced so labels of `sizePt` do not touch across `lengthMm`. */
 function ticks(range: readonly [number, number], lengthMm: number, sizePt: number): number[] {
   const labelMm = measureTextMm({ text: '8888', sizePt, weight: 'regular' }) + 2;
@@ -98,7 +105,7 @@ function ticks(range: readonly [number, number], lengthMm: number, sizePt: numbe
 export function planLadder(args: LadderArgs, form: LadderForm): LadderPlan {
   const { result, where } = args;
   const { figurePt, wordPt } = LADDER_TYPE[form];
-  const impellers = [...result.impellers].sort((a, b) => a.ratingKw - b.ratingKw || a.impellerId.localeCompare(b.impellerId));
+  const impellers = ladderOrder(result.impellers);
   const variants = result.variants;
 
   // Row labels: bold 12 pt, shrunk (never under 8 pt) to the column's cap.
@@ -126,7 +133,7 @@ export function planLadder(args: LadderArgs, form: LadderForm): LadderPlan {
   });
   const impHead = paragraph({ x: args.x, y: args.y, widthMm: labelW - 1, text: 'Impeller', sizePt: HEADING_PT, weight: 'bold', role: 'ladder-heading', where });
   const lightest = paragraph({ x: args.x, y: args.y + impHead.heightMm, widthMm: labelW - 1, text: 'lightest first', sizePt: args.smallPt, colour: INK_SOFT, role: 'ladder-limits', where });
-  const range = ladderRpmRange(result);
+  const range = args.range ?? ladderRpmRange(result);
   const tickValues = form === 'tall' ? ticks(range, stripLen, args.smallPt) : [];
   const tickRowMm = tickValues.length > 0 ? linePitchMm(args.smallPt) + 0.6 : 0;
   const headH = Math.max(impHead.heightMm + lightest.heightMm, ...headParas.map((h) => h.heightMm)) + tickRowMm + 1.2;

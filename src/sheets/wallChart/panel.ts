@@ -43,6 +43,12 @@ export function conversionNote(unit: PowerUnit): string {
   return `Power in ${unit} · 1 ${unit} = ${factor.toFixed(3)} ${other}`;
 }
 
+/**
+ * Most impellers the panel draws: past this many absorption curves (each with its name at its end) the
+ * plot turns into a thicket no one reads from a wall, so a page with more leaves the panel out and says so.
+ */
+export const PANEL_MAX_IMPELLERS = 8;
+
 /** Least height (mm) worth drawing the panel in. */
 export const PANEL_MIN_HEIGHT_MM = 62;
 

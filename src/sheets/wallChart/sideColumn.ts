@@ -14,6 +14,9 @@ import { INK, INK_SOFT, PAPER_WHITE, STROKE, WARN, WINDOW_EDGE, WINDOW_FILL, WIN
 import { limitLine, statusShape, statusWords, statusWordsHeightMm } from '../kit/warningMarks.ts';
 import { LADDER_WORDS } from './ladder.ts';
 
+/** Gap (mm) between the side column's two columns. */
+export const SIDE_COLUMN_GAP_MM = 6;
+
 /** Width (mm) of the key's samples; the words start after them. */
 const SAMPLE_MM = 22;
 
@@ -55,7 +58,7 @@ function keyRow(args: { x: number; y: number; widthMm: number; sizePt: number; t
 }
 
 /** The key of the ladder's marks, statuses in the order a shop reads them. */
-function ladderKey(args: { x: number; y: number; widthMm: number; sizePt: number; tolerancePct: number; statuses: readonly MatchStatus[]; where: string }): Part {
+function ladderKey(args: { x: number; y: number; widthMm: number; sizePt: number; tolerancePct: number; statuses: readonly MatchStatus[]; panel: boolean; where: string }): Part {
   const { x, widthMm, sizePt, where } = args;
   const nodes: SceneNode[] = [];
   let cursor = args.y;
@@ -86,7 +89,7 @@ function ladderKey(args: { x: number; y: number; widthMm: number; sizePt: number
       ...statusWords({ x: x0 + 5, top: mid - wordsH / 2, text: LADDER_WORDS[status], sizePt: wordPt, warn, role: 'legend-status', where }).nodes,
     ], wordsH + 0.4);
   }
-  add('power panel: open circle a WOT point, warning square one that lugs or over-revs; dotted lines constant-power cruise', (x0, mid) => [
+  if (args.panel) add('power panel: open circle a WOT point, warning square one that lugs or over-revs; dotted lines constant-power cruise', (x0, mid) => [
     { type: 'circle', role: 'legend-marker', cx: x0 + 6, cy: mid, r: 1, fill: { colour: PAPER_WHITE }, stroke: stroke(INK, STROKE.rule) },
     { type: 'rect', role: 'legend-marker', x: x0 + 11, y: mid - 1.1, width: 2.2, height: 2.2, fill: { colour: WARN }, stroke: stroke(INK, STROKE.rule) },
   ]);
@@ -100,14 +103,19 @@ export function wallChartSide(args: {
   /** Boats pairing this engine family with this jet whose drive line is the chart's. */
   driveLineBoats: readonly Boat[];
   notes: readonly string[];
+  /** The power panel is on the page (its marks get a key row). */
+  panel?: boolean;
   site: SiteConfig;
   sizePt: number;
   headingPt: number;
+  /** Two columns put the cautions in a column of their own beside the key and conditions (long shop cautions). */
+  columns?: 1 | 2;
   where: string;
 }): Part {
   const { box, result, where, sizePt } = args;
-  const x = box.x;
-  const widthMm = box.width;
+  const columns = args.columns ?? 1;
+  const widthMm = columns === 2 ? (box.width - SIDE_COLUMN_GAP_MM) / 2 : box.width;
+  let x = box.x;
   const content: SceneNode[] = [];
   let cursor = box.y;
   const push = (block: Part, after: number) => {
@@ -120,7 +128,7 @@ export function wallChartSide(args: {
   push(text('Key', { sizePt: args.headingPt, weight: 'bold', role: 'heading' }), 1);
   const order: readonly MatchStatus[] = ['matched', 'aboveWindow', 'belowWindow', 'revLimited', 'noCrossing'];
   const present = new Set(result.pairings.map((p) => p.band.nominal.status));
-  push(ladderKey({ x, y: cursor, widthMm, sizePt, tolerancePct: result.tolerancePct, statuses: order.filter((s) => s !== 'noCrossing' || present.has(s)), where }), 3);
+  push(ladderKey({ x, y: cursor, widthMm, sizePt, tolerancePct: result.tolerancePct, statuses: order.filter((s) => s !== 'noCrossing' || present.has(s)), panel: args.panel ?? true, where }), 3);
 
   push(text('Drawn for', { sizePt: args.headingPt, weight: 'bold', role: 'heading' }), 1);
   const c = result.conditions;
@@ -135,9 +143,16 @@ export function wallChartSide(args: {
   ]) {
     push(text(line, { role: 'conditions' }), 1.2);
   }
-  cursor += 2.5;
+  let height = cursor - box.y;
+  if (columns === 2) {
+    x = box.x + widthMm + SIDE_COLUMN_GAP_MM;
+    cursor = box.y;
+  } else {
+    cursor += 2.5;
+  }
   push(cautionsBlock({ site: args.site, x, y: cursor, widthMm, sizePt, headingPt: args.headingPt, where }), 0);
-  return { nodes: content, heightMm: cursor - box.y };
+  height = Math.max(height, cursor - box.y);
+  return { nodes: content, heightMm: height };
 }
 
 
