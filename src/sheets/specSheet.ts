@@ -11,7 +11,7 @@ import { calibratedChartView } from './calibratedView.ts';
 import { calibrationText, MAX_TRIAL_ROWS, trialRows } from './trialTables.ts';
 import { assembleScene } from './kit/assemble.ts';
 import { paragraph, type Block } from './kit/block.ts';
-import { cautionsFlow } from './kit/cautions.ts';
+import { cautionsFlow, CONTINUING_CAUTION } from './kit/cautions.ts';
 import { chartHeightsMm, fewestPages, flowPages, splittable, whole, type Flowable } from './kit/flow.ts';
 import { sheetFrame } from './kit/frame.ts';
 import { stack, type Part } from './kit/stack.ts';
@@ -67,7 +67,9 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
   const type = typeScale(request.paper);
   const frameArgs = { paper: request.paper, site, title: boat.name, subtitle: `${boat.engine.label} · ${boat.jet.label} · impeller ${result.impellerLabel}`, dateIso: ctx.dateIso, type, where };
   const frame = sheetFrame({ ...frameArgs, titleSuffix: ': spec sheet' });
-  const continuedFrame = (n: number) => sheetFrame({ ...frameArgs, shop: false, titleSuffix: `: spec sheet, page ${n + 1}` });
+  // A sheet that continues carries the built-in cautions at the foot of every page (the full block is on one).
+  const firstOfMany = sheetFrame({ ...frameArgs, titleSuffix: ': spec sheet', cautionLine: CONTINUING_CAUTION });
+  const continuedFrame = (n: number) => sheetFrame({ ...frameArgs, shop: false, cautionLine: CONTINUING_CAUTION, titleSuffix: `: spec sheet, page ${n + 1}` });
   const box = frame.contentBox;
   const shownWot = result.calibrated?.wot ?? result.wot;
   const warn = isWarning(shownWot.nominal.status);
@@ -148,9 +150,9 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
   }
   const pages = fits(laid)
     ? [{ frame, nodes: laid.nodes }]
-    : fewestPages(chartHeightsMm(box.height, CHART_MIN_MM, CHART_MAX_MM).map((chartMm) => () => flowPages({ frame: (n) => (n === 0 ? frame : continuedFrame(n)), gapMm: GAP_MM, parts: parts(chartMm, trialRows(result, boat.jet.family.tolerancePct, { maxRows: most }), false), where })));
+    : fewestPages(chartHeightsMm(box.height, CHART_MIN_MM, CHART_MAX_MM).map((chartMm) => () => flowPages({ frame: (n) => (n === 0 ? firstOfMany : continuedFrame(n)), gapMm: GAP_MM, parts: parts(chartMm, trialRows(result, boat.jet.family.tolerancePct, { maxRows: most }), false), where })));
   return assembleScene({
-    frame,
+    frame: pages[0].frame,
     content: pages[0].nodes,
     more: pages.slice(1).map((p) => ({ frame: p.frame, content: p.nodes })),
     title: `${boat.name}: spec sheet`,

@@ -10,7 +10,7 @@ import { boatChart, chartImpellersNote } from './chart/boatChart.ts';
 import type { EngineSeries } from './chart/seriesTypes.ts';
 import { assembleScene } from './kit/assemble.ts';
 import { paragraph } from './kit/block.ts';
-import { cautionsFlow } from './kit/cautions.ts';
+import { cautionsFlow, CONTINUING_CAUTION } from './kit/cautions.ts';
 import { chartHeightsMm, fewestPages, flowPages, whole, type Flowable } from './kit/flow.ts';
 import { numberText, percentText, powerText, rpmText } from './kit/format.ts';
 import { sheetFrame } from './kit/frame.ts';
@@ -51,7 +51,9 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
   const type = typeScale(request.paper);
   const frameArgs = { paper: request.paper, site, title: boat.name, subtitle: `${boat.engine.label} · ${boat.jet.label} · impeller ${result.impellerLabel} kept`, dateIso: ctx.dateIso, type, where };
   const frame = sheetFrame({ ...frameArgs, titleSuffix: ': engine upgrade' });
-  const continuedFrame = (n: number) => sheetFrame({ ...frameArgs, shop: false, titleSuffix: `: engine upgrade, page ${n + 1}` });
+  // A sheet that continues carries the built-in cautions at the foot of every page (the full block is on one).
+  const firstOfMany = sheetFrame({ ...frameArgs, titleSuffix: ': engine upgrade', cautionLine: CONTINUING_CAUTION });
+  const continuedFrame = (n: number) => sheetFrame({ ...frameArgs, shop: false, cautionLine: CONTINUING_CAUTION, titleSuffix: `: engine upgrade, page ${n + 1}` });
   const box = frame.contentBox;
   const common = { sizePt: type.body, minSizePt: type.min, headingPt: type.heading, where };
   const speedUnit = site.speedUnit;
@@ -156,9 +158,9 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
   const laid = fits(full) ? full : layout(true);
   const pages = fits(laid)
     ? [{ frame, nodes: laid.nodes }]
-    : fewestPages(chartHeightsMm(box.height, CHART_MIN_MM, CHART_MAX_MM).map((chartMm) => () => flowPages({ frame: (n) => (n === 0 ? frame : continuedFrame(n)), gapMm: GAP_MM, parts: parts(chartMm, false), where })));
+    : fewestPages(chartHeightsMm(box.height, CHART_MIN_MM, CHART_MAX_MM).map((chartMm) => () => flowPages({ frame: (n) => (n === 0 ? firstOfMany : continuedFrame(n)), gapMm: GAP_MM, parts: parts(chartMm, false), where })));
   return assembleScene({
-    frame,
+    frame: pages[0].frame,
     content: pages[0].nodes,
     more: pages.slice(1).map((p) => ({ frame: p.frame, content: p.nodes })),
     title: `${boat.name}: engine upgrade`,

@@ -12,6 +12,7 @@ import type { Paper, Project, SheetRequest } from '../../src/data/types.ts';
 import { scenePages, type Scene } from '../../src/scene/types.ts';
 import { defaultWallCharts } from '../../src/analysis/index.ts';
 import { BOAT_SHEET_PAPERS, cautionsFor, sheetScene, WALL_CHART_PAPERS } from '../../src/sheets/index.ts';
+import { CONTINUING_CAUTION } from '../../src/sheets/kit/cautions.ts';
 import { demoProject } from './fixtures/boatVariation.ts';
 import { catalogueProject, LIMITS, stressProject, type Catalogue, type StressCase } from './fixtures/stressProjects.ts';
 import { sceneProblems } from './sceneChecks.ts';
@@ -57,6 +58,13 @@ function problemsOf(kind: Kind, project: Project, paper: Paper): string[] {
   for (const text of cautionsFor(project.site)) if (!cautionWords.includes(text.replace(/\s+/g, ' '))) problems.push(`caution not printed in full: "${text}"`);
   // Every page is the same paper.
   for (const page of scenePages(scene)) if (page.widthMm !== scene.widthMm || page.heightMm !== scene.heightMm) problems.push('a page of another size');
+  // A spec or upgrade sheet that continues carries the built-in cautions at the foot of every page.
+  if (kind !== 'consoleCard' && scenePages(scene).length > 1) {
+    scenePages(scene).forEach((page, i) => {
+      const line = texts(page).filter((t) => t.role === 'caution-line').map((t) => t.text).join(' ');
+      if (line !== CONTINUING_CAUTION) problems.push(`page ${i + 1}: no caution line at its foot`);
+    });
+  }
   return problems;
 }
 

@@ -16,6 +16,14 @@ export const BUILT_IN_CAUTIONS: readonly string[] = [
 ];
 
 /**
+ * The built-in cautions in one line, for the foot of every page of a sheet that continues over pages
+ * (its full Cautions block, the shop's own cautions too, is on one of them), so no page handed out alone
+ * goes without them.
+ */
+export const CONTINUING_CAUTION =
+  "Cautions: estimates only, confirm them by a sea trial. Never run the engine past its maker's maximum rpm. Impeller and engine work belong to a qualified marine technician following the makers' instructions and local regulations. Every caution, the shop's too, is under Cautions on the last page.";
+
+/**
  * The cautions a sheet or page prints: the built-in ones, then the shop's extra ones in their order
  * (an extra caution that repeats a built-in one word for word is printed once).
  */

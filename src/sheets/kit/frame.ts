@@ -9,7 +9,7 @@ import { cropMarks, pageFrame, type PageFrame } from '../../scene/paper.ts';
 import { fitText, measureTextMm } from '../../scene/text.ts';
 import { ascentMm, label, linePitchMm, paragraph } from './block.ts';
 import { LayoutError } from './errors.ts';
-import { INK, INK_SOFT, STROKE, stroke, type TypeScale } from './style.ts';
+import { INK, INK_SOFT, STROKE, WARN, stroke, type TypeScale } from './style.ts';
 
 export interface SheetFrame {
   readonly page: PageFrame;
@@ -37,6 +37,8 @@ export function sheetFrame(args: {
   marginMm?: number;
   /** False on a sheet's further pages: the shop's name and contact are on its first page. */
   shop?: boolean;
+  /** A caution line above the footer (every page of a sheet that continues over pages). */
+  cautionLine?: string;
   where: string;
 }): SheetFrame {
   const page = pageFrame({ paper: args.paper, ...(args.marginMm !== undefined ? { marginMm: args.marginMm } : {}) });
@@ -103,8 +105,19 @@ export function sheetFrame(args: {
   });
   nodes.push(...cropMarks(page));
 
+  // The caution line sits on the footer rule, a warning bar at its left, the content ends above it.
+  let contentBottom = footerRuleY - 4;
+  if (args.cautionLine) {
+    const barMm = 1.2;
+    const words = paragraph({ x: safe.x + barMm + 2, y: 0, widthMm: safe.width - barMm - 2, text: args.cautionLine, sizePt: type.small, role: 'caution-line', where: args.where });
+    const top = footerRuleY - 1.5 - words.heightMm;
+    const placed = paragraph({ x: safe.x + barMm + 2, y: top, widthMm: safe.width - barMm - 2, text: args.cautionLine, sizePt: type.small, role: 'caution-line', where: args.where });
+    nodes.push({ type: 'rect', role: 'caution-bar', x: safe.x, y: top, width: barMm, height: words.heightMm, fill: { colour: WARN } }, ...placed.nodes);
+    contentBottom = top - 3;
+  }
+
   const contentTop = headerBottom + 4;
-  const contentBox = { x: safe.x, y: contentTop, width: safe.width, height: footerRuleY - 4 - contentTop };
+  const contentBox = { x: safe.x, y: contentTop, width: safe.width, height: contentBottom - contentTop };
   return { page, nodes, contentBox };
 }
 
