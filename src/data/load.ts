@@ -177,7 +177,9 @@ function buildProject(checked: readonly Checked[]): Built {
   const engines = registry('engine', (c) => normaliseEngine(c.source, c.raw as never));
   const jets = registry('jet', (c) => normaliseJet(c.source, c.raw as never));
   const boats = registry('boat', (c) => normaliseBoat(c.source, c.raw as never, { engines, jets }));
-  const books = registry('book', (c) => normaliseBook(c.source, c.raw as never, { engines, jets, boats }));
+  const siteFileChecked = of('site')[0];
+  const site = siteFileChecked?.raw !== undefined ? normaliseSite(siteFileChecked.raw as never) : undefined;
+  const books = registry('book', (c) => normaliseBook(c.source, c.raw as never, { engines, jets, boats, siteCautions: site?.extraCautions?.length ?? 0 }));
   // References in files that did not load, and into files that did not load: every problem in one run.
   const ids = (kind: FileKind, key: string) => new Map(of(kind).flatMap((c) => (c.source ? [[c.stem, memberIds(c.source.value, key)] as const] : [])));
   const variantIds = ids('engine', 'variants');
@@ -186,8 +188,6 @@ function buildProject(checked: readonly Checked[]): Built {
   const failed = (c: Checked, registry: ReadonlyMap<string, unknown>) => c.source !== undefined && registry.get(c.stem) == null;
   for (const c of of('boat')) if (failed(c, boats)) errors.push(...looseBoatReferences({ source: c.source!, engines, jets, variantIds, impellerIds }));
   for (const c of of('book')) if (failed(c, books)) errors.push(...looseBookReferences({ source: c.source!, engines, jets, boats }));
-  const siteFileChecked = of('site')[0];
-  const site = siteFileChecked?.raw !== undefined ? normaliseSite(siteFileChecked.raw as never) : undefined;
   const sorted = <T extends { id: string }>(m: Map<string, T | null>) => [...m.values()].filter((x): x is T => x !== null).sort((a, b) => compareText(a.id, b.id));
   return { errors, warnings, site, engines: sorted(engines), jets: sorted(jets), boats: sorted(boats), books: sorted(books) };
 }

@@ -138,7 +138,13 @@ export interface ChartConditions {
   readonly cruisePowersKw: readonly number[];
 }
 
-export type SheetRequest =
+/** Cautions a book adds to the site's: its sheets carry them (and so are files of their own). */
+export interface BookCautions {
+  readonly bookId: string;
+  readonly texts: readonly string[];
+}
+
+export type SheetRequest = { readonly bookCautions?: BookCautions } & (
   | {
       readonly kind: 'wallChart';
       readonly engineFamilyId: string;
@@ -148,7 +154,7 @@ export type SheetRequest =
     }
   | { readonly kind: 'specSheet'; readonly boatId: string; readonly paper: Paper }
   | { readonly kind: 'consoleCard'; readonly boatId: string; readonly paper: Paper }
-  | { readonly kind: 'upgradeSheet'; readonly boatId: string; readonly paper: Paper };
+  | { readonly kind: 'upgradeSheet'; readonly boatId: string; readonly paper: Paper });
 
 export type Audience = 'shop' | 'dealer' | 'owner';
 
@@ -173,6 +179,7 @@ export type BookSheet =
       readonly jetId: string;
       readonly conditions: BookChartConditions;
       readonly paper: Paper;
+      readonly bookCautions?: BookCautions;
     };
 
 export interface Book {
@@ -180,6 +187,8 @@ export interface Book {
   readonly title: string;
   readonly audience: Audience;
   readonly sheets: readonly BookSheet[];
+  /** The book's own cautions (after the built-in ones and the site's). */
+  readonly extraCautions?: readonly string[];
   readonly source: SourceRef;
 }
 

@@ -61,8 +61,10 @@ function uniqueSlug(request: SheetRequest, first: ReadonlyMap<string, SheetReque
   const p = request.paper;
   const paper = `${p.size}-${p.orientation}${p.bleedMm > 0 ? '-bleed' : ''}`.toLowerCase();
   const words = earlier ? conditionsDifference(request, earlier) : [];
+  // A book's own cautions make its sheet its own file: named after the book when nothing else tells it apart.
+  const book = request.bookCautions && earlier && JSON.stringify(request.bookCautions) !== JSON.stringify(earlier.bookCautions) ? [request.bookCautions.bookId] : [];
   const withPaper = earlier && !samePaper(request, earlier) ? [...words, paper] : words;
-  const candidates = [[base, ...withPaper].join('-'), [base, ...words, paper].join('-')];
+  const candidates = [[base, ...withPaper].join('-'), ...(book.length > 0 ? [[base, ...withPaper, ...book].join('-')] : []), [base, ...words, paper].join('-')];
   for (let n = 2; ; n += 1) {
     const slug = candidates.shift() ?? `${[base, ...withPaper].join('-')}-${n}`;
     if (!taken.has(slug)) return checkedSlug(slug);

@@ -103,6 +103,8 @@ export interface BookView {
   readonly href: string;
   readonly pdfHref: string;
   readonly sheets: readonly SheetView[];
+  /** The cautions its sheets print: the built-in ones, the site's, then the book's own. */
+  readonly cautions: readonly string[];
 }
 
 export interface JetView {

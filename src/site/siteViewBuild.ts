@@ -159,6 +159,7 @@ export function siteView(args: SiteViewArgs): SiteView {
       href: `books/${book.id}/index.html`,
       pdfHref: `books/${book.id}.pdf`,
       sheets: pick(args.sheets, args.plan.byBook.get(book.id)),
+      cautions: cautionsFor({ ...project.site, extraCautions: [...(project.site.extraCautions ?? []), ...(book.extraCautions ?? [])] }),
     })),
     schemas: args.schemas.map((name) => ({ label: name, href: `schema/${name}` })),
     guides: args.guides,

@@ -3,7 +3,9 @@ import { hpToKw } from '../../units.ts';
 import { resolve, type Registry } from '../references.ts';
 import type { RawBookFile, RawPaper, RawSheet } from '../schema/book.ts';
 import type { Boat, Book, BookChartConditions, BookSheet, DataError, EngineFamily, JetUnit, Paper } from '../types.ts';
+import { LIMITS } from '../schema/common.ts';
 import { at } from '../validate.ts';
+import { dataError } from '../errors.ts';
 import type { YamlSource } from '../yamlSource.ts';
 import { siteFields, toWater } from './conditions.ts';
 import type { Normalised } from './shared.ts';
@@ -12,6 +14,8 @@ export interface BookRegistries {
   readonly engines: Registry<EngineFamily>;
   readonly jets: Registry<JetUnit>;
   readonly boats: Registry<Boat>;
+  /** How many cautions site.yaml adds (a book's and the site's together stay within LIMITS.cautions). */
+  readonly siteCautions?: number;
 }
 
 /** Normalise a validated book file against the loaded engines, jets and boats. */
@@ -44,12 +48,27 @@ export function normaliseBook(source: YamlSource, raw: RawBookFile, reg: BookReg
       }
     });
   }
+  const siteCautions = reg.siteCautions ?? 0;
+  if (raw.cautions && raw.cautions.length + siteCautions > LIMITS.cautions) {
+    // Located at the cautions: key, as a list with too many entries is.
+    const key = source.locate(['cautions'], { at: 'key' });
+    errors.push(
+      dataError({ file: source.file, line: key.line, column: key.column }, {
+        field: 'cautions',
+        expected: `must keep this book's and site.yaml's cautions together at most ${LIMITS.cautions} (every sheet prints every caution after the built-in ones)`,
+        found: `${raw.cautions.length} here and ${siteCautions} in site.yaml`,
+        fix: `merge or drop ${raw.cautions.length + siteCautions - LIMITS.cautions} of them, here or in site.yaml`,
+      }),
+    );
+  }
   if (errors.length > 0) return { ok: false, errors, warnings: [] };
+  const bookCautions = raw.cautions ? { bookId: raw.id, texts: raw.cautions } : undefined;
   const book: Book = {
     id: raw.id,
     title: raw.title,
     audience: raw.audience,
-    sheets: raw.sheets.map((s) => toSheet(s, toPaper(s.paper ?? raw.paper))),
+    sheets: raw.sheets.map((s) => ({ ...toSheet(s, toPaper(s.paper ?? raw.paper)), ...(bookCautions ? { bookCautions } : {}) })),
+    ...(raw.cautions ? { extraCautions: raw.cautions } : {}),
     source: { file: source.file },
   };
   return { ok: true, value: book, warnings: [] };

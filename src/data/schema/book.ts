@@ -1,6 +1,7 @@
 /** Schema of data/books/<id>.yaml: a chart book for one audience, its sheets and paper. */
 import * as z from 'zod';
 import { conditions, driveLine, positive, slug, text, unitChoices, water } from './common.ts';
+import { cautionList } from './site.ts';
 
 export const PAPER_SIZES = ['A3', 'A4', 'A5', 'A6', 'Letter', 'Legal', 'Tabloid', '4x6'] as const;
 
@@ -49,6 +50,9 @@ export const bookFile = () =>
       /** A book prints on one paper; a sheet's own paper that differs is refused unless this is true. */
       mixed_paper: z.boolean({ error: 'must be true or false' }).default(false),
       sheets: z.array(sheet(), { error: 'must be a list of sheets' }).min(1, { error: 'must list at least one sheet' }),
+      cautions: cautionList()
+        .optional()
+        .describe("Cautions of this book, printed on its sheets after the built-in ones and site.yaml's (together at most 6); one sentence each"),
     })
     .meta({ title: 'matchbook chart book', description: 'A chart book for one audience: data/books/<id>.yaml' });
 

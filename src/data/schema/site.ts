@@ -15,16 +15,20 @@ export const siteFile = () =>
         .default({ power: 'kW', speed: 'kn' }),
       data_revision: text(),
       issue_date: isoDate(),
-      cautions: atMost(
-        z
-          .array(text().max(LIMITS.cautionChars, { error: `must be at most ${LIMITS.cautionChars} characters (every sheet prints every caution); shorten it or split it in two` }), { error: 'must be a list of sentences' })
-          .min(1, { error: 'must list at least one caution, or be left out' }),
-        LIMITS.cautions,
-        'every sheet prints every caution after the built-in ones; merge or drop some',
-      )
+      cautions: cautionList()
         .optional()
         .describe("Extra cautions, printed after the built-in ones (sea trial, maker's maximum rpm, qualified marine technician), which always print; one sentence each"),
     })
     .meta({ title: 'matchbook site settings', description: 'Shop name, units and data revision: data/site.yaml' });
+
+/** A shop's own cautions (site.yaml or a book): sentences of up to LIMITS.cautionChars, at most LIMITS.cautions. */
+export const cautionList = () =>
+  atMost(
+    z
+      .array(text().max(LIMITS.cautionChars, { error: `must be at most ${LIMITS.cautionChars} characters (every sheet prints every caution); shorten it or split it in two` }), { error: 'must be a list of sentences' })
+      .min(1, { error: 'must list at least one caution, or be left out' }),
+    LIMITS.cautions,
+    'every sheet prints every caution after the built-in ones; merge or drop some',
+  );
 
 export type RawSiteFile = z.infer<ReturnType<typeof siteFile>>;

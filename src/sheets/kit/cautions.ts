@@ -103,7 +103,8 @@ export function cautionsBlock(args: {
 
 /**
  * The cautions block as a part that splits between lines (over a column or page break): the lines that
- * fit stay, the rest of that caution and the ones after it go on under "Cautions (continued)".
+ * fit stay, the rest of that caution and the ones after it go on under "Cautions (continued)". A caution
+ * splits inside only where two lines at least stay and two go on.
  */
 export function cautionsFlow(args: { site: SiteConfig; sizePt: number; headingPt: number; where: string }, rest?: readonly string[]): Flowable {
   const continued = rest !== undefined;
@@ -118,6 +119,9 @@ export function cautionsFlow(args: { site: SiteConfig; sizePt: number; headingPt
       search: for (let c = 0; c < lines.length; c++) {
         for (let l = 1; l <= lines[c].length; l++) {
           if (c === lines.length - 1 && l === lines[c].length) break search;
+          // No lone line of a caution on either side of the break (widows and orphans): a caution splits
+          // inside only with at least two lines before and two after, else it moves on whole.
+          if (l < lines[c].length && (l < 2 || lines[c].length - l < 2)) continue;
           const head = [...all.slice(0, c), lines[c].slice(0, l).join(' ')];
           if (block(at, head).heightMm > maxHeightMm + 1e-6) break search;
           best = { head, tail: [...(l < lines[c].length ? [lines[c].slice(l).join(' ')] : []), ...all.slice(c + 1)] };

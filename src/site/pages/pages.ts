@@ -68,5 +68,5 @@ export function bookPage(site: SiteView, book: BookView): string {
 <p>A book for the ${book.audience} of ${book.sheets.length} sheets.
 <a href="${root}${book.pdfHref}" download>Download the whole book as one PDF</a> (one bookmark per sheet).</p>
 ${section('sheets', 'Sheets', html`${book.sheets.map((s) => sheetFigure(s, root))}`)}`;
-  return pageLayout({ site, title: book.title, root, body, sheets: book.sheets });
+  return pageLayout({ site: { ...site, cautions: book.cautions }, title: book.title, root, body, sheets: book.sheets });
 }
