@@ -2,7 +2,7 @@
  * `check` proves the build (issue: check runs the same layout as build): for generated on-disk catalogues
  * across the limits of docs/sheets.md ("Limits every sheet lays out") — 1–6 variants, 1–24 impellers,
  * 1–2 boats with 0–8 cruise settings, labels of 1–16 characters, names of 1–60, 0–6 cautions of up to 300
- * characters, one book on a paper its sheet kind offers — and a share just one past a limit,
+ * characters (split between site.yaml and the book), one book on a paper its sheet kind offers (either orientation) — and a share just one past a limit,
  * `checkSite` exits 0 exactly when the real `buildSite` succeeds; inside the limits both succeed, past a limit both fail; a build that
  * fails names the definition's file:line:column on every problem line, never only a sheet slug. When the build succeeds,
  * every page of every planned sheet keeps the print rules of test/sheets/sceneChecks.ts: no two text

@@ -27,6 +27,8 @@ export interface GeneratedCatalogue {
   readonly jetName: string;
   readonly makerName: string;
   readonly cautions: readonly string[];
+  /** How many of the cautions (the last ones) the book lists instead of site.yaml. */
+  readonly bookCautions: number;
   readonly book: { readonly kind: SheetKind; readonly size: string; readonly orientation: 'portrait' | 'landscape'; readonly bleedMm: 0 | 3 };
   readonly past: PastLimit;
 }
@@ -84,6 +86,7 @@ export function catalogueArbitrary(pastShare = 0.25): fc.Arbitrary<GeneratedCata
       cautionChars: fc.array(fc.integer({ min: 1, max: L.cautionChars }), { minLength: 0, maxLength: L.cautions }),
       kind: fc.constantFrom<SheetKind>('wallChart', 'specSheet', 'consoleCard', 'upgradeSheet'),
       paperPick: fc.nat(),
+      bookCautionPick: fc.nat(),
       orientation: fc.constantFrom<'portrait' | 'landscape'>('portrait', 'landscape'),
       bleedMm: fc.constantFrom<0 | 3>(0, 3),
       past: fc.integer({ min: 0, max: 999 }).map((x) => (x < pastShare * 1000 ? PAST[x % PAST.length] : 'none')),
@@ -101,11 +104,11 @@ export function catalogueArbitrary(pastShare = 0.25): fc.Arbitrary<GeneratedCata
         jetName: r.jetName,
         makerName: r.makerName,
         cautions: r.cautionChars.map((n, i) => cautionOf(n, i)),
+        bookCautions: r.bookCautionPick % (r.cautionChars.length + 1),
         book: {
           kind: r.kind,
           size: sizes[r.paperPick % sizes.length],
-          // Wall charts are landscape sheets.
-          orientation: r.kind === 'wallChart' ? ('landscape' as const) : r.orientation,
+          orientation: r.orientation,
           bleedMm: r.bleedMm,
         },
         past: r.past,
@@ -170,6 +173,10 @@ const HEADER = '# GENERATED TEST DATA: invented names and numbers for a property
 /** Writes the catalogue as a data folder in dir (created) and returns dir. */
 export function writeCatalogue(dir: string, cat: GeneratedCatalogue): string {
   for (const sub of ['engines', 'jets', 'boats', 'books']) mkdirSync(join(dir, sub), { recursive: true });
+  // The last bookCautions of the cautions go in the book, the others in site.yaml (the limit is on both together).
+  const split = Math.min(cat.bookCautions, cat.cautions.length);
+  const siteCautions = cat.cautions.slice(0, cat.cautions.length - split);
+  const bookCautions = cat.cautions.slice(cat.cautions.length - split);
   const yaml = (file: string, value: unknown) => writeFileSync(join(dir, file), HEADER + stringify(value, { lineWidth: 0 }));
   yaml('site.yaml', {
     shop_name: 'Generated Test Shop (test data)',
@@ -177,7 +184,7 @@ export function writeCatalogue(dir: string, cat: GeneratedCatalogue): string {
     units: { power: 'kW', speed: 'kn' },
     data_revision: 'generated rev 1',
     issue_date: '2026-01-01',
-    ...(cat.cautions.length > 0 ? { cautions: cat.cautions } : {}),
+    ...(siteCautions.length > 0 ? { cautions: siteCautions } : {}),
   });
   const n = cat.impellerLabels.length;
   yaml('jets/test-jet.yaml', {
@@ -230,6 +237,7 @@ export function writeCatalogue(dir: string, cat: GeneratedCatalogue): string {
     audience: 'shop',
     paper: { size: book.size, orientation: book.orientation, bleed_mm: book.bleedMm },
     sheets: [sheet],
+    ...(bookCautions.length > 0 ? { cautions: bookCautions } : {}),
   });
   return dir;
 }
