@@ -42,7 +42,7 @@ const lineOf = (text: string, needle: string) => text.split('\n').findIndex((l) 
 
 describe('the limits the sheets are laid out for', () => {
   it('are the ones the issue names', () => {
-    expect(LIMITS).toEqual({ labelChars: 16, nameChars: 60, impellersPerJet: 24, variantsPerFamily: 6, cruisePerBoat: 8, cautions: 6, cautionChars: 300 });
+    expect(LIMITS).toEqual({ labelChars: 16, nameChars: 60, impellersPerJet: 24, variantsPerFamily: 6, cruisePerBoat: 8, cruisePowersPerChart: 8, cautions: 6, cautionChars: 300 });
   });
 
   it('load a jet with 24 impellers of 16-character labels; refuse 25 at the impellers: line', () => {
@@ -71,6 +71,17 @@ describe('the limits the sheets are laid out for', () => {
     const text = boatWithCruise(9);
     expect(errorsOf(BOAT, text)).toEqual([
       `${BOAT}:${lineOf(text, 'cruise:')}:1 cruise must have at most 8 entries (the sheets list each cruise setting on its own row; keep the ones the owner uses), found a list of 9 entries`,
+    ]);
+  });
+
+  it('load a wall chart with 8 constant-power lines; refuse 9 at the list', () => {
+    const BOOK = 'data/books/shop-wall-charts.yaml';
+    const book = readFileSync(BOOK, 'utf8');
+    const powers = (n: number) => `cruise_powers_kw: [${Array.from({ length: n }, (_, i) => 60 + 20 * i).join(', ')}]`;
+    expect(errorsOf(BOOK, book.replace('cruise_powers_kw: [80, 120, 160]', powers(8)))).toEqual([]);
+    const text = book.replace('cruise_powers_kw: [80, 120, 160]', powers(9));
+    expect(errorsOf(BOOK, text)).toEqual([
+      `${BOOK}:18:7 sheets[0].conditions.cruise_powers_kw must have at most 8 entries (a wall chart draws each as a labelled line), found a list of 9 entries`,
     ]);
   });
 

@@ -1,10 +1,15 @@
 /** Schema of data/boats/<id>.yaml: one boat with its engine, jet, impeller, water, site and trials. */
 import * as z from 'zod';
-import { atMost, between, conditions, driveLine, isoDate, label, LIMITS, name, positive, rpm, slug, text, unitChoices, water } from './common.ts';
+import { atMost, between, conditions, driveLine, isoDate, label, LIMITS, name, positiveBetween, powerHp, powerKw, RANGES, rpm, slug, text, unitChoices, water } from './common.ts';
 
 export const HULL_TYPES = ['runabout', 'cruiser', 'high-speed-runabout', 'workboat', 'race'] as const;
 const SPEED_KEYS = ['speed_kn', 'speed_mph', 'speed_kmh'] as const;
-const speedFields = { speed_kn: between(0, 120, 'kn').optional(), speed_mph: between(0, 140, 'mph').optional(), speed_kmh: between(0, 220, 'km/h').optional() };
+/** Boat speed: a zero speed is no speed to cruise at or to have measured on a trial. */
+const speedFields = {
+  speed_kn: positiveBetween(RANGES.speedKn[0], RANGES.speedKn[1], 'kn').optional(),
+  speed_mph: positiveBetween(RANGES.speedMph[0], RANGES.speedMph[1], 'mph').optional(),
+  speed_kmh: positiveBetween(RANGES.speedKmh[0], RANGES.speedKmh[1], 'km/h').optional(),
+};
 
 const hull = () =>
   unitChoices(
@@ -23,7 +28,7 @@ export const CRUISE_KEYS = ['power_kw', 'power_hp', 'rpm', ...SPEED_KEYS] as con
 
 const cruise = () =>
   unitChoices(
-    z.strictObject({ label: label(), power_kw: positive().optional(), power_hp: positive().optional(), rpm: rpm().optional(), ...speedFields }),
+    z.strictObject({ label: label(), power_kw: powerKw().optional(), power_hp: powerHp().optional(), rpm: rpm().optional(), ...speedFields }),
     [{ keys: CRUISE_KEYS, required: true }],
   );
 

@@ -1,6 +1,6 @@
 /** Schema of data/books/<id>.yaml: a chart book for one audience, its sheets and paper. */
 import * as z from 'zod';
-import { conditions, driveLine, positive, slug, text, unitChoices, water } from './common.ts';
+import { atMost, conditions, driveLine, LIMITS, powerHp, powerKw, slug, text, unitChoices, water } from './common.ts';
 import { cautionList } from './site.ts';
 
 export const PAPER_SIZES = ['A3', 'A4', 'A5', 'A6', 'Letter', 'Legal', 'Tabloid', '4x6'] as const;
@@ -18,8 +18,8 @@ const chartConditions = () =>
       drive_line: driveLine().optional(),
       water: water().optional(),
       site: conditions().optional(),
-      cruise_powers_kw: z.array(positive()).optional(),
-      cruise_powers_hp: z.array(positive()).optional(),
+      cruise_powers_kw: atMost(z.array(powerKw(), { error: 'must be a list of powers in kW' }), LIMITS.cruisePowersPerChart, 'a wall chart draws each as a labelled line').optional(),
+      cruise_powers_hp: atMost(z.array(powerHp(), { error: 'must be a list of powers in hp' }), LIMITS.cruisePowersPerChart, 'a wall chart draws each as a labelled line').optional(),
     }),
     [{ keys: ['cruise_powers_kw', 'cruise_powers_hp'], required: false }],
   );

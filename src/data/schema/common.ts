@@ -26,6 +26,8 @@ export const LIMITS = {
   impellersPerJet: 24,
   variantsPerFamily: 6,
   cruisePerBoat: 8,
+  /** Constant-power lines a wall chart draws (conditions.cruise_powers_kw / _hp). */
+  cruisePowersPerChart: 8,
   cautions: 6,
   cautionChars: 300,
 } as const;
@@ -56,14 +58,45 @@ function isRealDate(s: string): boolean {
 /** A number > 0. */
 export const positive = () => z.number().positive({ error: 'must be a positive number' });
 
+/**
+ * A quantity that is > 0 and lies in [min, max]: zero or a negative value is told "must be a positive
+ * number" (the first check stops there), a tiny or huge one the range. Every numeric field has a range
+ * (docs/data-format.md, "Ranges of every number"), so no value can underflow or overflow the model.
+ */
+export const positiveBetween = (min: number, max: number, unit = '', positiveError = 'must be a positive number') => {
+  const error = `must be between ${min} and ${max}${unit ? ` ${unit}` : ''}`;
+  return z.number().positive({ error: positiveError, abort: true }).min(min, { error }).max(max, { error });
+};
+
 /** A number in [min, max] with the unit named in the message. */
 export const between = (min: number, max: number, unit = '') => {
   const error = `must be between ${min} and ${max}${unit ? ` ${unit}` : ''}`;
   return z.number().min(min, { error }).max(max, { error });
 };
 
-/** Engine or impeller shaft speed, rpm. */
-export const rpm = () => between(1, 30000, 'rpm');
+/** Ranges shared by several fields (docs/data-format.md, "Ranges of every number"). */
+export const RANGES = {
+  /** Engine speed, rpm: below any idle, above any marine engine's rev limit (common practice, no source). */
+  rpm: [100, 20000],
+  /** Power, kW: a fraction of a kW at a low table row up to the largest engines a waterjet is fitted to. */
+  powerKw: [0.1, 10000],
+  powerHp: [0.1, 13400],
+  /** A curve row or known point, in its own unit (power in kW, hp, PS; torque in N·m, lbf·ft). */
+  curveValue: [0.1, 100000],
+  /** Impeller rating at the reference speed, kW / hp: small jets at a low reference speed to large ones at a high one. */
+  ratingKw: [0.01, 10000],
+  ratingHp: [0.01, 13400],
+  speedKn: [1, 120],
+  speedMph: [1, 140],
+  speedKmh: [2, 220],
+} as const;
+
+/** Engine speed, rpm. */
+export const rpm = () => between(RANGES.rpm[0], RANGES.rpm[1], 'rpm');
+
+/** Power in kW or hp (cruise settings, constant-power lines, known points). */
+export const powerKw = () => positiveBetween(RANGES.powerKw[0], RANGES.powerKw[1], 'kW');
+export const powerHp = () => positiveBetween(RANGES.powerHp[0], RANGES.powerHp[1], 'hp');
 
 /** A ± percentage tolerance, 0–25 %. */
 export const tolerancePct = () => between(0, 25, '%');
@@ -79,8 +112,8 @@ export const water = () =>
 
 export const driveLine = () =>
   z.strictObject({
-    ratio: z.number().positive({ error: 'must be a positive number (engine rpm per impeller rpm; 1 for direct drive)' }).max(10, { error: 'must be at most 10' }),
-    efficiency: z.number().gt(0, { error: 'must be greater than 0 and at most 1' }).max(1, { error: 'must be greater than 0 and at most 1' }).default(0.97),
+    ratio: positiveBetween(0.2, 10, '', 'must be a positive number (engine rpm per impeller rpm; 1 for direct drive)'),
+    efficiency: positiveBetween(0.5, 1, '', 'must be greater than 0 and at most 1').default(0.97),
   });
 
 /** A set of unit-named keys of which exactly one (required) or at most one may be given. */

@@ -1,12 +1,15 @@
 /** Schema of data/engines/<id>.yaml: an engine family and its variants (tunes). */
 import * as z from 'zod';
 import { checkEngineLimits } from './engineLimits.ts';
-import { atMost, between, label, LIMITS, name, optionalShape, positive, rpm, slug, text, tolerancePct, unitChoices } from './common.ts';
+import { atMost, between, label, LIMITS, name, optionalShape, positiveBetween, powerHp, powerKw, RANGES, rpm, slug, text, tolerancePct, unitChoices } from './common.ts';
 
 export const POWER_UNITS = ['kW', 'hp', 'PS'] as const;
 export const TORQUE_UNITS = ['N·m', 'Nm', 'lbf·ft', 'lbf-ft'] as const;
 export const CURVE_UNITS = [...POWER_UNITS, ...TORQUE_UNITS] as const;
 export type CurveUnit = (typeof CURVE_UNITS)[number];
+
+/** A table row's or known point's power or torque, in its own unit. */
+const curveValue = () => positiveBetween(RANGES.curveValue[0], RANGES.curveValue[1], 'in the unit given');
 
 /** Full-throttle table: rows of [engine rpm, power or torque in `unit`], rpm strictly increasing. */
 export const curveTable = () =>
@@ -14,7 +17,7 @@ export const curveTable = () =>
     .strictObject({
       unit: z.enum(CURVE_UNITS, { error: `must be one of ${CURVE_UNITS.join(', ')}` }),
       points: z
-        .array(z.tuple([rpm(), positive()], { error: 'must be a row [rpm, value], e.g. [4800, 350]' }), { error: 'must be a list of rows [rpm, value]' })
+        .array(z.tuple([rpm(), curveValue()], { error: 'must be a row [rpm, value], e.g. [4800, 350]' }), { error: 'must be a list of rows [rpm, value]' })
         .min(2, { error: 'must have at least 2 rows [rpm, value]' })
         .max(200, { error: 'must have at most 200 rows' }),
     })
@@ -36,7 +39,16 @@ export const KNOWN_POINT_KEYS = ['power_kw', 'power_hp', 'power_ps', 'torque_nm'
 /** One measured WOT point instead of a table; the model assumes constant torque through it. */
 export const knownPoint = () =>
   unitChoices(
-    z.strictObject({ rpm: rpm(), ...optionalShape(Object.fromEntries(KNOWN_POINT_KEYS.map((k) => [k, positive()])) as Record<(typeof KNOWN_POINT_KEYS)[number], ReturnType<typeof positive>>) }),
+    z.strictObject({
+      rpm: rpm(),
+      ...optionalShape({
+        power_kw: powerKw(),
+        power_hp: powerHp(),
+        power_ps: positiveBetween(RANGES.powerHp[0], RANGES.powerHp[1], 'PS'),
+        torque_nm: positiveBetween(RANGES.curveValue[0], RANGES.curveValue[1], 'N·m'),
+        torque_lbf_ft: positiveBetween(RANGES.curveValue[0], RANGES.curveValue[1], 'lbf·ft'),
+      } satisfies Record<(typeof KNOWN_POINT_KEYS)[number], z.ZodType>),
+    }),
     [{ keys: KNOWN_POINT_KEYS, required: true }],
   );
 

@@ -1,6 +1,6 @@
 /** Schema of data/jets/<id>.yaml: a jet unit (housing) and its impeller family. */
 import * as z from 'zod';
-import { atMost, between, label, LIMITS, name, positive, slug, text, tolerancePct, unitChoices, water } from './common.ts';
+import { atMost, between, label, LIMITS, name, positiveBetween, RANGES, slug, text, tolerancePct, unitChoices, water } from './common.ts';
 
 export const impeller = () =>
   unitChoices(
@@ -8,8 +8,8 @@ export const impeller = () =>
       id: slug(),
       label: label(),
       /** Shaft power absorbed at the family's reference speed and water density. */
-      rating_kw: positive().describe('Power absorbed at the reference speed and water, kW').optional(),
-      rating_hp: positive().describe('Power absorbed at the reference speed and water, hp (550 ft·lbf/s)').optional(),
+      rating_kw: positiveBetween(RANGES.ratingKw[0], RANGES.ratingKw[1], 'kW').describe('Power absorbed at the reference speed and water, kW').optional(),
+      rating_hp: positiveBetween(RANGES.ratingHp[0], RANGES.ratingHp[1], 'hp').describe('Power absorbed at the reference speed and water, hp (550 ft·lbf/s)').optional(),
       notes: text().optional(),
     }),
     [{ keys: ['rating_kw', 'rating_hp'], required: true }],
