@@ -1,3 +1,5 @@
+import { terminalText } from '../data/errors.ts';
+
 /** Where the command line writes: injectable so tests can capture output without a terminal. */
 export interface CliIo {
   readonly out: (text: string) => void;
@@ -7,11 +9,11 @@ export interface CliIo {
   readonly isTty: boolean;
 }
 
-/** The process's own streams and environment. */
+/** The process's own streams and environment; everything written passes the one terminal escape (terminalText). */
 export function processIo(): CliIo {
   return {
-    out: (text) => process.stdout.write(text),
-    err: (text) => process.stderr.write(text),
+    out: (text) => process.stdout.write(terminalText(text)),
+    err: (text) => process.stderr.write(terminalText(text)),
     env: process.env,
     isTty: Boolean(process.stderr.isTTY),
   };

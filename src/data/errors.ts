@@ -53,6 +53,17 @@ export function terminalSafe(text: string): string {
   return text.replace(UNSAFE_FOR_TERMINAL, (ch) => `\\u${ch.charCodeAt(0).toString(16).padStart(4, '0')}`);
 }
 
+/**
+ * A whole output of the command line made terminal-safe: every line through terminalSafe, the line
+ * breaks kept, and a carriage return kept only at the very start (the progress line rewrites itself).
+ * The last escape before the terminal: whatever user text a message carries (a key, a value, a file or
+ * folder name given on the command line), it shows instead of acting. Idempotent on escaped text.
+ */
+export function terminalText(text: string): string {
+  const rewrite = text.startsWith('\r') ? '\r' : '';
+  return rewrite + text.slice(rewrite.length).split('\n').map(terminalSafe).join('\n');
+}
+
 /** Sort by file, line, column, then message, and drop exact repeats (one variant's fault reported per file once). */
 export function sortErrors(errors: readonly DataError[]): DataError[] {
   const seen = new Set<string>();

@@ -36,7 +36,7 @@ interface Issue {
   keys?: string[];
   values?: unknown[];
   expected?: string;
-  params?: { found?: string };
+  params?: { found?: string; char?: string; fix?: string };
 }
 
 function locateIssue(source: YamlSource, issue: Issue): DataError[] {
@@ -62,7 +62,9 @@ function locateIssue(source: YamlSource, issue: Issue): DataError[] {
     return [dataError(place, { field, expected: 'is required', found: 'nothing', fix: `add ${String(issue.path[issue.path.length - 1])}: with ${what}` })];
   }
   const length = issue.code === 'too_big' && typeof issue.input === 'string' ? ` (${[...issue.input].length} characters)` : '';
-  return [dataError(place, { field, expected: issue.message, found: issue.params?.found ?? `${where.found}${length}`, fix: hint(issue) })];
+  // A character refused inside a text is named where it is typed (or where its escape starts), not at the text's start.
+  const at = issue.params?.char ? { file: source.file, ...source.locateChar(issue.path, issue.params.char) } : place;
+  return [dataError(at, { field, expected: issue.message, found: issue.params?.found ?? `${where.found}${length}`, fix: issue.params?.fix ?? hint(issue) })];
 }
 
 /** A fix worth saying for common slips: quoted numbers, units typed after numbers, near-miss words. */

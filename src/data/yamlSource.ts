@@ -31,6 +31,12 @@ export interface YamlSource {
   readonly value: unknown;
   /** Position of the value at path (or of its key with at: 'key'), falling back to the nearest ancestor. */
   locate(path: readonly PathSegment[], opts?: { at?: 'key' | 'value' }): Located;
+  /**
+   * Position of the character ch inside the text value at path: where it is typed, or where its YAML
+   * escape starts (`"\u202e"`, `"\x1b"`, `"\e"`, a surrogate pair `"\ud83d\udea4"`); the value's
+   * start when neither is found.
+   */
+  locateChar(path: readonly PathSegment[], ch: string): { line: number; column: number };
 }
 
 export type ParseResult = { ok: true; source: YamlSource } | { ok: false; errors: DataError[] };
@@ -93,7 +99,15 @@ export function parseYaml(args: { file: string; text: string }): ParseResult {
       };
     }
     const value = doc.toJS({ maxAliasCount: MAX_ALIAS_COUNT }) as unknown;
-    return { ok: true, source: { file, value, locate: (path, opts) => locate({ doc, text, lineCounter, path, at: opts?.at ?? 'value' }) } };
+    return {
+      ok: true,
+      source: {
+        file,
+        value,
+        locate: (path, opts) => locate({ doc, text, lineCounter, path, at: opts?.at ?? 'value' }),
+        locateChar: (path, ch) => locateChar({ doc, text, lineCounter, path, ch }),
+      },
+    };
   } catch (err) {
     // Alias bombs (ReferenceError) and pathological inputs end here: report, never a stack trace.
     const reason = err instanceof Error ? err.message : String(err);
@@ -202,6 +216,45 @@ function locate(args: { doc: Document; text: string; lineCounter: LineCounter; p
   const pos = lineCounter.linePos(Math.min(offset, text.length));
   const found = !exists ? 'nothing' : path.length === 0 && !node ? 'nothing (an empty file)' : keyNode ? JSON.stringify(String(keyNode.value)) : empty ? describeValue(null) : foundText(node, text);
   return { line: pos.line, column: pos.col, found, exists };
+}
+
+function locateChar(args: { doc: Document; text: string; lineCounter: LineCounter; path: readonly PathSegment[]; ch: string }): { line: number; column: number } {
+  const { doc, text, lineCounter, path, ch } = args;
+  let node: Node | null = (doc.contents as Node | null) ?? null;
+  for (const seg of path) {
+    const next = child(doc, node, seg);
+    if (!next) break;
+    node = next.node;
+  }
+  const start = node?.range?.[0] ?? 0;
+  const end = node?.range?.[1] ?? start;
+  const pos = lineCounter.linePos(Math.min(start + charOffset(text.slice(start, end), ch), text.length));
+  return { line: pos.line, column: pos.col };
+}
+
+/** YAML 1.2 double-quoted escapes (§5.7): one character each, or a UTF-16 half for \u d800–dfff. */
+const ESCAPE = /\\(x[0-9a-fA-F]{2}|u[0-9a-fA-F]{4}|U[0-9a-fA-F]{8}|[0abtnvfreN_LP"/\\ \t])/g;
+const NAMED_ESCAPES: Readonly<Record<string, string>> = { '0': '\0', a: '\x07', b: '\b', t: '\t', '\t': '\t', n: '\n', v: '\v', f: '\f', r: '\r', e: '\x1b', N: '\x85', _: '\xa0', L: '\u2028', P: '\u2029', '"': '"', '/': '/', '\\': '\\', ' ': ' ' };
+
+function unescapeOne(code: string): string {
+  if (code.length === 1) return NAMED_ESCAPES[code] ?? code;
+  const n = Number.parseInt(code.slice(1), 16);
+  return n <= 0xffff ? String.fromCharCode(n) : String.fromCodePoint(n);
+}
+
+/** Offset of ch in the raw text of a scalar: typed as itself, else the escape that writes it; 0 when neither. */
+function charOffset(raw: string, ch: string): number {
+  const typed = raw.indexOf(ch);
+  if (typed >= 0) return typed;
+  const escapes = [...raw.matchAll(ESCAPE)];
+  for (let i = 0; i < escapes.length; i++) {
+    const one = unescapeOne(escapes[i][1]);
+    // A character beyond U+FFFF may be written as two \u escapes (a surrogate pair) side by side.
+    const next = escapes[i + 1];
+    const pair = next && next.index === escapes[i].index! + escapes[i][0].length ? one + unescapeOne(next[1]) : '';
+    if (one === ch || pair === ch) return escapes[i].index!;
+  }
+  return 0;
 }
 
 function pairKeyOffset(pair: Pair | null): number | undefined {

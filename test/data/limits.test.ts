@@ -42,7 +42,7 @@ const lineOf = (text: string, needle: string) => text.split('\n').findIndex((l) 
 
 describe('the limits the sheets are laid out for', () => {
   it('are the ones the issue names', () => {
-    expect(LIMITS).toEqual({ labelChars: 16, nameChars: 60, impellersPerJet: 24, variantsPerFamily: 6, cruisePerBoat: 8, cruisePowersPerChart: 8, cautions: 6, cautionChars: 300 });
+    expect(LIMITS).toEqual({ labelChars: 16, nameChars: 60, impellersPerJet: 24, variantsPerFamily: 6, cruisePerBoat: 8, cruisePowersPerChart: 8, cautions: 6, cautionChars: 300, contactLineChars: 120, dataRevisionChars: 40 });
   });
 
   it('load a jet with 24 impellers of 16-character labels; refuse 25 at the impellers: line', () => {

@@ -3,7 +3,8 @@ import type { CurvePoint, CurveSource, EngineLimits } from '../../model/types.ts
 import { powerKwFromTorque, powerToKw, torqueToNm, type TorqueUnit } from '../../units.ts';
 import type { DataError, EngineFamily, EngineVariant } from '../types.ts';
 import type { RawCurveTable, RawEngineFile, RawKnownPoint, RawVariant } from '../schema/engine.ts';
-import { POWER_UNITS } from '../schema/engine.ts';
+import { RANGES } from '../schema/common.ts';
+import { KNOWN_POINT_KEYS, POWER_UNITS } from '../schema/engine.ts';
 import { at } from '../validate.ts';
 import type { PathSegment, YamlSource } from '../yamlSource.ts';
 import { STANDARD_REFERENCE } from './conditions.ts';
@@ -35,6 +36,7 @@ export function normaliseEngine(source: YamlSource, raw: RawEngineFile): Normali
     const limits: EngineLimits = { idleRpm: idle.value, windowLowRpm: window.value[0], windowHighRpm: window.value[1], maxRpm: max.value };
     const scale = pick('curve_scale')?.value ?? 1;
     const source_ = curve ? tableSource(curve.value, scale) : knownSource(known!.value, scale);
+    errors.push(...powerOutOfRange({ source, curve, known, source_, scaled: pick('curve_scale') !== undefined }));
     if (curve) warnShortTable({ source, warnings, curve, limits });
     const ref = pick('reference_conditions')?.value;
     const bsfc = pick('bsfc_g_per_kwh')?.value;
@@ -106,6 +108,33 @@ function knownSource(k: RawKnownPoint, scale: number): CurveSource {
       : k.torque_nm !== undefined ? powerKwFromTorque({ torqueNm: k.torque_nm, speedRpm: k.rpm })
       : powerKwFromTorque({ torqueNm: torqueToNm(k.torque_lbf_ft ?? Number.NaN, 'lbf·ft'), speedRpm: k.rpm }));
   return { kind: 'knownPoint', point: { speedRpm: k.rpm, powerKw: scale * powerKw } };
+}
+
+/**
+ * Each row (or the known point) as power, after curve_scale, within the power range of every other
+ * field (RANGES.powerKw): a torque row of 100000 N·m is in its own range but makes 52 MW at 5000 rpm.
+ */
+function powerOutOfRange(args: {
+  source: YamlSource;
+  curve: Sourced<RawCurveTable>;
+  known: Sourced<RawKnownPoint>;
+  source_: CurveSource;
+  scaled: boolean;
+}): DataError[] {
+  const [lo, hi] = RANGES.powerKw;
+  const points = args.source_.kind === 'table' ? args.source_.points : [args.source_.point];
+  const knownKey = args.known ? KNOWN_POINT_KEYS.find((k) => args.known!.value[k] !== undefined) : undefined;
+  return points.flatMap((p, i) => {
+    if (p.powerKw >= lo && p.powerKw <= hi) return [];
+    const path = args.curve ? [...args.curve.path, 'points', i, 1] : [...args.known!.path, knownKey ?? 'rpm'];
+    const kw = p.powerKw < 1 ? p.powerKw.toPrecision(2) : String(Math.round(p.powerKw));
+    return [
+      at(args.source, path, {
+        expected: `must give a power between ${lo} and ${hi} kW${args.scaled ? ' (after curve_scale)' : ''}, the powers of engines a waterjet is fitted to; it gives ${kw} kW at ${p.speedRpm} rpm`,
+        fix: 'check the unit of the table and the value',
+      }),
+    ];
+  });
 }
 
 /** The model never extrapolates a table: say so when the table stops short of the WOT window. */

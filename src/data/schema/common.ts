@@ -11,8 +11,48 @@ export const ISO_DATE_PATTERN = /^\d{4}-\d{2}-\d{2}$/;
 export const slug = () =>
   z.string().regex(SLUG_PATTERN, { error: 'must be a lower-case id like "river-180" (letters a–z, digits, single hyphens)' });
 
-/** Non-empty text. */
-export const text = () => z.string().min(1, { error: 'must not be empty' });
+/**
+ * Characters no user text may hold, wherever it is printed (sheets, pages, PDF titles, the terminal):
+ * C0 and C1 controls other than tab and line breaks, DEL, the soft hyphen, zero-width and invisible
+ * format characters, bidirectional marks, embeddings, overrides and isolates (an override can reverse
+ * a name in a page title), line and paragraph separators, interlinear annotation marks, U+FEFF, the
+ * non-characters U+FFFE and U+FFFF, and lone UTF-16 surrogates (a YAML escape such as "\ud800"; with the u flag a surrogate pair is one
+ * character and never matches).
+ */
+export const INVISIBLE_CHARS =
+  /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f-\u009f\u00ad\u061c\u115f\u1160\u180e\u200b-\u200f\u2028-\u202e\u2060-\u2064\u2066-\u206f\u3164\ufeff\ufff9-\ufffb\uffa0\ufffe\uffff\ud800-\udfff]/u;
+
+/** \u202e: how a character is written in a YAML double-quoted string (and in check's messages). */
+export function escapedChar(ch: string): string {
+  const code = ch.codePointAt(0) ?? 0;
+  return code > 0xffff ? `\\U${code.toString(16).padStart(8, '0')}` : `\\u${code.toString(16).padStart(4, '0')}`;
+}
+
+/** U+202E for "\u202e". */
+export function codePointName(ch: string): string {
+  return `U+${(ch.codePointAt(0) ?? 0).toString(16).toUpperCase().padStart(4, '0')}`;
+}
+
+/**
+ * Text a person typed. Runs of spaces, tabs and line breaks become one space and the ends are trimmed
+ * (a folded `>` block or a pasted tab prints the same on paper and on the page); an invisible or
+ * control character (INVISIBLE_CHARS) is refused at the character, so nothing is silently dropped on
+ * the sheets and kept in the HTML.
+ */
+export const text = () =>
+  z
+    .string()
+    .overwrite((s) => s.replace(/[ \t\r\n]+/g, ' ').trim())
+    .min(1, { error: 'must not be empty' })
+    .superRefine((s, ctx) => {
+      const hit = INVISIBLE_CHARS.exec(s);
+      if (!hit) return;
+      ctx.addIssue({
+        code: 'custom',
+        message: 'must hold only printable characters (no control, zero-width or bidirectional-control characters)',
+        params: { char: hit[0], found: `"${escapedChar(hit[0])}" (${codePointName(hit[0])})`, fix: 'delete it: it is invisible, or would hide or reorder text on the sheets and pages' },
+      });
+    });
 
 /**
  * What the sheets are laid out for (docs/sheets.md, "Limits every sheet lays out"): every catalogue
@@ -30,6 +70,10 @@ export const LIMITS = {
   cruisePowersPerChart: 8,
   cautions: 6,
   cautionChars: 300,
+  /** site.yaml's contact line, printed under the shop name in every sheet's header. */
+  contactLineChars: 120,
+  /** site.yaml's data revision, printed in every sheet's footer. */
+  dataRevisionChars: 40,
 } as const;
 
 const tooLong = (max: number, what: string) => `must be at most ${max} characters (${what})`;

@@ -5,15 +5,15 @@ import { atMost, isoDate, LIMITS, text } from './common.ts';
 export const siteFile = () =>
   z
     .strictObject({
-      shop_name: text(),
-      contact_line: text(),
+      shop_name: text().max(LIMITS.nameChars, { error: `must be at most ${LIMITS.nameChars} characters (every sheet's header prints it)` }),
+      contact_line: text().max(LIMITS.contactLineChars, { error: `must be at most ${LIMITS.contactLineChars} characters (every sheet's header prints it)` }),
       units: z
         .strictObject({
           power: z.enum(['kW', 'hp'], { error: 'must be kW or hp' }).default('kW'),
           speed: z.enum(['kn', 'mph', 'km/h'], { error: 'must be kn, mph or km/h' }).default('kn'),
         })
         .default({ power: 'kW', speed: 'kn' }),
-      data_revision: text(),
+      data_revision: text().max(LIMITS.dataRevisionChars, { error: `must be at most ${LIMITS.dataRevisionChars} characters (every sheet's footer prints it)` }),
       issue_date: isoDate(),
       cautions: cautionList()
         .optional()
