@@ -15,6 +15,7 @@ import { loadProjectFromFiles } from '../../src/data/load.ts';
 import { boatFile, bookFile, engineFile, jetFile, siteFile } from '../../src/data/schema/index.ts';
 import { validate } from '../../src/data/validate.ts';
 import { parseYaml } from '../../src/data/yamlSource.ts';
+import { demoWith as demoWithFile } from './helpers.ts';
 import { demoWithNumber, fieldPath, inRange, NUMERIC_FIELDS, numericFieldsOf, stressValues, type NumericField } from '../reliability/numericFields.ts';
 
 /** How a range error reads (a positive number, between min and max, 0 or 3). */
@@ -117,6 +118,23 @@ describe('every numeric field at its bounds, just past them and at extreme magni
       expect(here[0].found, what).toBe(text.slice(node!.range![0], node!.range![1]));
     }
     expect(refused).toBeGreaterThan(cases.length / 2);
+  });
+
+  it('a torque row inside its own range that gives more power than any engine is refused at the row, as is a known point', () => {
+    const ENGINE = 'data/engines/brindlecombe-td6.yaml';
+    const text = readFileSync(ENGINE, 'utf8');
+    const row = text.split('\n').findIndex((l) => l.includes('[3800, 790]')) + 1;
+    const r = loadProjectFromFiles(demoWithFile(ENGINE, text.replace('[3800, 790]', '[3800, 90000]')));
+    // P = T·2πn/60 = 90000 N·m × 2π × 3800 / 60 / 1000 = 35814 kW (NIST SP 811: kW = N·m × rpm / 9549.297).
+    expect(r.ok ? [] : r.errors.map((e) => e.message)).toEqual([
+      `${ENGINE}:${row}:14 curve.points[6][1] must give a power between 0.1 and 10000 kW, the powers of engines a waterjet is fitted to; it gives 35814 kW at 3800 rpm, found 90000 — check the unit of the table and the value`,
+    ]);
+    const CORBRICK = 'data/engines/corbrick-four.yaml';
+    const known = readFileSync(CORBRICK, 'utf8').replace('power_hp: 165', 'power_hp: 13000').replace('known_point:', 'curve_scale: 2\nknown_point:');
+    const k = loadProjectFromFiles(demoWithFile(CORBRICK, known));
+    expect(k.ok ? [] : k.errors.map((e) => `${e.field} ${e.expected}`)).toEqual([
+      'known_point.power_hp must give a power between 0.1 and 10000 kW (after curve_scale), the powers of engines a waterjet is fitted to; it gives 19388 kW at 5600 rpm',
+    ]);
   });
 
   it('a cruise speed of zero, a rating of 1e-300 or 1e300 are located errors of the whole project load', () => {

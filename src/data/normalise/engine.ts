@@ -36,7 +36,10 @@ export function normaliseEngine(source: YamlSource, raw: RawEngineFile): Normali
     const limits: EngineLimits = { idleRpm: idle.value, windowLowRpm: window.value[0], windowHighRpm: window.value[1], maxRpm: max.value };
     const scale = pick('curve_scale')?.value ?? 1;
     const source_ = curve ? tableSource(curve.value, scale) : knownSource(known!.value, scale);
-    errors.push(...powerOutOfRange({ source, curve, known, source_, scaled: pick('curve_scale') !== undefined }));
+    // One report per row: variants sharing the family's table say it once (the first variant's figures).
+    for (const e of powerOutOfRange({ source, curve, known, source_, scaled: pick('curve_scale') !== undefined })) {
+      if (!errors.some((x) => x.line === e.line && x.column === e.column)) errors.push(e);
+    }
     if (curve) warnShortTable({ source, warnings, curve, limits });
     const ref = pick('reference_conditions')?.value;
     const bsfc = pick('bsfc_g_per_kwh')?.value;
