@@ -70,12 +70,16 @@ export function parseYaml(args: { file: string; text: string }): ParseResult {
   }
   try {
     const lineCounter = new LineCounter();
-    const doc = parseDocument(text, { lineCounter, uniqueKeys: true, schema: 'core', merge: false, prettyErrors: false, strict: true });
+    // The parser's own duplicate-key check compares every key with every key before it (quadratic in a
+    // mapping's size); duplicateKeys() finds the same keys in one pass, so a file is read in linear time.
+    const doc = parseDocument(text, { lineCounter, uniqueKeys: false, schema: 'core', merge: false, prettyErrors: false, strict: true });
     // Every duplicate key is its own mistake; other syntax errors cascade, so only the first is shown.
-    const firstOther = [...doc.errors, ...doc.warnings].find((e) => e.code !== 'DUPLICATE_KEY');
+    const firstOther = [...doc.errors, ...doc.warnings][0];
     // A "duplicate" after a syntax error is usually the parser's recovery misreading the lines (a tab, a lost indent).
-    const duplicates = doc.errors.filter((e) => e.code === 'DUPLICATE_KEY' && (!firstOther || e.pos[0] < firstOther.pos[0]));
-    const problems = [...duplicates, ...(firstOther ? [firstOther] : [])];
+    const duplicates = duplicateKeys(doc.contents as Node | null, [], [])
+      .filter((d) => !firstOther || d.offset < firstOther.pos[0])
+      .map((d) => ({ code: 'DUPLICATE_KEY', pos: [d.offset, d.end] as [number, number], message: '', keyPath: d.path }));
+    const problems: { code: string; pos: [number, number]; message: string; keyPath?: PathSegment[] }[] = [...duplicates, ...(firstOther ? [firstOther] : [])];
     if (problems.length > 0) {
       return {
         ok: false,
@@ -93,19 +97,19 @@ export function parseYaml(args: { file: string; text: string }): ParseResult {
               [...caretExcerpt(text, d.line, d.column), `the YAML parser said: ${parserWords(parsed)}${parserAt}`],
             );
           }
-          const keyPath = e.code === 'DUPLICATE_KEY' ? pathOfKeyAt(doc.contents as Node | null, e.pos[0], []) : undefined;
-          return dataError({ file, line: pos.line, column: pos.col }, yamlProblem({ code: e.code, excerpt: text.slice(e.pos[0], e.pos[1]), keyPath }));
+          return dataError({ file, line: pos.line, column: pos.col }, yamlProblem({ code: e.code, excerpt: text.slice(e.pos[0], e.pos[1]), keyPath: e.keyPath }));
         }),
       };
     }
     const value = doc.toJS({ maxAliasCount: MAX_ALIAS_COUNT }) as unknown;
+    const found: Finder = { doc, index: new WeakMap() };
     return {
       ok: true,
       source: {
         file,
         value,
-        locate: (path, opts) => locate({ doc, text, lineCounter, path, at: opts?.at ?? 'value' }),
-        locateChar: (path, ch) => locateChar({ doc, text, lineCounter, path, ch }),
+        locate: (path, opts) => locate({ found, text, lineCounter, path, at: opts?.at ?? 'value' }),
+        locateChar: (path, ch) => locateChar({ found, text, lineCounter, path, ch }),
       },
     };
   } catch (err) {
@@ -133,23 +137,30 @@ function yamlProblem(args: { code: string; excerpt: string; keyPath?: PathSegmen
   }
 }
 
-/** Path (keys and list positions) of the map key starting at offset, for naming a duplicate key. */
-function pathOfKeyAt(node: Node | null, offset: number, path: PathSegment[]): PathSegment[] | undefined {
+/** The text of a mapping key as the loaded value names it (`1` and `"1"` are the same key there). */
+function keyName(key: unknown): string {
+  return isScalar(key) ? String(key.value) : String(key);
+}
+
+/**
+ * Every key that repeats an earlier key of its mapping, with its path and place, in document order:
+ * one pass with a set per mapping. Aliases are not followed (their target is checked where it stands).
+ */
+function duplicateKeys(node: Node | null, path: PathSegment[], out: { offset: number; end: number; path: PathSegment[] }[]): { offset: number; end: number; path: PathSegment[] }[] {
   if (isMap(node)) {
+    const seen = new Set<string>();
     for (const pair of node.items) {
-      const key = pair.key as Node | null;
-      const here = isScalar(key) ? [...path, String(key.value)] : path;
-      if (key?.range?.[0] === offset) return here;
-      const inner = pathOfKeyAt(pair.value as Node | null, offset, here);
-      if (inner) return inner;
+      const name = keyName(pair.key);
+      const here = [...path, name];
+      const range = (pair.key as Node | null)?.range;
+      if (seen.has(name) && range) out.push({ offset: range[0], end: range[1], path: here });
+      seen.add(name);
+      duplicateKeys(pair.value as Node | null, here, out);
     }
   } else if (isSeq(node)) {
-    for (const [i, item] of node.items.entries()) {
-      const inner = pathOfKeyAt(item as Node | null, offset, [...path, i]);
-      if (inner) return inner;
-    }
+    node.items.forEach((item, i) => duplicateKeys(item as Node | null, [...path, i], out));
   }
-  return undefined;
+  return out;
 }
 
 function lineCounterFor(text: string): LineCounter {
@@ -197,14 +208,20 @@ function skipQuoted(text: string, start: number): number {
   return text.length;
 }
 
-function locate(args: { doc: Document; text: string; lineCounter: LineCounter; path: readonly PathSegment[]; at: 'key' | 'value' }): Located {
-  const { doc, text, lineCounter, path } = args;
-  let node: Node | null = (doc.contents as Node | null) ?? null;
+/** The document and, per mapping, its keys indexed on first use: a lookup is then constant time, not a scan. */
+interface Finder {
+  readonly doc: Document;
+  readonly index: WeakMap<object, Map<string, Pair>>;
+}
+
+function locate(args: { found: Finder; text: string; lineCounter: LineCounter; path: readonly PathSegment[]; at: 'key' | 'value' }): Located {
+  const { found: finder, text, lineCounter, path } = args;
+  let node: Node | null = (finder.doc.contents as Node | null) ?? null;
   let pair: Pair | null = null;
   let reached = 0;
   let empty = false;
   for (const seg of path) {
-    const next = child(doc, node, seg);
+    const next = child(finder, node, seg);
     if (!next) break;
     [node, pair, empty] = [next.node, next.pair, next.empty];
     reached++;
@@ -218,11 +235,11 @@ function locate(args: { doc: Document; text: string; lineCounter: LineCounter; p
   return { line: pos.line, column: pos.col, found, exists };
 }
 
-function locateChar(args: { doc: Document; text: string; lineCounter: LineCounter; path: readonly PathSegment[]; ch: string }): { line: number; column: number } {
-  const { doc, text, lineCounter, path, ch } = args;
-  let node: Node | null = (doc.contents as Node | null) ?? null;
+function locateChar(args: { found: Finder; text: string; lineCounter: LineCounter; path: readonly PathSegment[]; ch: string }): { line: number; column: number } {
+  const { found: finder, text, lineCounter, path, ch } = args;
+  let node: Node | null = (finder.doc.contents as Node | null) ?? null;
   for (const seg of path) {
-    const next = child(doc, node, seg);
+    const next = child(finder, node, seg);
     if (!next) break;
     node = next.node;
   }
@@ -261,10 +278,17 @@ function pairKeyOffset(pair: Pair | null): number | undefined {
   return pair && isScalar(pair.key) ? pair.key.range?.[0] : undefined;
 }
 
-function child(doc: Document, node: Node | null, seg: PathSegment): { node: Node | null; pair: Pair | null; empty: boolean } | null {
-  const resolved = node && isAlias(node) ? ((node.resolve(doc) as Node | undefined) ?? null) : node;
+function child(finder: Finder, node: Node | null, seg: PathSegment): { node: Node | null; pair: Pair | null; empty: boolean } | null {
+  const resolved = node && isAlias(node) ? ((node.resolve(finder.doc) as Node | undefined) ?? null) : node;
   if (isMap(resolved)) {
-    const p = resolved.items.find((it) => isScalar(it.key) && String(it.key.value) === String(seg));
+    let keys = finder.index.get(resolved);
+    if (!keys) {
+      // The first pair of each key, as a lookup by key found it.
+      keys = new Map();
+      for (const it of resolved.items) if (isScalar(it.key) && !keys.has(String(it.key.value))) keys.set(String(it.key.value), it as Pair);
+      finder.index.set(resolved, keys);
+    }
+    const p = keys.get(String(seg));
     if (!p) return null;
     // An empty value (`key:`) has a zero-width node; point at the key instead.
     const value = p.value as Node | null;
