@@ -77,11 +77,12 @@ describe('the limits the sheets are laid out for', () => {
   it('load a wall chart with 8 constant-power lines; refuse 9 at the list', () => {
     const BOOK = 'data/books/shop-wall-charts.yaml';
     const book = readFileSync(BOOK, 'utf8');
-    const powers = (n: number) => `cruise_powers_kw: [${Array.from({ length: n }, (_, i) => 60 + 20 * i).join(', ')}]`;
-    expect(errorsOf(BOOK, book.replace('cruise_powers_kw: [80, 120, 160]', powers(8)))).toEqual([]);
-    const text = book.replace('cruise_powers_kw: [80, 120, 160]', powers(9));
+    const powers = (n: number) => `cruise_powers_hp: [${Array.from({ length: n }, (_, i) => 60 + 20 * i).join(', ')}]`;
+    expect(errorsOf(BOOK, book.replace('cruise_powers_hp: [60, 100]', powers(8)))).toEqual([]);
+    const text = book.replace('cruise_powers_hp: [60, 100]', powers(9));
+    const line = lineOf(text, '      cruise_powers_hp:');
     expect(errorsOf(BOOK, text)).toEqual([
-      `${BOOK}:18:7 sheets[0].conditions.cruise_powers_kw must have at most 8 entries (a wall chart draws each as a labelled line), found a list of 9 entries`,
+      `${BOOK}:${line}:7 sheets[2].conditions.cruise_powers_hp must have at most 8 entries (a wall chart draws each as a labelled line), found a list of 9 entries`,
     ]);
   });
 
