@@ -109,7 +109,7 @@ describe('every numeric field at its bounds and at extreme magnitudes: check ⇔
         }
         rmSync(dir, { recursive: true, force: true });
       }),
-      { seed: SEED, numRuns: fuzzRuns({ name: 'MATCHBOOK_NUMERIC_FUZZ_RUNS', fallback: 80 }), endOnFailure: true },
+      { seed: SEED, numRuns: fuzzRuns({ name: 'MATCHBOOK_NUMERIC_FUZZ_RUNS', fallback: 150 }), endOnFailure: true },
     );
     // The seed reaches both sides of the equivalence.
     expect(seen.built).toBeGreaterThan(0);
