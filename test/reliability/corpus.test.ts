@@ -3,10 +3,11 @@
  * column, field, the value found and what was expected — and `matchbook check` exits 1 on it.
  * Cases marked accepted (a byte-order mark, CR LF line endings, a stray .yml) load, as documented.
  */
-import { writeFileSync } from 'node:fs';
+import { readFileSync, truncateSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { checkData } from '../../src/data/check.ts';
+import { terminalSafe } from '../../src/data/errors.ts';
 import { loadProject } from '../../src/data/load.ts';
 import type { DataError } from '../../src/data/types.ts';
 import { MAX_FILE_BYTES } from '../../src/data/yamlSource.ts';
@@ -34,7 +35,8 @@ function expectLocated(actual: readonly DataError[], wanted: readonly ExpectedEr
     expect(hit, `no error ${x.file}:${x.line}:${x.column} ${x.field} among\n${actual.map((e) => e.message).join('\n')}`).toBeDefined();
     // The printed sentence leads with the place and carries both the found and the expected text.
     expect(hit!.message.startsWith(`${dataDir}/${x.file}:${x.line}:${x.column} `)).toBe(true);
-    expect(hit!.message).toContain(x.found);
+    // The sentence carries user text through the terminal escape (a key of ESC sequences shows as \u001b…).
+    expect(hit!.message).toContain(terminalSafe(x.found));
     expect(hit!.message).toContain(x.expected);
   }
   // No cascade into files the case did not name.
@@ -95,6 +97,28 @@ describe('generated large files', () => {
     expect(result.ok).toBe(false);
     if (result.ok) return;
     expectLocated(result.errors, [{ file: CURVE, line: 1, column: 1, field: '', found: '6.0 MB', expected: 'must be at most 5 MB' }], dataDir);
+  });
+
+  it('refuses a 50 MB file by its size, before reading it (a sparse file: nothing is written)', async () => {
+    const dataDir = materialise({ name: 'bom-at-start', about: '', remove: [], errors: [], warnings: [], files: [], accepted: true }, join(work, 'fifty-mb'));
+    truncateSync(join(dataDir, CURVE), 50 * 1024 * 1024);
+    const result = await loadProject(dataDir);
+    expect(result.ok).toBe(false);
+    if (result.ok) return;
+    expectLocated(result.errors, [{ file: CURVE, line: 1, column: 1, field: '', found: '50.0 MB', expected: 'must be at most 5 MB' }], dataDir);
+  });
+
+  it('refuses 10,000 unknown keys with one located error each, at its own line', async () => {
+    const JET = 'jets/tarnwell-212.yaml';
+    const dataDir = materialise({ name: 'bom-at-start', about: '', remove: [], errors: [], warnings: [], files: [], accepted: true }, join(work, 'many-keys'));
+    const head = readFileSync(join(dataDir, JET), 'utf8');
+    const lines = head.split('\n').length;
+    writeFileSync(join(dataDir, JET), head + Array.from({ length: 10_000 }, (_, i) => `extra_${i}: ${i}\n`).join(''));
+    const result = await loadProject(dataDir);
+    expect(result.ok).toBe(false);
+    if (result.ok) return;
+    expect(result.errors).toHaveLength(10_000);
+    expectLocated(result.errors, [0, 4999, 9999].map((i) => ({ file: JET, line: lines + i, column: 1, field: `extra_${i}`, found: `a field named "extra_${i}"`, expected: 'is not a field here' })), dataDir);
   });
 });
 
