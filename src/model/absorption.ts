@@ -4,6 +4,7 @@
  * referred to the engine through the ratio (n_imp = n_engine / ratio) and the drive-line efficiency:
  *   P_engine(n) = rating · ((n / ratio) / n_ref)^k · (ρ / ρ_ref) / efficiency = coefficient · n^k.
  */
+import { ModelInputError } from './errors.ts';
 import type { DriveLineSpec, ImpellerFamilySpec, ImpellerSpec } from './types.ts';
 
 export interface Absorber {
@@ -37,10 +38,10 @@ export function makeAbsorber(args: {
   positive(where, 'water density kg/m³', args.waterDensityKgM3);
   positive(where, 'reference water density kg/m³', family.referenceDensityKgM3);
   if (!(driveLine.efficiency > 0 && driveLine.efficiency <= 1)) {
-    throw new RangeError(`${where}: drive-line efficiency must be in (0, 1], found ${driveLine.efficiency}; 0.97 is typical`);
+    throw new ModelInputError(`${where}: drive-line efficiency must be in (0, 1], found ${driveLine.efficiency}; 0.97 is typical`);
   }
   if (!(family.exponent > 1 && family.exponent <= 5)) {
-    throw new RangeError(`${where}: absorption exponent must be above 1 and at most 5, found ${family.exponent}; 3 is the affinity law`);
+    throw new ModelInputError(`${where}: absorption exponent must be above 1 and at most 5, found ${family.exponent}; 3 is the affinity law`);
   }
   const densityRatio = args.waterDensityKgM3 / family.referenceDensityKgM3;
   const k = family.exponent;
@@ -59,7 +60,7 @@ export function makeAbsorber(args: {
 
 function positive(where: string, field: string, value: number): void {
   if (!(value > 0 && Number.isFinite(value))) {
-    throw new RangeError(`${where}: ${field} must be a positive number, found ${value}`);
+    throw new ModelInputError(`${where}: ${field} must be a positive number, found ${value}`);
   }
 }
 

@@ -10,6 +10,7 @@
  *                          exponent fit that is implausible or too uncertain). On a known-point engine
  *                          this anchors the constant-torque line at the measured point(s).
  */
+import { ModelInputError } from './errors.ts';
 import type { Installation } from './installation.ts';
 import { solveInstallation } from './installation.ts';
 import { fitLogLinear, type LogFit, type LogPoint } from './logFit.ts';
@@ -79,7 +80,7 @@ export function calibrate(args: { inst: Installation; impellers: readonly Impell
   const byId = new Map(args.impellers.map((i) => [i.id, i]));
   const impellerOf = (t: TrialInput): ImpellerSpec => {
     const found = byId.get(t.impellerId);
-    if (!found) throw new RangeError(`sea trial ${t.date}: impeller "${t.impellerId}" is not in the jet's impeller list; use one of ${[...byId.keys()].join(', ')}`);
+    if (!found) throw new ModelInputError(`sea trial ${t.date}: impeller "${t.impellerId}" is not in the jet's impeller list; use one of ${[...byId.keys()].join(', ')}`);
     return found;
   };
   const trialRatings = args.trials.map((trial) =>

@@ -4,6 +4,7 @@
  * constant torque through that point (P = P0 · n / n0) between idle and maximum speed.
  * The curve never extrapolates: outside its rows powerAt() answers with a status, not a number.
  */
+import { ModelInputError } from './errors.ts';
 import { ambientPowerFactor } from './ambient.ts';
 import { hermiteMaxSlope, hermiteValue, monotonePieces, type HermitePiece } from './monotoneCubic.ts';
 import type { Ambient, EngineSpec } from './types.ts';
@@ -74,7 +75,7 @@ export function engineCurve(engine: EngineSpec, opts: { ambient?: Ambient; power
     : 1;
   const factor = engine.conditionFactor * ambientFactor * benchFactor * (opts.powerFactor ?? 1);
   if (!(factor > 0 && Number.isFinite(factor))) {
-    throw new RangeError(`engine ${engine.id}: power factor must be a positive number, found ${factor}; check condition_factor and the site air`);
+    throw new ModelInputError(`engine ${engine.id}: power factor must be a positive number, found ${factor}; check condition_factor and the site air`);
   }
   const source = engine.curve;
   if (source.kind === 'knownPoint') {
@@ -82,10 +83,10 @@ export function engineCurve(engine: EngineSpec, opts: { ambient?: Ambient; power
     const lo = engine.limits.idleRpm;
     const hi = engine.limits.maxRpm;
     if (!(speedRpm > 0 && powerKw > 0 && Number.isFinite(speedRpm) && Number.isFinite(powerKw))) {
-      throw new RangeError(`engine ${engine.id}: the known point needs rpm > 0 and power > 0, found ${speedRpm} rpm, ${powerKw} kW`);
+      throw new ModelInputError(`engine ${engine.id}: the known point needs rpm > 0 and power > 0, found ${speedRpm} rpm, ${powerKw} kW`);
     }
     if (!(lo > 0 && hi > lo)) {
-      throw new RangeError(`engine ${engine.id}: idle speed must be above 0 and below the maximum speed, found idle ${lo} rpm, max ${hi} rpm`);
+      throw new ModelInputError(`engine ${engine.id}: idle speed must be above 0 and below the maximum speed, found idle ${lo} rpm, max ${hi} rpm`);
     }
     const slope = (powerKw * factor) / speedRpm;
     const piece = Object.freeze({ x0: lo, x1: hi, y0: slope * lo, y1: slope * hi, m0: slope, m1: slope });
@@ -99,13 +100,13 @@ export function engineCurve(engine: EngineSpec, opts: { ambient?: Ambient; power
 }
 
 function checkTable(engineId: string, xs: readonly number[], ys: readonly number[]): void {
-  if (xs.length === 0) throw new RangeError(`engine ${engineId}: the power table has no rows; give at least two (rpm, power) rows`);
+  if (xs.length === 0) throw new ModelInputError(`engine ${engineId}: the power table has no rows; give at least two (rpm, power) rows`);
   for (let i = 0; i < xs.length; i++) {
     if (!(Number.isFinite(xs[i]) && xs[i] > 0 && Number.isFinite(ys[i]) && ys[i] >= 0)) {
-      throw new RangeError(`engine ${engineId}: table row ${i + 1} must have rpm > 0 and power >= 0, found ${xs[i]} rpm, ${ys[i]} kW`);
+      throw new ModelInputError(`engine ${engineId}: table row ${i + 1} must have rpm > 0 and power >= 0, found ${xs[i]} rpm, ${ys[i]} kW`);
     }
     if (i > 0 && !(xs[i] > xs[i - 1])) {
-      throw new RangeError(
+      throw new ModelInputError(
         `engine ${engineId}: table speeds must increase row by row, found ${xs[i]} rpm after ${xs[i - 1]} rpm; sort the rows and remove repeats`,
       );
     }

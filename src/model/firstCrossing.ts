@@ -12,6 +12,7 @@
  */
 import type { Absorber } from './absorption.ts';
 import type { EngineCurve } from './engineCurve.ts';
+import { ModelInputError } from './errors.ts';
 import { hermiteMaxSlope, hermiteValue, type HermitePiece } from './monotoneCubic.ts';
 
 /** Bisection depth cap: 2^-60 of a piece is far below any meaningful rpm. */
@@ -29,6 +30,10 @@ export function firstCrossingRpm(curve: EngineCurve, absorber: Absorber, lo: num
   const { pieces, screen } = curve;
   const c = absorber.coefficient;
   const k = absorber.exponent;
+  // NaN guard: every loop below is bounded (pieces, MAX_DEPTH, 100 steps), but a NaN would only come out as a NaN speed.
+  if (!(c > 0 && Number.isFinite(c) && k > 0 && Number.isFinite(k) && Number.isFinite(lo) && Number.isFinite(hi))) {
+    throw new ModelInputError(`the operating point cannot be solved: absorption coefficient ${c}, exponent ${k}, speed range ${lo}–${hi} rpm must be finite positive numbers; check the impeller ratings, the drive line and the engine's speeds`);
+  }
   const lnC = absorber.lnCoefficient + SCREEN_MARGIN;
   const lnFloorKw = screen.lnFloorKw;
   const lnEndRpm = screen.lnEndRpm;
@@ -111,6 +116,9 @@ function refine(p: HermitePiece, c: number, k: number, u: number, su: number, v:
     const t = (x - p.x0) / h;
     const ab = absorbed(c, k, x);
     const sx = p.y0 + t * (A + t * (B + t * C)) - ab;
+    if (!Number.isFinite(sx)) {
+      throw new ModelInputError(`the operating point cannot be solved: the power surplus at ${x} rpm is ${sx} kW, not a finite number; check the engine curve and the impeller ratings`);
+    }
     // Balanced to 1e-12 of the power: done.
     if (Math.abs(sx) <= 1e-12 * ab) return x;
     if (sx > 0) a = x;

@@ -3,6 +3,7 @@
  * When the engine data give no BSFC, a typical part-load figure for the fuel is used and marked so.
  * Range at a steady speed: hours = usable litres / (L/h); distance = hours × speed.
  */
+import { ModelInputError } from './errors.ts';
 import { litresToUsGal } from '../units.ts';
 import type { Fuel } from './types.ts';
 
@@ -53,7 +54,7 @@ export interface FuelRange {
 export function fuelRange(args: { tankL: number; litresPerHour: number; speedKn?: number; reserveFraction?: number }): FuelRange {
   const reserveFraction = args.reserveFraction ?? DEFAULT_RESERVE_FRACTION;
   if (!(reserveFraction >= 0 && reserveFraction < 1)) {
-    throw new RangeError(`fuel reserve must be a fraction from 0 up to (not including) 1, found ${reserveFraction}; 1/3 is the rule of thirds`);
+    throw new ModelInputError(`fuel reserve must be a fraction from 0 up to (not including) 1, found ${reserveFraction}; 1/3 is the rule of thirds`);
   }
   const hoursToEmpty = args.tankL / args.litresPerHour;
   const hoursWithReserve = hoursToEmpty * (1 - reserveFraction);

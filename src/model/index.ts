@@ -1,5 +1,6 @@
 /** Public API of the physics model: pure functions, powers in kW, speeds in rpm. */
 export type * from './types.ts';
+export { ModelInputError } from './errors.ts';
 export { engineCurve, type CurveKind, type CurveValue, type EngineCurve } from './engineCurve.ts';
 export { hermiteSlope, hermiteValue, type HermitePiece } from './monotoneCubic.ts';
 export {

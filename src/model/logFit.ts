@@ -6,6 +6,7 @@
  * s² = Σr² / (n − G − 1) gives SE(k) = s / sqrt(Sxx) and SE(b_g) = s·sqrt(1/n_g + x̄_g² / Sxx).
  * With the slope fixed, b_g = mean(y − k·x) and SE(b_g) = s / sqrt(n_g) with n − G degrees of freedom.
  */
+import { ModelInputError } from './errors.ts';
 
 export interface LogPoint {
   readonly group: string;
@@ -43,7 +44,7 @@ function groupMeans(points: readonly LogPoint[]): Map<string, { n: number; mx: n
 
 /** Common-slope, per-group-intercept least squares; slope fixed when opts.slope is given. */
 export function fitLogLinear(points: readonly LogPoint[], opts: { slope?: number } = {}): LogFit {
-  if (points.length === 0) throw new RangeError('fitLogLinear: no points to fit');
+  if (points.length === 0) throw new ModelInputError('fitLogLinear: no points to fit');
   const means = groupMeans(points);
   let sxx = 0;
   let sxy = 0;
@@ -53,7 +54,7 @@ export function fitLogLinear(points: readonly LogPoint[], opts: { slope?: number
     sxy += (p.x - m.mx) * (p.y - m.my);
   }
   const fixed = opts.slope !== undefined;
-  if (!fixed && !(sxx > 0)) throw new RangeError('fitLogLinear: every group sits at one x, so no slope can be fitted');
+  if (!fixed && !(sxx > 0)) throw new ModelInputError('fitLogLinear: every group sits at one x, so no slope can be fitted');
   const slope = fixed ? opts.slope! : sxy / sxx;
   const residuals = points.map((p) => {
     const m = means.get(p.group)!;

@@ -4,8 +4,8 @@
  * reported with the sheet's name, the reason and the fix, and the build exits with status 1.
  */
 
-/** Errors of src/sheets and src/render the user fixes; told apart by name, as they may come from a worker. */
-const USER_FIXABLE = new Set(['LayoutError', 'UnsupportedCharacterError']);
+/** Errors of src/sheets, src/render and src/model (figures it cannot compute with) the user fixes; told apart by name, as they may come from a worker. */
+const USER_FIXABLE = new Set(['LayoutError', 'UnsupportedCharacterError', 'ModelInputError']);
 
 export class SheetDrawError extends Error {
   constructor(

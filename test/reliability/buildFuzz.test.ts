@@ -18,7 +18,7 @@ import { demoSources, fuzzRuns, mutateDemo, numbersIn, type Mutation } from './m
 const demo = demoSources();
 const DATE_ISO = '2026-11-02';
 /** The errors a user fixes in the data (src/site/errors.ts tells them apart by name the same way). */
-const TYPED = new Set(['LayoutError', 'UnsupportedCharacterError']);
+const TYPED = new Set(['LayoutError', 'UnsupportedCharacterError', 'ModelInputError']);
 
 /** Numbers moved by a factor, or replaced: changes that often still load and stress the physics. */
 const numberChange: fc.Arbitrary<Mutation> = fc.record({
