@@ -8,5 +8,5 @@ export const data = {
 };
 
 export function render(d: { site: SiteData; boat: BoatView }): string {
-  return boatPage(d.site.view, d.boat);
+  return d.site.page(`boat ${d.boat.id}`, () => boatPage(d.site.view, d.boat));
 }

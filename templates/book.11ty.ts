@@ -8,5 +8,5 @@ export const data = {
 };
 
 export function render(d: { site: SiteData; book: BookView }): string {
-  return bookPage(d.site.view, d.book);
+  return d.site.page(`book ${d.book.id}`, () => bookPage(d.site.view, d.book));
 }

@@ -8,5 +8,5 @@ export const data = {
 };
 
 export function render(d: { site: SiteData; family: FamilyView }): string {
-  return familyPage(d.site.view, d.family);
+  return d.site.page(`family ${d.family.id}`, () => familyPage(d.site.view, d.family));
 }

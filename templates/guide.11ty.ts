@@ -8,5 +8,5 @@ export const data = {
 };
 
 export function render(d: { site: SiteData; guide: GuideView }): string {
-  return guidePage(d.site.view, d.guide);
+  return d.site.page(`guide ${d.guide.slug}`, () => guidePage(d.site.view, d.guide));
 }

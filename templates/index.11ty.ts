@@ -5,5 +5,5 @@ import type { SiteData } from '../src/site/siteView.ts';
 export const data = { permalink: 'index.html' };
 
 export function render(d: { site: SiteData }): string {
-  return indexPage(d.site.view);
+  return d.site.page('index', () => indexPage(d.site.view));
 }

@@ -24,7 +24,8 @@ export function classify(path: string): Classified {
   const parts = path.replace(/\\/g, '/').split('/');
   const name = parts[parts.length - 1];
   const parent = parts.length > 1 ? parts[parts.length - 2] : '';
-  const kind = KIND_DIRS[parent];
+  // Object.hasOwn: a folder named like an object-prototype word (constructor, __proto__) is no kind.
+  const kind = Object.hasOwn(KIND_DIRS, parent) ? KIND_DIRS[parent] : undefined;
   if (name.endsWith('.yml')) {
     return { kind: 'ignored', reason: { expected: 'is not read: definition files end in .yaml', found: `"${name}"`, fix: `rename it to ${name.slice(0, -4)}.yaml` } };
   }

@@ -14,6 +14,7 @@ import { normaliseJet } from './normalise/jet.ts';
 import type { Normalised } from './normalise/shared.ts';
 import { normaliseSite } from './normalise/site.ts';
 import { boatFile, bookFile, engineFile, jetFile, siteFile } from './schema/index.ts';
+import { SLUG_PATTERN } from './schema/common.ts';
 import type { Boat, Book, DataError, EngineFamily, JetUnit, LoadResult, SiteConfig } from './types.ts';
 import { at, validate } from './validate.ts';
 import { decodeUtf8 } from './utf8.ts';
@@ -145,7 +146,9 @@ function idCheck(source: YamlSource, stem: string): DataError[] {
   const value = source.value as { id?: unknown } | null;
   const id = typeof value === 'object' && value !== null ? value.id : undefined;
   if (typeof id !== 'string' || id === stem) return [];
-  return [at(source, ['id'], { expected: `must match the file name (${stem}.yaml)`, fix: `change id to ${stem}, or rename the file to ${id}.yaml` })];
+  // A file name that is no id (capitals, underscores, `__proto__`) can only be fixed by renaming the file.
+  const fix = SLUG_PATTERN.test(stem) ? `change id to ${stem}, or rename the file to ${id}.yaml` : `rename the file to ${id}.yaml (file names are lower-case ids)`;
+  return [at(source, ['id'], { expected: `must match the file name (${stem}.yaml)`, fix })];
 }
 
 interface Built {

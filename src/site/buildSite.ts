@@ -6,8 +6,10 @@
 import { loadProject } from '../data/load.ts';
 import { printedError } from '../data/errors.ts';
 import type { DataError } from '../data/types.ts';
-import { checkOutputFolder, createStaging, discardStaging, swapIn } from './atomicDir.ts';
+import { existsSync } from 'node:fs';
+import { checkOutputFolder, createStaging, discardStaging, OutputFolderError, placeError, swapIn } from './atomicDir.ts';
 import { buildDateIso } from './dateIso.ts';
+import type { FaultHook } from './drawSheets.ts';
 import { SheetDrawError } from './errors.ts';
 import { sheetDrawProblem } from './sheetProblems.ts';
 import type { BuildCache } from './renderCache.ts';
@@ -26,6 +28,8 @@ export interface BuildOptions {
   readonly cache?: BuildCache;
   /** A long-lived render pool to use (and leave running); by default one is started and closed. */
   readonly renderer?: SheetRenderer;
+  /** Only tests set it: throws at a named step (a sheet's scene or render, a book, the files, a page, the swap). */
+  readonly fault?: FaultHook;
 }
 
 export type BuildOutcome =
@@ -58,15 +62,26 @@ export async function buildSite(opts: BuildOptions): Promise<BuildOutcome> {
       cache: opts.cache,
       renderer,
       onProgress: opts.onProgress,
+      fault: opts.fault,
     });
+    if (opts.fault) site.beforePage = (name) => opts.fault?.('pages', name);
     const pages = await writePages({ site, outDir: staging });
+    opts.fault?.('swap', opts.outDir);
     swapIn({ staging, outDir: opts.outDir });
     return { ok: true, counts: { ...counts, pages }, warningsText };
   } catch (error) {
+    // Every step awaits its own work before it rejects (sheets in flight, books, pages), so nothing
+    // writes into the staging folder once it is gone; the pool is closed before it is removed.
+    if (!opts.renderer) await renderer.close();
     discardStaging(staging);
+    // A write still on its way when a fault of ours stopped the build cannot bring the folder back
+    // (outputFiles never makes its root); one turn of the event loop later it is checked again.
+    await new Promise((done) => setImmediate(done));
+    if (existsSync(staging)) discardStaging(staging);
     // `check` lays out the same sheets, so this is rare; it is still said at the definition's line.
     if (error instanceof SheetDrawError) return { ok: false, errorsText: formatDataErrors([sheetDrawProblem(loaded.project, error)], 'problem'), warningsText };
-    throw error;
+    if (error instanceof OutputFolderError) throw error;
+    throw placeError(error, opts.outDir);
   } finally {
     if (!opts.renderer) await renderer.close();
   }

@@ -25,7 +25,12 @@ export interface DrawArgs {
   readonly cache?: BuildCache;
   readonly renderer?: SheetRenderer;
   readonly onProgress?: (done: number, total: number) => void;
+  /** Called at each step of each sheet; only tests set it, to inject a failure there. */
+  readonly fault?: FaultHook;
 }
+
+/** A test's injected failure: throws at the named step of the build. */
+export type FaultHook = (stage: 'scene' | 'render' | 'books' | 'files' | 'pages' | 'swap', name: string) => void;
 
 /** Page-size name for CSS @page rules, from the media size in tenths of a millimetre. */
 function printPageName(scene: Scene): string {
@@ -74,31 +79,44 @@ export async function drawSheets(args: DrawArgs): Promise<{ views: Map<string, S
   const limit = 4;
   const inFlight = new Set<Promise<void>>();
   let failure: unknown;
-  for (const { slug, request } of args.plan.sheets) {
-    const scene = await drawingSheet(slug, () => cachedScene(request, args));
-    if (args.keep.has(slug)) scenes.set(slug, scene);
-    const task = drawingSheet(slug, () => renderSheetFiles(scene, { cache: args.cache, renderer: args.renderer })).then(
-      (rendered) => {
-        args.files.write(`sheets/${slug}.svg`, rendered.svg);
-        args.files.write(`sheets/${slug}.pdf`, rendered.pdf);
-        args.files.write(`sheets/${slug}.png`, rendered.png);
-        (rendered.morePages ?? []).forEach((page, i) => {
-          args.files.write(`${pageFile(slug, i + 2)}.svg`, page.svg);
-          args.files.write(`${pageFile(slug, i + 2)}.png`, page.png);
-        });
-        views.set(slug, sheetView(slug, request, scene, args.files));
-        args.onProgress?.(views.size, total);
-      },
-      (error: unknown) => {
+  try {
+    for (const { slug, request } of args.plan.sheets) {
+      const scene = await drawingSheet(slug, () => {
+        args.fault?.('scene', slug);
+        return cachedScene(request, args);
+      });
+      if (args.keep.has(slug)) scenes.set(slug, scene);
+      const task = drawingSheet(slug, async () => {
+        const rendered = await renderSheetFiles(scene, { cache: args.cache, renderer: args.renderer });
+        args.fault?.('render', slug);
+        return rendered;
+      }).then(
+        (rendered) => {
+          args.files.write(`sheets/${slug}.svg`, rendered.svg);
+          args.files.write(`sheets/${slug}.pdf`, rendered.pdf);
+          args.files.write(`sheets/${slug}.png`, rendered.png);
+          (rendered.morePages ?? []).forEach((page, i) => {
+            args.files.write(`${pageFile(slug, i + 2)}.svg`, page.svg);
+            args.files.write(`${pageFile(slug, i + 2)}.png`, page.png);
+          });
+          views.set(slug, sheetView(slug, request, scene, args.files));
+          args.onProgress?.(views.size, total);
+        },
+      );
+      // The first failure stops new sheets; those in flight still finish (or fail) before we return.
+      const settled = task.catch((error: unknown) => {
         failure ??= error;
-      },
-    );
-    inFlight.add(task);
-    void task.finally(() => inFlight.delete(task));
-    if (inFlight.size >= limit) await Promise.race(inFlight);
-    if (failure !== undefined) break;
+      });
+      inFlight.add(settled);
+      void settled.finally(() => inFlight.delete(settled));
+      if (inFlight.size >= limit) await Promise.race(inFlight);
+      if (failure !== undefined) break;
+    }
+  } finally {
+    // Whatever stopped the loop (a scene that cannot be drawn, a failed render), no sheet is still
+    // being written when this returns: the caller may then remove the folder safely.
+    await Promise.all(inFlight);
   }
-  await Promise.all(inFlight);
   if (failure !== undefined) throw failure;
   return { views, scenes };
 }

@@ -65,6 +65,9 @@ export function createRenderPool(opts: { size?: number } = {}): SheetRenderer {
     async close() {
       await Promise.all([...load.keys()].map((w) => w.terminate()));
       load.clear();
+      // Work still waiting on a worker never answers now: it fails, so no caller waits for ever.
+      for (const job of pending.values()) job.reject(new Error('the render pool was closed before this sheet was drawn'));
+      pending.clear();
     },
   };
 }

@@ -14,5 +14,7 @@ export async function writePages(args: { site: SiteData; outDir: string }): Prom
   // Our CLI words every message itself; Eleventy's logger would print stack traces on failure.
   eleventy.disableLogger();
   const [, templates] = (await eleventy.write()) as [unknown, readonly unknown[]];
+  // Page failures are caught per page (SiteData.page), so every page has settled by now.
+  if (args.site.failures.length > 0) throw args.site.failures[0];
   return templates.length;
 }

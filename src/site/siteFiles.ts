@@ -14,7 +14,7 @@ import { outputFiles } from './outputFiles.ts';
 import { planSheets } from './planSheets.ts';
 import { jsonHash, sceneHash, type BuildCache } from './renderCache.ts';
 import type { SheetRenderer } from './renderPool.ts';
-import { drawSheets } from './drawSheets.ts';
+import { drawSheets, type FaultHook } from './drawSheets.ts';
 import { siteResults } from './siteResults.ts';
 import { siteView } from './siteViewBuild.ts';
 import { SiteData } from './siteView.ts';
@@ -38,6 +38,16 @@ export interface SiteFilesArgs {
   /** Renders sheets off the main thread; without one, sheets render here. */
   readonly renderer?: SheetRenderer;
   readonly onProgress?: (done: number, total: number) => void;
+  /** Only tests set it, to inject a failure at a step. */
+  readonly fault?: FaultHook;
+}
+
+/** Every promise settled, then the first failure thrown: nothing is left running when this rejects. */
+async function allSettled<T>(promises: readonly Promise<T>[]): Promise<T[]> {
+  const results = await Promise.allSettled(promises);
+  const failed = results.find((r): r is PromiseRejectedResult => r.status === 'rejected');
+  if (failed) throw failed.reason;
+  return results.map((r) => (r as PromiseFulfilledResult<T>).value);
 }
 
 /** One PDF for the whole book, a bookmark per sheet; reused while its scenes and title are unchanged. */
@@ -72,7 +82,7 @@ export async function writeSiteFiles(args: SiteFilesArgs): Promise<{ site: SiteD
   const files = outputFiles(args.dir);
   const plan = planSheets(project);
   const inBooks = new Set([...plan.byBook.values()].flat());
-  const drawn = await drawSheets({ project, dateIso, plan, files, keep: inBooks, cache: args.cache, renderer: args.renderer, onProgress: args.onProgress });
+  const drawn = await drawSheets({ project, dateIso, plan, files, keep: inBooks, cache: args.cache, renderer: args.renderer, onProgress: args.onProgress, fault: args.fault });
   const sheets = drawn.views;
   const bookScenes = drawn.scenes;
 
@@ -80,9 +90,16 @@ export async function writeSiteFiles(args: SiteFilesArgs): Promise<{ site: SiteD
   const books = project.books
     .map((book) => ({ book, scenes: (plan.byBook.get(book.id) ?? []).map((slug) => bookScenes.get(slug) as Scene) }))
     .filter((b) => b.scenes.length > 0);
-  const pdfs = await Promise.all(books.map((b) => bookPdf({ ...b, dateIso, cache: args.cache, renderer: args.renderer })));
+  const pdfs = await allSettled(
+    books.map(async (b) => {
+      const pdf = await bookPdf({ ...b, dateIso, cache: args.cache, renderer: args.renderer });
+      args.fault?.('books', b.book.id);
+      return pdf;
+    }),
+  );
   books.forEach((b, i) => files.write(`books/${b.book.id}.pdf`, pdfs[i]));
 
+  args.fault?.('files', 'results');
   const { boatResults, familyResults } = siteResults(project, plan);
   for (const [id, result] of boatResults) files.write(`results/boats/${id}.json`, stableJson(result));
   for (const [id, charts] of familyResults) {

@@ -4,6 +4,7 @@
  * ("sheets/x.svg"); pages prefix them with the way back to the root so the site also works when
  * opened from disk.
  */
+import { escapeHtml } from './html.ts';
 
 /**
  * One table cell or fact value: plain text, or text with a link (relative to the site root) or a mark.
@@ -177,7 +178,25 @@ export interface ProblemView {
  * page's data, which for a thousand boats would copy the whole site a thousand times.
  */
 export class SiteData {
+  /**
+   * Failures of page templates, caught so that Eleventy finishes every page before the build gives up
+   * (a rejection would leave other pages still being written into a staging folder being removed).
+   */
+  readonly failures: unknown[] = [];
+  /** Called with each page's name before it renders; only tests set it, to inject a failure. */
+  beforePage?: (name: string) => void;
   constructor(readonly view: SiteView) {}
+  /** Renders one page, catching its failure (kept in failures; the page then says it failed). */
+  page(name: string, render: () => string): string {
+    try {
+      this.beforePage?.(name);
+      return render();
+    } catch (error) {
+      this.failures.push(error);
+      const message = error instanceof Error ? error.message : String(error);
+      return `<!doctype html><title>Page failed</title><p>matchbook could not write this page (${escapeHtml(message)}); this is a fault in matchbook.</p>\n`;
+    }
+  }
   get families(): readonly FamilyView[] {
     return this.view.families;
   }
