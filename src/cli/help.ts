@@ -30,12 +30,14 @@ reference, the text the sheet font can print, and the layout of every sheet the 
 Lists every problem with its file, line, column and field; check OK means build OK.
 Exit status 1 when there is a problem.
 `,
-  serve: `Usage: matchbook serve [--data DIR] [--out DIR] [--port N]
+  serve: `Usage: matchbook serve [--data DIR] [--out DIR] [--port N] [--host ADDRESS]
 
-Builds the site into the output folder (default: out), serves it on http://localhost:N/
-(default 8080) and rebuilds and reloads the page when a definition or template changes. While the
-data has problems, every page lists them at its top until the files are fixed.
-Stop with Ctrl+C.
+Builds the site into the output folder (default: out), serves it on http://127.0.0.1:N/ and
+rebuilds and reloads the page when a definition or template changes. While the data has problems,
+every page lists them at its top until the files are fixed.
+The port is 8080, or the next free one up to 8089; --port N uses exactly N (0: any free port).
+The preview is for this machine only: --host 0.0.0.0 (or one of the machine's addresses) lets other
+machines on the network see it. The address really listened on is printed. Stop with Ctrl+C.
 `,
   start: `Usage: matchbook start [--data DIR]
 

@@ -7,6 +7,7 @@ import { helpText } from './help.ts';
 import type { CliIo } from './io.ts';
 import { OutputFolderError } from '../site/atomicDir.ts';
 import { BuildDateError } from '../site/dateIso.ts';
+import { ServeAddressError } from '../site/devServer.ts';
 import { terminalSafe } from '../data/errors.ts';
 
 export const EXIT_OK = 0;
@@ -39,7 +40,7 @@ export async function runCli(argv: readonly string[], io: CliIo): Promise<number
 
 /** Prints one failure as a sentence and picks its exit status. */
 export function reportFailure(error: unknown, io: CliIo): number {
-  if (error instanceof UsageError || error instanceof OutputFolderError || error instanceof BuildDateError) {
+  if (error instanceof UsageError || error instanceof OutputFolderError || error instanceof BuildDateError || error instanceof ServeAddressError) {
     io.err(`matchbook: ${terminalSafe(error.message)}\n${error instanceof UsageError ? 'Run "matchbook --help" for usage.\n' : ''}`);
     return EXIT_MISUSE;
   }

@@ -21,6 +21,7 @@ export interface EleventyConfigApi {
   setQuietMode(quiet: boolean): void;
   setServerOptions(opts: Record<string, unknown>): void;
   setUseGitIgnore(use: boolean): void;
+  on(event: string, listener: () => void): void;
   /** Glob patterns Eleventy skips when it looks for templates. */
   readonly ignores: Set<string>;
 }
@@ -30,6 +31,8 @@ export interface EleventySetupOptions {
   readonly site: SiteData | (() => Promise<SiteData>);
   /** Extra folders to watch in serve mode (the data folder). */
   readonly watch?: readonly string[];
+  /** Called after every (re)build in watch mode (the preview then reloads open pages). */
+  readonly afterBuild?: () => void;
 }
 
 /** Registers our template format, assets and the site data with Eleventy. */
@@ -46,4 +49,6 @@ export function configureEleventy(config: EleventyConfigApi, opts: EleventySetup
   config.addGlobalData('site', opts.site);
   for (const path of opts.watch ?? []) config.addWatchTarget(path);
   config.setQuietMode(true);
+  const after = opts.afterBuild;
+  if (after) config.on('eleventy.after', () => after());
 }

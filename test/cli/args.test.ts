@@ -25,6 +25,20 @@ describe('parseArgs()', () => {
     expect(() => parseArgs(['build', '--data'])).toThrow(/--data needs a value/);
     expect(() => parseArgs(['build', '--data', '--out', 'x'])).toThrow(/--data needs a value/);
     expect(() => parseArgs(['serve', '--port', '70000'])).toThrow(UsageError);
+    expect(() => parseArgs(['serve', '--port', '80.5'])).toThrow(/--port must be a whole number/);
+    expect(() => parseArgs(['serve', '--port', '-1'])).toThrow(/--port needs a value|--port must be/);
+  });
+
+  it('serve listens on 127.0.0.1 unless --host says otherwise; --port 0 lets the system choose', () => {
+    expect(parseArgs(['serve'])).toMatchObject({ host: '127.0.0.1', port: 8080, portGiven: false });
+    expect(parseArgs(['serve', '--port', '0'])).toMatchObject({ port: 0, portGiven: true });
+    expect(parseArgs(['serve', '--host', '0.0.0.0'])).toMatchObject({ host: '0.0.0.0' });
+    expect(parseArgs(['serve', '--host=::1'])).toMatchObject({ host: '::1' });
+    expect(parseArgs(['serve', '--host', 'preview.example'])).toMatchObject({ host: 'preview.example' });
+    for (const bad of ['a b', 'http://x', '-x.example', 'x..example', `${'a'.repeat(64)}.example`]) {
+      expect(() => parseArgs(['serve', `--host=${bad}`]), bad).toThrow(/--host must be an IP address or a host name/);
+    }
+    expect(() => parseArgs(['build', '--host', '0.0.0.0'])).toThrow(/"build" does not take "--host"/);
   });
 });
 
@@ -39,7 +53,8 @@ describe('helpText()', () => {
   it('gives each command the options it accepts', () => {
     expect(helpText('build')).toMatch(/^Usage: matchbook build \[--data DIR\] \[--out DIR\]/);
     expect(helpText('check')).toMatch(/^Usage: matchbook check \[--data DIR\]\n/);
-    expect(helpText('serve')).toContain('--port N');
+    expect(helpText('serve')).toMatch(/^Usage: matchbook serve \[--data DIR\] \[--out DIR\] \[--port N\] \[--host ADDRESS\]\n/);
+    expect(helpText('serve')).toContain('http://127.0.0.1:N/');
     expect(helpText('start')).toMatch(/^Usage: matchbook start \[--data DIR\]\n/);
   });
 });
