@@ -2,8 +2,8 @@
  * The loader: YAML files → a validated, unit-normalised Project, or every located error at once.
  * Nothing half-built ever leaves: one error anywhere and the result is the error list.
  */
-import { readdir, readFile, stat } from 'node:fs/promises';
-import { posix } from 'node:path';
+import { lstat, readdir, readFile, realpath, stat } from 'node:fs/promises';
+import { posix, resolve, sep } from 'node:path';
 import { compareText, dataError, sortErrors } from './errors.ts';
 import { classify, KIND_DIRS, type FileKind, type SourceFile } from './files.ts';
 import { looseBoatReferences, looseBookReferences, memberIds } from './looseReferences.ts';
@@ -18,6 +18,7 @@ import { SLUG_PATTERN } from './schema/common.ts';
 import type { Boat, Book, DataError, EngineFamily, JetUnit, LoadResult, SiteConfig } from './types.ts';
 import { at, validate } from './validate.ts';
 import { decodeUtf8 } from './utf8.ts';
+import { lfLineBreaks } from './lineBreaks.ts';
 import { MAX_FILE_BYTES, parseYaml, type YamlSource } from './yamlSource.ts';
 
 export type { SourceFile } from './files.ts';
@@ -47,7 +48,8 @@ export async function loadProject(dataDir: string): Promise<LoadResult> {
   }
   const rootNames = await readdir(root).catch(() => [] as string[]);
   paths.push(...rootNames.filter((n) => /\.ya?ml$/.test(n) && n !== 'site.yaml').sort().map((n) => posix.join(root, n)));
-  const files = (await Promise.all(paths.map(readSource))).filter((f): f is SourceFile => f !== null);
+  const realRoot = await realpath(root).catch(() => resolve(root));
+  const files = (await Promise.all(paths.map((path) => readSource(path, realRoot)))).filter((f): f is SourceFile => f !== null);
   return loadProjectFromFiles(files, { dataDir: root });
 }
 
@@ -56,8 +58,23 @@ function folderError(root: string, found: string): LoadResult {
   return { ok: false, errors: [{ ...e, message: e.message.replace(' the file ', ' the folder ') }], warnings: [] };
 }
 
-async function readSource(path: string): Promise<SourceFile | null> {
+/**
+ * Reads one file of the data folder. A file that is, or lies in, a link leading outside the data
+ * folder is refused unread (its target and contents never reach a message): a data folder is what
+ * its owner put there, not a door to the rest of the machine.
+ */
+async function readSource(path: string, realRoot: string): Promise<SourceFile | null> {
   try {
+    const link = await lstat(path).catch((err: { code?: string }) => (err.code === 'ENOENT' ? null : Promise.reject(err)));
+    if (link === null) return null;
+    const real = await realpath(path).catch(() => null);
+    if (real === null) {
+      return { path, text: '', unreadable: { expected: 'must be a file', found: 'a link to something that does not exist', fix: 'copy the file into the data folder, or remove the link' } };
+    }
+    if (real !== realRoot && !real.startsWith(`${realRoot}${sep}`)) {
+      const found = link.isSymbolicLink() ? 'a symbolic link that leads outside the data folder' : 'a file in a folder that is a link leading outside the data folder';
+      return { path, text: '', unreadable: { expected: 'must be a file inside the data folder', found, fix: 'copy the file into the data folder instead of linking to it' } };
+    }
     const info = await stat(path);
     if (!info.isFile()) return null;
     if (info.size > MAX_FILE_BYTES) {
@@ -116,7 +133,7 @@ function loadFiles(files: readonly SourceFile[], opts: { dataDir?: string }): Lo
       checked.push({ kind: c.kind, stem: c.stem, raw: undefined });
       continue;
     }
-    const one = checkFile({ path: f.path, text: f.text, kind: c.kind, stem: c.stem });
+    const one = checkFile({ path: f.path, text: lfLineBreaks(f.text), kind: c.kind, stem: c.stem });
     errors.push(...one.errors);
     checked.push({ kind: c.kind, stem: c.stem, source: one.source, raw: one.raw });
   }

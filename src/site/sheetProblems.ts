@@ -6,6 +6,7 @@
  * file:line:column, never only a sheet slug.
  */
 import { readFileSync } from 'node:fs';
+import { lfLineBreaks } from '../data/lineBreaks.ts';
 import { dataError, fieldName } from '../data/errors.ts';
 import type { DataError, Project, SheetRequest } from '../data/types.ts';
 import { parseYaml, type PathSegment, type YamlSource } from '../data/yamlSource.ts';
@@ -112,7 +113,7 @@ function sheetProblem(args: { project: Project; plan: SheetPlan; slug: string; r
 
 function readText(file: string): string | undefined {
   try {
-    return readFileSync(file, 'utf8');
+    return lfLineBreaks(readFileSync(file, 'utf8'));
   } catch {
     return undefined;
   }

@@ -7,6 +7,7 @@
  * `serve`; invisible and control characters are refused earlier, by the data layer (INVISIBLE_CHARS).
  */
 import { readFileSync } from 'node:fs';
+import { lfLineBreaks } from '../data/lineBreaks.ts';
 import { join } from 'node:path';
 import { dataError, fieldName } from '../data/errors.ts';
 import { codePointName } from '../data/schema/common.ts';
@@ -42,7 +43,7 @@ function missing(text: string): string[] {
 
 /** Located errors for every character of the project's text the sheet font lacks, once per file and character. */
 export function unprintableText(project: Project, opts: { dataDir: string; readText?: (file: string) => string }): DataError[] {
-  const read = opts.readText ?? ((file: string) => readFileSync(file, 'utf8'));
+  const read = opts.readText ?? ((file: string) => lfLineBreaks(readFileSync(file, 'utf8')));
   const sources = [
     { file: join(opts.dataDir, 'site.yaml').replace(/\\/g, '/'), value: project.site as unknown },
     ...[...project.engines, ...project.jets, ...project.boats, ...project.books].map((d) => ({ file: d.source.file, value: d as unknown })),
