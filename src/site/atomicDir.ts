@@ -172,28 +172,46 @@ export function createStaging(outDir: string): string {
   }
 }
 
-/** Swaps a finished staging folder in as outDir; the previous output is removed only after the swap. */
+/**
+ * Swaps a finished staging folder in as outDir; the previous output is removed only after the swap.
+ * Another build swapping into the same folder at the same moment makes a rename fail (the folder came
+ * back, or went); the swap is then tried again, so concurrent builds end with one whole build in place.
+ */
 export function swapIn(args: { staging: string; outDir: string }): void {
   const out = resolve(args.outDir);
+  const raced = (error: unknown) => ['ENOTEMPTY', 'EEXIST', 'ENOENT'].includes((error as { code?: string }).code ?? '');
   try {
-    if (!existsSync(out)) {
-      renameSync(args.staging, out);
-      live.delete(args.staging);
+    for (let attempt = 1; ; attempt += 1) {
+      let old: string | undefined;
+      if (existsSync(out)) {
+        old = workPath(out, 'old');
+        try {
+          renameSync(out, old);
+        } catch (error) {
+          if (raced(error) && attempt < 20) continue;
+          throw error;
+        }
+        live.add(old);
+      }
+      try {
+        renameSync(args.staging, out);
+        live.delete(args.staging);
+      } catch (error) {
+        // Put the previous output back, unless another build's output took its place meanwhile.
+        if (old !== undefined) {
+          if (!existsSync(out)) renameSync(old, out);
+          else rmSync(old, { recursive: true, force: true });
+          live.delete(old);
+        }
+        if (raced(error) && attempt < 20) continue;
+        throw error;
+      }
+      if (old !== undefined) {
+        rmSync(old, { recursive: true, force: true });
+        live.delete(old);
+      }
       return;
     }
-    const old = workPath(out, 'old');
-    renameSync(out, old);
-    live.add(old);
-    try {
-      renameSync(args.staging, out);
-      live.delete(args.staging);
-    } catch (error) {
-      renameSync(old, out);
-      live.delete(old);
-      throw error;
-    }
-    rmSync(old, { recursive: true, force: true });
-    live.delete(old);
   } catch (error) {
     throw placeError(error, args.outDir);
   }

@@ -6,7 +6,7 @@
  * folder is left beside it. The tests wait for states (polling the folder); they never time anything.
  */
 import { spawn } from 'node:child_process';
-import { existsSync, mkdtempSync, readdirSync } from 'node:fs';
+import { existsSync, mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
@@ -30,7 +30,7 @@ beforeAll(() => {
 }, 300_000);
 
 /** What lies beside the output folder besides the data and the output. */
-const leftovers = (): string[] => readdirSync(root).filter((n) => n !== 'data' && n !== 'out');
+const leftovers = (): string[] => readdirSync(root).filter((n) => n !== 'data' && n !== 'out' && n !== 'data-other');
 
 function expectOutputUnchanged(): void {
   const now = tree(out);
@@ -103,5 +103,31 @@ describe('a build stopped mid-way', () => {
     expect(next.status, next.stderr).toBe(0);
     expect(leftovers()).toEqual([]);
     expect([...tree(out).keys()]).toEqual([...before.keys()]);
+  });
+});
+
+/** The real command, without blocking, so several can run at once. */
+function buildAsync(dataDir: string, outDir: string): Promise<{ code: number | null; stderr: string }> {
+  return new Promise((done) => {
+    const child = spawn(process.execPath, [`${REPO}bin/matchbook.js`, 'build', '--data', dataDir, '--out', outDir], { cwd: REPO, env: { ...process.env, NO_COLOR: '1', ...EPOCH } });
+    let stderr = '';
+    child.stderr.on('data', (b: Buffer) => (stderr += b.toString()));
+    child.on('exit', (code) => done({ code, stderr }));
+  });
+}
+
+describe('builds at the same time into one folder', () => {
+  it('three builds of two data sets at once: all succeed, one whole build is in place, nothing is left beside it', async () => {
+    // A second data set: the same shop with one boat less, so its tree is told apart from the first.
+    const other = join(root, 'data-other');
+    writeSmallData(other);
+    rmSync(join(other, 'boats', 'heavy-boat.yaml'));
+    const runs = await Promise.all([buildAsync(data, out), buildAsync(other, out), buildAsync(data, out)]);
+    for (const r of runs) expect(r.code, r.stderr).toBe(0);
+    expect(leftovers()).toEqual([]);
+    const files = [...tree(out).keys()];
+    const first = [...before.keys()];
+    if (files.includes('boats/heavy-boat/index.html')) expect(files).toEqual(first);
+    else expect(files).toEqual(first.filter((f) => !f.includes('heavy-boat')));
   });
 });
