@@ -28,6 +28,7 @@ export function createRenderPool(opts: { size?: number } = {}): SheetRenderer {
   const pending = new Map<number, Pending>();
   const load = new Map<Worker, number>();
   let nextId = 0;
+  let closing = false;
   const start = () => {
     for (let i = 0; i < size; i += 1) {
       // A plain-JS boot file registers tsx inside the thread (worker threads do not inherit it).
@@ -43,6 +44,14 @@ export function createRenderPool(opts: { size?: number } = {}): SheetRenderer {
       });
       worker.on('error', (error) => {
         for (const job of pending.values()) job.reject(error);
+        pending.clear();
+      });
+      // A worker that stops by itself (out of memory, killed) answers nothing more: its work fails
+      // instead of being waited for for ever, and no new work goes to it.
+      worker.on('exit', (code) => {
+        if (closing || !load.has(worker)) return;
+        load.delete(worker);
+        for (const job of pending.values()) job.reject(new Error(`a render worker stopped unexpectedly (exit code ${code})`));
         pending.clear();
       });
       load.set(worker, 0);
@@ -63,8 +72,10 @@ export function createRenderPool(opts: { size?: number } = {}): SheetRenderer {
     render: (scene) => submit({ kind: 'sheet', scene }),
     renderBook: async (scenes, options) => (await submit({ kind: 'book', scenes, options })).pdf,
     async close() {
+      closing = true;
       await Promise.all([...load.keys()].map((w) => w.terminate()));
       load.clear();
+      closing = false;
       // Work still waiting on a worker never answers now: it fails, so no caller waits for ever.
       for (const job of pending.values()) job.reject(new Error('the render pool was closed before this sheet was drawn'));
       pending.clear();
