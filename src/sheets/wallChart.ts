@@ -19,6 +19,7 @@ import { LayoutError } from './kit/errors.ts';
 import { minTypePt, STROKE, typeScale } from './kit/style.ts';
 import type { SheetContext } from './context.ts';
 import { conditionsText } from './words.ts';
+import { powerText } from './kit/format.ts';
 import { panelDomains } from './wallChart/domains.ts';
 import { ladderOrder, ladderRpmRange, planLadder, type LadderPlan } from './wallChart/ladder.ts';
 import { PANEL_MAX_IMPELLERS, PANEL_MIN_HEIGHT_MM, powerPanel } from './wallChart/panel.ts';
@@ -108,6 +109,9 @@ export function wallChartScene(request: WallChartRequest, ctx: SheetContext): Sc
             where: `${where}, power panel`,
           });
           content.push(panel.node);
+          // A cruise line the chart was asked for that no impeller reaches inside the plotted rpm range is said, not silently dropped.
+          const missing = conditions.cruisePowersKw.filter((kw) => !domains.cruisePowersKw.includes(kw));
+          if (missing.length > 0) notes.push(`Cruise line${missing.length > 1 ? 's' : ''} at ${missing.map((kw) => powerText(kw, unit)).join(', ')} left out of the power panel: outside its rpm range or above the engines' peak power.`);
           for (const n of panel.notes) {
             const impellerId = /^impeller(?:-label)?:([^|]+)/.exec(n.key)?.[1];
             notes.push(`Power panel (${n.number}): ${impellerId ? impLabel(impellerId) : n.text}`);

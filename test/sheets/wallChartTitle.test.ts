@@ -10,6 +10,7 @@ import { applySite } from '../../src/data/normalise/conditions.ts';
 import type { ChartConditions } from '../../src/data/types.ts';
 import { sheetScene } from '../../src/sheets/index.ts';
 import { planSheets } from '../../src/site/planSheets.ts';
+import { texts } from './sceneWalk.ts';
 
 describe('a wall chart says how its conditions differ from the default', () => {
   it("in the demo: a book's chart without conditions is the pairing's own chart; one with conditions names what differs, title and slug agreeing", async () => {
@@ -44,6 +45,16 @@ describe('a wall chart says how its conditions differ from the default', () => {
     expect(salt.conditions.water.kind).toBe('salt');
     // 60 and 100 hp as typed (mechanical horsepower, 745.699 87 W, NIST SP 811 appendix B).
     expect(salt.conditions.cruisePowersKw.map((kw) => kw / 0.74569987)).toEqual([expect.closeTo(60, 5), expect.closeTo(100, 5)]);
+  });
+
+  it('says which asked-for cruise line the power panel leaves out (45 kW is under every WOT point of the corbrick chart)', async () => {
+    const r = await loadProject('data');
+    if (!r.ok) throw new Error('demo did not load');
+    const planned = planSheets(r.project).sheets.find((s) => s.slug === 'wall-chart-corbrick-four-tarnwell-212-salt-cruise-45-75kw')!;
+    const scene = sheetScene(planned.request, { project: r.project, dateIso: '2026-01-01' });
+    const words = texts(scene).map((t) => t.text).join(' ');
+    expect(words).toContain('Cruise line at 45 kW left out of the power panel');
+    expect(words).not.toContain('Cruise line at 75 kW');
   });
 
   it('lays a partial site over the pairing site: only the fields the book gives change', () => {

@@ -134,7 +134,7 @@ export function planLadder(args: LadderArgs, form: LadderForm): LadderPlan {
   const impHead = paragraph({ x: args.x, y: args.y, widthMm: labelW - 1, text: 'Impeller', sizePt: HEADING_PT, weight: 'bold', role: 'ladder-heading', where });
   const lightest = paragraph({ x: args.x, y: args.y + impHead.heightMm, widthMm: labelW - 1, text: 'lightest first', sizePt: args.smallPt, colour: INK_SOFT, role: 'ladder-limits', where });
   const range = args.range ?? ladderRpmRange(result);
-  const tickValues = form === 'tall' ? ticks(range, stripLen, args.smallPt) : [];
+  const tickValues = ticks(range, stripLen, args.smallPt);
   const tickRowMm = tickValues.length > 0 ? linePitchMm(args.smallPt) + 0.6 : 0;
   const headH = Math.max(impHead.heightMm + lightest.heightMm, ...headParas.map((h) => h.heightMm)) + tickRowMm + 1.2;
 
