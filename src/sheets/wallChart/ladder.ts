@@ -5,8 +5,8 @@
  * rpm as a stop line with the forbidden side hatched, the predicted WOT rpm as a status-shaped mark on
  * its tolerance bar, and, in large type, the predicted rpm and the status in words.
  *
- * Two cell forms: `tall` (figures and words on a line above the scale, tick labels under each column
- * heading) and `compact` (scale, figure and words on one line, for long impeller lists).
+ * Two cell forms, both with tick labels under each column heading: `tall` (figures and words on a line
+ * above the scale) and `compact` (scale, figure and words on one line, for long impeller lists).
  */
 import { isWarning, type MatchStatus, type WallChartResult } from '../../analysis/index.ts';
 import type { Box, FontWeight, SceneNode } from '../../scene/types.ts';
