@@ -1,15 +1,17 @@
 /**
  * Scenes → one PDF, one page per scene, text in the embedded (subset) Source Sans 3 TrueType fonts.
  * Deterministic: dates come from opts.dateIso, the document ID is a hash of the content's
- * identity, and subset font names are fixed per weight.
+ * identity, and subset font tags come from the characters each subset holds. Tagged, with TrimBox and
+ * BleedBox on every page, black and greys in DeviceGray (the black ink alone).
  */
 import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import fontkit from '@pdf-lib/fontkit';
-import { PDFDocument, PDFHexString, PDFName, PDFString } from 'pdf-lib';
-import type { PDFFont } from 'pdf-lib';
+import { PDFDocument, PDFHexString, PDFName, PDFNumber, PDFString } from 'pdf-lib';
+import type { PDFFont, PDFPage, PDFRef } from 'pdf-lib';
 import { FONT_FILES, SHAPING_FEATURES } from '../scene/fonts.ts';
 import { memoiseLayout } from '../scene/shapingCache.ts';
+import { printableText } from '../scene/text.ts';
 import type { FontWeight, Scene, SceneNode } from '../scene/types.ts';
 import { addOutline } from './pdfOutline.ts';
 import { drawScene } from './pdfPage.ts';
@@ -47,8 +49,19 @@ const fontBytes = (() => {
     return bytes;
   };
 })();
-// Subset fonts carry a six-letter tag and '+' before the name (ISO 32000-1 §9.6.4); fixed per weight.
-const SUBSET_NAMES: Readonly<Record<FontWeight, string>> = { regular: 'MBKREG+SourceSans3-Regular', bold: 'MBKBLD+SourceSans3-Bold' };
+const FONT_NAMES: Readonly<Record<FontWeight, string>> = { regular: 'SourceSans3-Regular', bold: 'SourceSans3-Bold' };
+
+/**
+ * A subset font's name: a six-capital-letter tag, '+', the font's name (ISO 32000-1 §9.6.4). The tag is
+ * drawn from the set of characters the subset holds, so two files with different subsets never carry
+ * the same tag (a print shop merging or imposing files would otherwise mix up their glyphs), and the
+ * same text always gives the same tag (reproducible builds).
+ */
+export function subsetName(weight: FontWeight, characters: ReadonlySet<string>): string {
+  const digest = createHash('sha256').update(`${weight}\n${[...characters].sort().join('')}`).digest();
+  const tag = Array.from(digest.subarray(0, 6), (byte) => String.fromCharCode(65 + (byte % 26))).join('');
+  return `${tag}+${FONT_NAMES[weight]}`;
+}
 
 export interface PdfOptions {
   readonly title: string;
@@ -61,9 +74,14 @@ export interface PdfOptions {
   readonly outline?: readonly string[];
 }
 
-function weightsUsed(node: SceneNode, found: Set<FontWeight>): Set<FontWeight> {
-  if (node.type === 'text') found.add(node.weight);
-  if (node.type === 'group') for (const child of node.children) weightsUsed(child, found);
+/** The characters each weight draws (as printed: printableText), for the subset tags. */
+function charactersUsed(node: SceneNode, found: Map<FontWeight, Set<string>>): Map<FontWeight, Set<string>> {
+  if (node.type === 'text') {
+    let set = found.get(node.weight);
+    if (!set) found.set(node.weight, (set = new Set()));
+    for (const ch of printableText(node.text)) set.add(ch);
+  }
+  if (node.type === 'group') for (const child of node.children) charactersUsed(child, found);
   return found;
 }
 
@@ -81,22 +99,25 @@ export async function renderPdf(scenes: readonly Scene[], opts: PdfOptions): Pro
   if (scenes.length === 0) throw new RangeError(`the PDF "${opts.title}" has no pages; give it at least one sheet`);
   const doc = await PDFDocument.create({ updateMetadata: false });
   doc.registerFontkit(sharedFontkit as unknown as typeof fontkit);
-  const used = new Set<FontWeight>();
-  for (const scene of scenes) weightsUsed(scene.root, used);
+  const used = new Map<FontWeight, Set<string>>();
+  for (const scene of scenes) charactersUsed(scene.root, used);
   const fonts: Record<FontWeight, PDFFont | undefined> = { regular: undefined, bold: undefined };
   for (const weight of ['regular', 'bold'] as const) {
-    if (!used.has(weight)) continue;
+    const characters = used.get(weight);
+    if (!characters) continue;
     fonts[weight] = await doc.embedFont(fontBytes(weight), {
       subset: true,
-      customName: SUBSET_NAMES[weight],
+      customName: subsetName(weight, characters),
       // A fresh object each time: the shaping engine writes its defaults into the object it is given.
       features: { ...SHAPING_FEATURES },
     });
   }
-  for (const scene of scenes) {
+  const pages = scenes.map((scene) => {
     const page = doc.addPage([scene.widthMm * PT_PER_MM, scene.heightMm * PT_PER_MM]);
     drawScene({ page, scene, fonts });
-  }
+    return page;
+  });
+  tagStructure(doc, pages.map((page, i) => ({ page, alt: `${scenes[i].title}. ${scenes[i].description}` })));
   const outline = opts.outline ?? (scenes.length > 1 ? scenes.map((s) => s.title) : undefined);
   if (outline) addOutline(doc, outline);
 
@@ -108,10 +129,30 @@ export async function renderPdf(scenes: readonly Scene[], opts: PdfOptions): Pro
   doc.setProducer('matchbook with pdf-lib');
   doc.setCreationDate(date);
   doc.setModificationDate(date);
-  doc.catalog.set(PDFName.of('Lang'), PDFString.of('en'));
+  doc.catalog.set(PDFName.of('Lang'), PDFString.of('en-GB'));
   // A stable document ID (both halves equal: this is an original, not a revision).
   const identity = JSON.stringify([opts.title, opts.subject, opts.dateIso, scenes.map((s) => s.title)]);
   const id = PDFHexString.of(createHash('sha256').update(identity).digest('hex').slice(0, 32));
   doc.context.trailerInfo.ID = doc.context.obj([id, id]);
   return doc.save();
+}
+
+/**
+ * A tagged PDF (ISO 32000-1 §14.7–14.8): a Document structure element holding one Figure per page, in
+ * page order (the reading order), each with the sheet's title and description as its alternative text
+ * and the page's whole content (marked content MCID 0, see drawScene) as its content.
+ */
+function tagStructure(doc: PDFDocument, pages: readonly { page: PDFPage; alt: string }[]): void {
+  const { context } = doc;
+  const rootRef = context.nextRef();
+  const documentRef = context.nextRef();
+  const figures: PDFRef[] = pages.map(({ page, alt }, i) => {
+    page.node.set(PDFName.of('StructParents'), PDFNumber.of(i));
+    return context.register(context.obj({ Type: 'StructElem', S: 'Figure', P: documentRef, Pg: page.ref, K: 0, Alt: PDFString.of(alt) }));
+  });
+  context.assign(documentRef, context.obj({ Type: 'StructElem', S: 'Document', P: rootRef, K: figures }));
+  const nums = pages.flatMap((_, i) => [PDFNumber.of(i), context.obj([figures[i]])]);
+  context.assign(rootRef, context.obj({ Type: 'StructTreeRoot', K: documentRef, ParentTree: context.obj({ Nums: nums }), ParentTreeNextKey: pages.length }));
+  doc.catalog.set(PDFName.of('StructTreeRoot'), rootRef);
+  doc.catalog.set(PDFName.of('MarkInfo'), context.obj({ Marked: true }));
 }

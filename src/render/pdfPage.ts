@@ -3,10 +3,10 @@
  * PDF user space has y up in points; the scene has y down in mm. `toPt` is the one place y flips.
  */
 import {
-  LineCapStyle, LineJoinStyle, PDFNumber, PDFOperator, PDFOperatorNames, appendBezierCurve, beginText, clip, closePath, endPath, endText, fill,
+  LineCapStyle, LineJoinStyle, PDFName, PDFNumber, PDFOperator, PDFOperatorNames, appendBezierCurve, beginText, clip, closePath, endPath, endText, fill,
   fillAndStroke, lineTo, moveTo, popGraphicsState, pushGraphicsState, rectangle, rotateAndSkewTextDegreesAndTranslate,
-  setDashPattern, setFillingRgbColor, setFontAndSize, setGraphicsState, setLineCap, setLineJoin, setLineWidth,
-  setStrokingRgbColor, showText, stroke,
+  setDashPattern, setFillingGrayscaleColor, setFillingRgbColor, setFontAndSize, setGraphicsState, setLineCap, setLineJoin, setLineWidth,
+  setStrokingGrayscaleColor, setStrokingRgbColor, showText, stroke,
 } from 'pdf-lib';
 import type { PDFFont, PDFPage } from 'pdf-lib';
 import { printableText } from '../scene/text.ts';
@@ -36,6 +36,20 @@ function rgb01(colour: Colour): [number, number, number] {
   if (!hex) throw new TypeError(`colour must be "#rrggbb", found "${colour}"`);
   const channel = (i: number): number => parseInt(hex.slice(i, i + 2), 16) / 255;
   return [channel(0), channel(2), channel(4)];
+}
+
+/**
+ * Fill and stroke colour operators. A neutral colour (black and the greys: r = g = b) is written in
+ * DeviceGray, so black text and rules print in the black ink alone rather than as a four-ink mix.
+ */
+function fillColour(colour: Colour): PDFOperator {
+  const [r, g, b] = rgb01(colour);
+  return r === g && g === b ? setFillingGrayscaleColor(r) : setFillingRgbColor(r, g, b);
+}
+
+function strokeColour(colour: Colour): PDFOperator {
+  const [r, g, b] = rgb01(colour);
+  return r === g && g === b ? setStrokingGrayscaleColor(r) : setStrokingRgbColor(r, g, b);
 }
 
 function circleSegments(node: CircleNode): PathSegment[] {
@@ -77,14 +91,14 @@ const JOINS = { miter: LineJoinStyle.Miter, round: LineJoinStyle.Round, bevel: L
 function paintOps(ctx: PageContext, strokeSpec: Stroke | undefined, fillSpec: Fill | undefined): PDFOperator[] {
   const ops: PDFOperator[] = [];
   if (fillSpec) {
-    ops.push(setFillingRgbColor(...rgb01(fillSpec.colour)));
+    ops.push(fillColour(fillSpec.colour));
     if (fillSpec.opacity !== undefined && fillSpec.opacity < 1) {
       const state = ctx.page.doc.context.obj({ Type: 'ExtGState', ca: fillSpec.opacity });
       ops.push(setGraphicsState(ctx.page.node.newExtGState('GS', state)));
     }
   }
   if (strokeSpec) {
-    ops.push(setStrokingRgbColor(...rgb01(strokeSpec.colour)), setLineWidth(pt(strokeSpec.widthMm)));
+    ops.push(strokeColour(strokeSpec.colour), setLineWidth(pt(strokeSpec.widthMm)));
     ops.push(setDashPattern((strokeSpec.dashMm ?? []).map(pt), 0));
     ops.push(setLineCap(CAPS[strokeSpec.cap ?? 'butt']), setLineJoin(JOINS[strokeSpec.join ?? 'miter']));
     ops.push(PDFOperator.of(PDFOperatorNames.SetLineMiterLimit, [PDFNumber.of(MITER_LIMIT)]));
@@ -108,7 +122,7 @@ function textOps(ctx: PageContext, node: TextNode): PDFOperator[] {
   const fontKey = ctx.page.node.newFontDictionary(font.name, font.ref);
   return [
     pushGraphicsState(),
-    setFillingRgbColor(...rgb01(node.colour)),
+    fillColour(node.colour),
     beginText(),
     setFontAndSize(fontKey, node.sizePt),
     rotateAndSkewTextDegreesAndTranslate(node.rotateDeg ?? 0, 0, 0, xPt, yPt),
@@ -138,15 +152,21 @@ function nodeOps(ctx: PageContext, node: SceneNode): PDFOperator[] {
   }
 }
 
-/** Sets the page boxes for the scene and writes its content stream. */
+/**
+ * Sets the page boxes for the scene (TrimBox and BleedBox on every page: the trim is the media without
+ * bleed) and writes its content stream, all of it one marked-content sequence (tag /Figure, MCID 0) for
+ * the page's structure element.
+ */
 export function drawScene(args: { page: PDFPage; scene: Scene; fonts: PageContext['fonts'] }): void {
   const { page, scene } = args;
   const ctx: PageContext = { page, heightMm: scene.heightMm, fonts: args.fonts };
-  if (scene.bleedMm > 0) {
-    const { x, y, width, height } = scene.trimBox;
-    const [left, bottom] = toPt(ctx, x, y + height);
-    page.setTrimBox(left, bottom, pt(width), pt(height));
-    page.setBleedBox(0, 0, pt(scene.widthMm), pt(scene.heightMm));
-  }
-  page.pushOperators(...nodeOps(ctx, scene.root));
+  const { x, y, width, height } = scene.trimBox;
+  const [left, bottom] = toPt(ctx, x, y + height);
+  page.setTrimBox(left, bottom, pt(width), pt(height));
+  page.setBleedBox(0, 0, pt(scene.widthMm), pt(scene.heightMm));
+  page.pushOperators(
+    PDFOperator.of(PDFOperatorNames.BeginMarkedContentSequence, [PDFName.of('Figure'), '<</MCID 0>>']),
+    ...nodeOps(ctx, scene.root),
+    PDFOperator.of(PDFOperatorNames.EndMarkedContent),
+  );
 }

@@ -132,6 +132,8 @@ export interface Scene {
   readonly description: string;
   readonly subject: string;
   readonly keywords: readonly string[];
+  /** Who issues the sheet (the shop's name), for the PDF's Author. */
+  readonly author?: string;
   /** ISO date (YYYY-MM-DD) printed on the sheet and in PDF metadata. */
   readonly dateIso: string;
   readonly root: GroupNode;

@@ -13,6 +13,7 @@ export async function renderSheetNow(scene: Scene): Promise<RenderedSheet> {
     title: scene.title,
     subject: scene.subject,
     keywords: scene.keywords,
+    ...(scene.author !== undefined ? { author: scene.author } : {}),
     dateIso: scene.dateIso,
   });
   // The PNG is drawn from glyph outlines (no text for resvg to lay out): about twice as fast as the text SVG.

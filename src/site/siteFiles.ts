@@ -68,6 +68,7 @@ async function bookPdf(args: {
     title: book.title,
     subject: `Impeller matching chart book for the ${book.audience}`,
     keywords: ['waterjet', 'impeller', 'matching', book.audience],
+    ...(scenes[0]?.author !== undefined ? { author: scenes[0].author } : {}),
     dateIso: args.dateIso,
     outline: scenes.map((s) => s.title),
   };

@@ -19,7 +19,7 @@ describe('one paper per book', () => {
     if (r.ok) return;
     const line = withStrayA6.split('\n').findIndex((l) => l.includes('paper: { size: A6')) + 1;
     expect(r.errors.map((e) => e.message)).toEqual([
-      `${CARDS}:${line}:12 sheets[2].paper must match the book's paper (4x6 landscape with 3 mm bleed); a book prints on one paper size, found A6 landscape — remove this paper: line, move the sheet to a book of its own, or add mixed_paper: true to the book`,
+      `${CARDS}:${line}:12 sheets[2].paper must match the book's paper (4x6 landscape with 3 mm bleed); a book prints on one paper size, found A6 landscape with 3 mm bleed — remove this paper: line, move the sheet to a book of its own, or add mixed_paper: true to the book`,
     ]);
   });
 
@@ -28,7 +28,15 @@ describe('one paper per book', () => {
     expect(r.ok).toBe(true);
     if (!r.ok) return;
     const book = r.project.books.find((b) => b.id === 'owner-console-cards')!;
-    expect(book.sheets.map((s) => `${s.paper.size} ${s.paper.orientation} ${s.paper.bleedMm}`)).toEqual(['Card4x6 landscape 3', 'Card4x6 landscape 3', 'A6 landscape 0']);
+    // The sheet's own paper says no bleed_mm, so it keeps the book's 3 mm.
+    expect(book.sheets.map((s) => `${s.paper.size} ${s.paper.orientation} ${s.paper.bleedMm}`)).toEqual(['Card4x6 landscape 3', 'Card4x6 landscape 3', 'A6 landscape 3']);
+  });
+
+  it("gives a sheet the bleed it states, else the book's", () => {
+    const noBleed = withStrayA6.replace('paper: { size: A6, orientation: landscape }', 'paper: { size: A6, orientation: landscape, bleed_mm: 0 }').replace('sheets:\n', 'mixed_paper: true\nsheets:\n');
+    const r = loadProjectFromFiles(demoWith(CARDS, noBleed));
+    if (!r.ok) throw new Error(r.errors.map((e) => e.message).join('\n'));
+    expect(r.project.books.find((b) => b.id === 'owner-console-cards')!.sheets[2].paper).toEqual({ size: 'A6', orientation: 'landscape', bleedMm: 0 });
   });
 
   it('accepts a sheet that repeats the book paper', () => {

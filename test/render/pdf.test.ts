@@ -49,7 +49,55 @@ describe('renderPdf()', () => {
     expect(trim.y).toBeCloseTo((3 / 25.4) * 72, 2);
     expect(trim.width).toBeCloseTo(A4_PT[0], 2);
     expect(bled.getBleedBox().width).toBeCloseTo((216 / 25.4) * 72, 2);
-    expect(doc.getPage(0).node.get(PDFName.of('TrimBox'))).toBeUndefined();
+    // A page without bleed still states its trim (= media) and bleed box, as print-shop preflight expects
+    // (PDF/X asks for TrimBox on every page; ISO 15930-1, from memory).
+    const plain = doc.getPage(0);
+    for (const box of [plain.getTrimBox(), plain.getBleedBox()]) {
+      expect(box.x).toBe(0);
+      expect(box.y).toBe(0);
+      expect(box.width).toBeCloseTo(A4_PT[0], 2);
+      expect(box.height).toBeCloseTo(A4_PT[1], 2);
+    }
+  });
+
+  it('names each font subset by the characters it holds: another text, another tag; the same text, the same tag', async () => {
+    // ISO 32000-1 §9.6.4: a subset font's name is six capital letters, '+', the font name.
+    const tags = (text: string) => [...text.matchAll(/\b([A-Z]{6})\+SourceSans3-(Regular|Bold)/g)].map((m) => `${m[1]}+${m[2]}`).sort();
+    const a = tags(poppler('pdffonts', await renderPdf([TEXT_SCENE], OPTIONS), []));
+    const b = tags(poppler('pdffonts', await renderPdf([everyNodeKindScene()], OPTIONS), []));
+    const again = tags(poppler('pdffonts', await renderPdf([TEXT_SCENE], { ...OPTIONS, title: 'Another title' }), []));
+    expect(a.length).toBeGreaterThan(0);
+    expect(again).toEqual(a);
+    const regular = (t: string[]) => t.find((x) => x.endsWith('Regular'));
+    expect(regular(b)).toBeDefined();
+    expect(regular(b)).not.toBe(regular(a));
+  });
+
+  it('is a tagged PDF: a Document element with one Figure per page in page order, its alternative text the sheet title and description', () => {
+    // ISO 32000-1 §14.7 and §14.8; poppler's pdfinfo reads the structure tree back.
+    expect(poppler('pdfinfo', book, [])).toMatch(/Tagged:\s+yes/);
+    expect(poppler('pdfinfo', book, ['-struct'])).toBe('Document\n  Figure\n  Figure\n  Figure\n');
+    const root = doc.catalog.lookup(PDFName.of('StructTreeRoot'), PDFDict);
+    const document = root.lookup(PDFName.of('K'), PDFDict);
+    const figures = document.lookup(PDFName.of('K'), PDFArray);
+    expect(figures.size()).toBe(3);
+    for (let i = 0; i < 3; i++) {
+      const figure = figures.lookup(i, PDFDict);
+      expect(figure.get(PDFName.of('Pg'))).toBe(doc.getPage(i).ref);
+      expect(figure.lookup(PDFName.of('Alt'))?.toString()).toContain([TEXT_SCENE, everyNodeKindScene(), TEXT_SCENE][i].title.slice(0, 10));
+    }
+    expect(doc.catalog.lookup(PDFName.of('Lang'))?.toString()).toBe('(en-GB)');
+  });
+
+  it('writes black and greys in DeviceGray, so black text prints in the black ink alone', async () => {
+    const one = await PDFDocument.load(await renderPdf([TEXT_SCENE], OPTIONS), { updateMetadata: false });
+    const contents = one.getPage(0).node.Contents();
+    const stream = contents instanceof PDFArray ? contents.lookup(0) : contents;
+    const { decodePDFRawStream } = await import('pdf-lib');
+    const ops = Buffer.from(decodePDFRawStream(stream as never).decode()).toString('latin1');
+    // Text in INK (#000000): "0 g" before its BT, and no "0 0 0 rg" anywhere.
+    expect(ops).toMatch(/\b0 g\s+BT/);
+    expect(ops).not.toMatch(/\b0 0 0 rg\b/);
   });
 
   it('records title, subject, keywords, author, creator and both dates from the options', () => {
@@ -64,8 +112,8 @@ describe('renderPdf()', () => {
 
   it('embeds both weights as subset TrueType fonts', () => {
     const fonts = poppler('pdffonts', book, []);
-    expect(fonts).toMatch(/MBKREG\+SourceSans3-Regular\s+CID TrueType\s+Identity-H\s+yes yes yes/);
-    expect(fonts).toMatch(/MBKBLD\+SourceSans3-Bold\s+CID TrueType\s+Identity-H\s+yes yes yes/);
+    expect(fonts).toMatch(/[A-Z]{6}\+SourceSans3-Regular\s+CID TrueType\s+Identity-H\s+yes yes yes/);
+    expect(fonts).toMatch(/[A-Z]{6}\+SourceSans3-Bold\s+CID TrueType\s+Identity-H\s+yes yes yes/);
   });
 
   it('holds real text that pdftotext extracts, ligatures and Greek included', () => {

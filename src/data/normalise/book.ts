@@ -33,15 +33,17 @@ export function normaliseBook(source: YamlSource, raw: RawBookFile, reg: BookReg
       check({ path: ['sheets', i, 'boat'], id: s.boat, registry: reg.boats, what: 'boats', dir: 'boats' });
     }
   });
+  // A sheet's own paper keeps the book's bleed unless it says otherwise.
+  const paperOf = (s: RawSheet): RawPaper => (s.paper ? { ...s.paper, bleed_mm: s.paper.bleed_mm ?? raw.paper.bleed_mm } : raw.paper);
   // One paper per book, unless the book asks for a mix: a stray paper: line is usually a leftover.
   if (!raw.mixed_paper) {
     const book = paperWords(raw.paper);
     raw.sheets.forEach((s, i) => {
-      if (s.paper && paperWords(s.paper) !== book) {
+      if (s.paper && paperWords(paperOf(s)) !== book) {
         errors.push(
           at(source, ['sheets', i, 'paper'], {
             expected: `must match the book's paper (${book}); a book prints on one paper size`,
-            found: paperWords(s.paper),
+            found: paperWords(paperOf(s)),
             fix: 'remove this paper: line, move the sheet to a book of its own, or add mixed_paper: true to the book',
           }),
         );
@@ -67,7 +69,7 @@ export function normaliseBook(source: YamlSource, raw: RawBookFile, reg: BookReg
     id: raw.id,
     title: raw.title,
     audience: raw.audience,
-    sheets: raw.sheets.map((s) => ({ ...toSheet(s, toPaper(s.paper ?? raw.paper)), ...(bookCautions ? { bookCautions } : {}) })),
+    sheets: raw.sheets.map((s) => ({ ...toSheet(s, toPaper(paperOf(s))), ...(bookCautions ? { bookCautions } : {}) })),
     ...(raw.cautions ? { extraCautions: raw.cautions } : {}),
     source: { file: source.file },
   };

@@ -5,12 +5,16 @@ import { cautionList } from './site.ts';
 
 export const PAPER_SIZES = ['A3', 'A4', 'A5', 'A6', 'Letter', 'Legal', 'Tabloid', '4x6'] as const;
 
-export const paper = () =>
-  z.strictObject({
-    size: z.enum(PAPER_SIZES, { error: `must be one of ${PAPER_SIZES.join(', ')}` }),
-    orientation: z.enum(['portrait', 'landscape'], { error: 'must be portrait or landscape' }).default('portrait'),
-    bleed_mm: z.union([z.literal(0), z.literal(3)], { error: 'must be 0 or 3 (mm)' }).default(0),
-  });
+const paperFields = {
+  size: z.enum(PAPER_SIZES, { error: `must be one of ${PAPER_SIZES.join(', ')}` }),
+  orientation: z.enum(['portrait', 'landscape'], { error: 'must be portrait or landscape' }).default('portrait'),
+};
+const bleed = () => z.union([z.literal(0), z.literal(3)], { error: 'must be 0 or 3 (mm)' });
+
+export const paper = () => z.strictObject({ ...paperFields, bleed_mm: bleed().default(0) });
+
+/** A sheet's own paper: without bleed_mm it keeps the book's bleed (a print shop trims the whole book alike). */
+const sheetPaper = () => z.strictObject({ ...paperFields, bleed_mm: bleed().optional() });
 
 const chartConditions = () =>
   unitChoices(
@@ -24,7 +28,7 @@ const chartConditions = () =>
     [{ keys: ['cruise_powers_kw', 'cruise_powers_hp'], required: false }],
   );
 
-const boatSheet = <K extends string>(kind: K) => z.strictObject({ kind: z.literal(kind), boat: slug(), paper: paper().optional() });
+const boatSheet = <K extends string>(kind: K) => z.strictObject({ kind: z.literal(kind), boat: slug(), paper: sheetPaper().optional() });
 
 export const SHEET_KINDS = ['wallChart', 'specSheet', 'consoleCard', 'upgradeSheet'] as const;
 
@@ -32,7 +36,7 @@ const sheet = () =>
   z.discriminatedUnion(
     'kind',
     [
-      z.strictObject({ kind: z.literal('wallChart'), engine: slug(), jet: slug(), conditions: chartConditions().optional(), paper: paper().optional() }),
+      z.strictObject({ kind: z.literal('wallChart'), engine: slug(), jet: slug(), conditions: chartConditions().optional(), paper: sheetPaper().optional() }),
       boatSheet('specSheet'),
       boatSheet('consoleCard'),
       boatSheet('upgradeSheet'),

@@ -28,6 +28,7 @@ export function assembleScene(args: {
     description: `Page ${n} of ${total}: ${args.description}`,
     subject: args.subject,
     keywords: args.keywords,
+    author: frame.author,
     dateIso: args.dateIso,
     root: { type: 'group', role: args.role, children: [...frame.nodes, ...content] },
   });
@@ -42,6 +43,7 @@ export function assembleScene(args: {
     description: args.description,
     subject: args.subject,
     keywords: args.keywords,
+    author: args.frame.author,
     dateIso: args.dateIso,
     root: { type: 'group', role: args.role, children: [...args.frame.nodes, ...args.content] },
   };

@@ -17,6 +17,8 @@ export interface SheetFrame {
   readonly nodes: readonly SceneNode[];
   /** Where the sheet's own content goes (mm). */
   readonly contentBox: Box;
+  /** The shop's name: the sheet's author. */
+  readonly author: string;
 }
 
 /** Width (mm) reserved at the footer's right for "Page 12 of 40"-style numbering. */
@@ -118,7 +120,7 @@ export function sheetFrame(args: {
 
   const contentTop = headerBottom + 4;
   const contentBox = { x: safe.x, y: contentTop, width: safe.width, height: contentBottom - contentTop };
-  return { page, nodes, contentBox };
+  return { page, nodes, contentBox, author: args.site.shopName };
 }
 
 /**
