@@ -3,7 +3,7 @@
  * cruise rpm for the usual settings, what to check when WOT rpm is outside the range, and the cautions.
  */
 import type { SheetRequest } from '../data/types.ts';
-import type { Scene } from '../scene/types.ts';
+import type { Scene, SceneNode } from '../scene/types.ts';
 import { analyseBoat, type BandResult, type LimitsResult } from '../analysis/index.ts';
 import type { MatchStatus } from '../analysis/index.ts';
 import { assembleScene } from './kit/assemble.ts';
@@ -27,13 +27,21 @@ const CARD_MARGIN_MM = 5;
 
 const CRUISE_COLUMNS: readonly Column[] = [{ header: 'Cruise', align: 'left', shorten: true, wrap: true }, { header: 'Engine', align: 'right' }, { header: 'Speed (est.)', align: 'right' }];
 
-/** What to look at, in order of how often it is the cause (common practice, no source). */
-export const OFF_RANGE_CHECKS: readonly string[] = [
-  'Intake grate fouled or blocked.',
-  'More load aboard than usual.',
-  'Impeller damaged or worn.',
-  'Engine fault: have it checked.',
-];
+/**
+ * What to look at when WOT rpm is off the card's range, split by direction, each in order of how often
+ * it is the cause (common practice, no source). Higher rpm at full throttle: the impeller absorbs less
+ * (worn or damaged, air drawn in). Lower rpm: the engine delivers less, or the impeller or boat asks more.
+ */
+export const OFF_RANGE_CHECKS: Readonly<Record<'higher' | 'lower', { readonly heading: string; readonly items: readonly string[] }>> = {
+  higher: {
+    heading: 'Higher rpm? Check:',
+    items: ['Intake grate: weed or a bag.', 'Impeller or wear ring worn.', 'Lighter impeller than listed.'],
+  },
+  lower: {
+    heading: 'Lower rpm? Check:',
+    items: ['Weed wound on the impeller.', 'More load, or a fouled hull.', 'Engine short of power.'],
+  },
+};
 
 /** What the owner must know when the fit harms the engine: the most likely status first, else what the band's ends may do; '' for a good fit. */
 export function cardWarning(band: BandResult, limits: LimitsResult): string {
@@ -47,6 +55,9 @@ export function cardWarning(band: BandResult, limits: LimitsResult): string {
   const ends = [band.low.status, band.high.status];
   if (ends.includes('revLimited')) return `Caution: may over-rev at the top of the range (limiter ${rpmText(limits.maxRpm)} rpm).`;
   if (ends.includes('belowWindow')) return `Caution: may lug at the low end (window ${window}).`;
+  // Above the window but short of the limiter: usable, yet not what the engine maker recommends.
+  if (band.nominal.status === 'aboveWindow') return `Caution: runs above the WOT window (${window}). A heavier impeller suits the engine better.`;
+  if (ends.includes('aboveWindow')) return `Caution: may run above the WOT window (${window}) at the top of the range.`;
   return '';
 }
 
@@ -73,7 +84,7 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
   // A card first tries its full layout (level 0); a full card then closes its gaps and leaves out the line
   // naming the trials when it shows the measured rpm (1); then it sets the big range a tenth smaller and the
   // cruise table at body size, and runs the checks on as one paragraph (2); then it continues on the back.
-  const parts = (level: 0 | 1 | 2, cautionPt: number = type.small): { figures: Flowable[]; advice: Flowable[] } => {
+  const parts = (level: 0 | 1 | 2, cautionPt: number = type.small, adviceOwnColumn = true): { figures: Flowable[]; advice: Flowable[] } => {
     const figures: Flowable[] = [
       whole(({ x, y, widthMm }): Block => {
         const head = label({ x, y: y + ascentMm(type.heading, 'bold'), text: 'Expected WOT rpm', sizePt: type.heading, weight: 'bold', role: 'heading', where });
@@ -115,21 +126,33 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
     ];
     const advice: Flowable[] = [
       whole(({ x, y, widthMm }): Block => {
-        const head = paragraph({ x, y, widthMm, text: 'WOT rpm outside the range? Check:', sizePt: type.body, weight: 'bold', role: 'heading', where });
-        let cursor = y + head.heightMm;
-        const nodes = [...head.nodes];
+        // WOT rpm above the range and below it have different causes: two short lists, each under its own heading.
+        let cursor = y;
+        const nodes: SceneNode[] = [];
         if (level === 2) {
-          // A full card runs the checks on as one paragraph.
-          const p = paragraph({ x, y: cursor, widthMm, text: OFF_RANGE_CHECKS.join(' · '), sizePt: type.small, role: 'check-item', where });
-          return { nodes: [...nodes, ...p.nodes], heightMm: cursor + p.heightMm - y };
+          // A full card: one heading, and each list run on as one paragraph led by its direction.
+          const head = paragraph({ x, y: cursor, widthMm, text: 'WOT rpm off the range? Check:', sizePt: type.body, weight: 'bold', role: 'heading', where });
+          nodes.push(...head.nodes);
+          cursor += head.heightMm;
+          for (const { heading, items } of [OFF_RANGE_CHECKS.higher, OFF_RANGE_CHECKS.lower]) {
+            const p = paragraph({ x, y: cursor, widthMm, text: `${heading.replace(/ Check:$/, '')} ${items.join(' · ')}`, sizePt: type.small, role: 'check-item', where });
+            nodes.push(...p.nodes);
+            cursor += p.heightMm;
+          }
+          return { nodes, heightMm: cursor - y };
         }
-        for (const item of OFF_RANGE_CHECKS) {
-          const p = paragraph({ x: x + 3, y: cursor, widthMm: widthMm - 3, text: item, sizePt: type.small, role: 'check-item', where });
-          nodes.push(label({ x, y: cursor + ascentMm(type.small), text: '•', sizePt: type.small, role: 'bullet', where }), ...p.nodes);
-          cursor += p.heightMm;
+        for (const { heading, items } of [OFF_RANGE_CHECKS.higher, OFF_RANGE_CHECKS.lower]) {
+          const head = paragraph({ x, y: cursor, widthMm, text: heading, sizePt: type.body, weight: 'bold', role: 'heading', where });
+          nodes.push(...head.nodes);
+          cursor += head.heightMm;
+          for (const item of items) {
+            const p = paragraph({ x: x + 3, y: cursor, widthMm: widthMm - 3, text: item, sizePt: type.small, role: 'check-item', where });
+            nodes.push(label({ x, y: cursor + ascentMm(type.small), text: '•', sizePt: type.small, role: 'bullet', where }), ...p.nodes);
+            cursor += p.heightMm;
+          }
         }
         return { nodes, heightMm: cursor - y };
-      }, true),
+      }, adviceOwnColumn),
       cautionsFlow({ site, sizePt: cautionPt, headingPt: type.body, where }),
     ];
     return { figures, advice };
@@ -155,10 +178,21 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
     if (fits(laid)) break;
     laid = build(level);
   }
+  // Still too full for a landscape card: the checks and cautions may start under the figures where the
+  // left column has room, flowing on into the right column, as long as the whole card stays on its front.
+  const frontOnly = (): SceneNode[] | undefined => {
+    if (fits(laid) || columns !== 2) return undefined;
+    const { figures, advice } = parts(2, type.small, false);
+    const flowed = flowPages({ frame: (n) => (n === 0 ? frame : backFrame(n)), columns, columnGapMm: 5, gapMm: 1, parts: [...figures, ...advice], where });
+    return flowed.length === 1 ? flowed[0].nodes : undefined;
+  };
+  const flowedFront = frontOnly();
   // On the back the cautions are fine print (7 pt on A6 and 4 × 6 in); the front says where they are.
   const pages = fits(laid)
     ? [{ frame, nodes: laid.flatMap((c) => c.nodes) }]
-    : (() => {
+    : flowedFront
+      ? [{ frame, nodes: flowedFront }]
+      : (() => {
         const { figures, advice } = parts(1, type.fine);
         const flowed = flowPages({ frame: (n) => (n === 0 ? frame : backFrame(n)), columns, columnGapMm: 5, gapMm: 1.5, parts: [...figures, ...advice], where });
         const front = flowed[0];

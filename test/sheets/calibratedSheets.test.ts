@@ -145,10 +145,15 @@ describe('cardWarning()', () => {
     expect(cardWarning(band('belowWindow', 'belowWindow', 'matched'), limits)).toBe('Warning: lugs below the WOT window (4800–5200 rpm). Have a lighter impeller fitted.');
   });
 
-  it('cautions when only an end of the range may, and stays silent for a good fit', () => {
+  it('cautions when only an end of the range may, and stays silent for a fit inside the window', () => {
     expect(cardWarning(band('matched', 'matched', 'revLimited'), limits)).toMatch(/^Caution: may over-rev/);
     expect(cardWarning(band('belowWindow', 'matched', 'aboveWindow'), limits)).toBe('Caution: may lug at the low end (window 4800–5200 rpm).');
-    expect(cardWarning(band('matched', 'matched', 'aboveWindow'), limits)).toBe('');
+    expect(cardWarning(band('matched', 'matched', 'aboveWindow'), limits)).toBe('Caution: may run above the WOT window (4800–5200 rpm) at the top of the range.');
+    expect(cardWarning(band('matched', 'matched', 'matched'), limits)).toBe('');
+  });
+
+  it('cautions when the most likely WOT runs above the window short of the limiter: usable, a heavier impeller suits better', () => {
+    expect(cardWarning(band('aboveWindow', 'aboveWindow', 'aboveWindow'), limits)).toBe('Caution: runs above the WOT window (4800–5200 rpm). A heavier impeller suits the engine better.');
   });
 });
 

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Paper, SheetRequest } from '../../src/data/types.ts';
+import { scenePages } from '../../src/scene/types.ts';
 import { BUILT_IN_CAUTIONS, cautionsFor, sheetScene } from '../../src/sheets/index.ts';
 import { boat, project, site } from './fixtures/demoProject.ts';
 import { texts } from './sceneWalk.ts';
@@ -37,7 +38,8 @@ describe.each<SheetRequest>([
 ])('a $kind for a shop with its own cautions', (request) => {
   it('prints the built-in cautions first, then the shop\'s', () => {
     const scene = sheetScene(request, { project: { ...project, site: shop }, dateIso: '2026-11-02' });
-    const printed = texts(scene).filter((t) => t.role === 'caution').map((t) => t.text).join(' ');
+    // Over every page: a full card continues its cautions on the back.
+    const printed = scenePages(scene).flatMap((page) => texts(page).filter((t) => t.role === 'caution').map((t) => t.text)).join(' ');
     const at = [...BUILT_IN_CAUTIONS, ...extra].map((c) => printed.indexOf(c.split(' ').slice(0, 4).join(' ')));
     expect(at.every((i) => i >= 0), printed).toBe(true);
     expect([...at].sort((a, b) => a - b)).toEqual(at);
