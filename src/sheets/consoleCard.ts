@@ -193,7 +193,8 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
     : flowedFront
       ? [{ frame, nodes: flowedFront }]
       : (() => {
-        const { figures, advice } = parts(1, type.fine);
+        // The compact checks (level 2) leave the front the most room for the cautions.
+        const { figures, advice } = parts(2, type.fine);
         const flowed = flowPages({ frame: (n) => (n === 0 ? frame : backFrame(n)), columns, columnGapMm: 5, gapMm: 1.5, parts: [...figures, ...advice], where });
         const front = flowed[0];
         const hasCautions = front.nodes.some(function has(n): boolean {

@@ -11,7 +11,7 @@ import { describe, expect, it } from 'vitest';
 import type { Paper, Project, SheetRequest } from '../../src/data/types.ts';
 import { scenePages, type Scene } from '../../src/scene/types.ts';
 import { defaultWallCharts } from '../../src/analysis/index.ts';
-import { BOAT_SHEET_PAPERS, cautionsFor, sheetScene, WALL_CHART_PAPERS } from '../../src/sheets/index.ts';
+import { BOAT_SHEET_PAPERS, BUILT_IN_CAUTIONS, cautionsFor, sheetScene, WALL_CHART_PAPERS } from '../../src/sheets/index.ts';
 import { CONTINUING_CAUTION } from '../../src/sheets/kit/cautions.ts';
 import { demoProject } from './fixtures/boatVariation.ts';
 import { catalogueProject, LIMITS, stressProject, type Catalogue, type StressCase } from './fixtures/stressProjects.ts';
@@ -54,8 +54,19 @@ function problemsOf(kind: Kind, project: Project, paper: Paper): string[] {
   const problems = scenePages(scene).flatMap((page, i) => sceneProblems(page, paper).map((p) => `page ${i + 1}: ${p}`));
   const words = sheetWords(scene);
   for (const text of mustPrint(kind, project)) if (!words.includes(text)) problems.push(`not printed in full: "${text}"`);
+  // Each piece of a cautions block that continues starts with the built-in ones again: the shop's are
+  // read with those repeats taken out, so one split over a page break reads whole.
   const cautionWords = sheetWords(scene, 'caution');
-  for (const text of cautionsFor(project.site)) if (!cautionWords.includes(text.replace(/\s+/g, ' '))) problems.push(`caution not printed in full: "${text}"`);
+  const shopWords = BUILT_IN_CAUTIONS.reduce((words, c) => words.split(c).join(' '), cautionWords).replace(/\s+/g, ' ');
+  for (const text of cautionsFor(project.site)) {
+    const whole = text.replace(/\s+/g, ' ');
+    if (!(BUILT_IN_CAUTIONS.includes(text) ? cautionWords : shopWords).includes(whole)) problems.push(`caution not printed in full: "${text}"`);
+  }
+  // Every page that shows cautions shows the built-in ones whole.
+  for (const [i, page] of scenePages(scene).entries()) {
+    const here = texts(page).filter((t) => t.role === 'caution').map((t) => t.text).join(' ').replace(/\s+/g, ' ');
+    if (here !== '' && !BUILT_IN_CAUTIONS.every((c) => here.includes(c))) problems.push(`page ${i + 1}: cautions without every built-in one`);
+  }
   // Every page is the same paper.
   for (const page of scenePages(scene)) if (page.widthMm !== scene.widthMm || page.heightMm !== scene.heightMm) problems.push('a page of another size');
   // A spec or upgrade sheet that continues carries the built-in cautions at the foot of every page.

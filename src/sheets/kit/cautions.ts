@@ -102,27 +102,29 @@ export function cautionsBlock(args: {
 }
 
 /**
- * The cautions block as a part that splits between lines (over a column or page break): the lines that
- * fit stay, the rest of that caution and the ones after it go on under "Cautions (continued)". A caution
- * splits inside only where two lines at least stay and two go on.
+ * The cautions block as a part that splits over a column or page break. The built-in cautions never
+ * split: every piece of the block starts with all of them ("Cautions (continued)" repeats them), so each
+ * page that shows the block shows them whole; what continues is the shop's and the book's cautions,
+ * split between paragraphs or inside one where two lines at least stay and two go on.
  */
 export function cautionsFlow(args: { site: SiteConfig; sizePt: number; headingPt: number; where: string }, rest?: readonly string[]): Flowable {
   const continued = rest !== undefined;
-  const all = rest ?? cautionsFor(args.site);
+  const all = rest !== undefined ? [...BUILT_IN_CAUTIONS, ...rest] : cautionsFor(args.site);
+  const fixed = BUILT_IN_CAUTIONS.length;
   const block = (at: { x: number; y: number; widthMm: number }, list: readonly string[]) => cautionsBlock({ ...args, ...at, list, continued });
   return {
     layout: (at) => block(at, all),
     split: (at, maxHeightMm) => {
-      // Lines as the block sets them (same width and size); keep the most that fit, at least one.
+      // Lines as the block sets them (same width and size); keep the most that fit.
       const lines = all.map((text) => wrapLines({ text, sizePt: args.sizePt, weight: 'regular', widthMm: at.widthMm - INDENT_MM, where: args.where }));
       let best: { head: string[]; tail: string[] } | undefined;
-      search: for (let c = 0; c < lines.length; c++) {
-        for (let l = 1; l <= lines[c].length; l++) {
+      search: for (let c = fixed; c < lines.length; c++) {
+        // l lines of caution c stay; l = 0 only right after the built-in ones (else it repeats the split after c − 1).
+        for (let l = c === fixed ? 0 : 1; l <= lines[c].length; l++) {
           if (c === lines.length - 1 && l === lines[c].length) break search;
-          // No lone line of a caution on either side of the break (widows and orphans): a caution splits
-          // inside only with at least two lines before and two after, else it moves on whole.
-          if (l < lines[c].length && (l < 2 || lines[c].length - l < 2)) continue;
-          const head = [...all.slice(0, c), lines[c].slice(0, l).join(' ')];
+          // No lone line of a caution on either side of the break (widows and orphans).
+          if (l > 0 && l < lines[c].length && (l < 2 || lines[c].length - l < 2)) continue;
+          const head = [...all.slice(0, c), ...(l > 0 ? [lines[c].slice(0, l).join(' ')] : [])];
           if (block(at, head).heightMm > maxHeightMm + 1e-6) break search;
           best = { head, tail: [...(l < lines[c].length ? [lines[c].slice(l).join(' ')] : []), ...all.slice(c + 1)] };
         }
