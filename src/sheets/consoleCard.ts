@@ -32,12 +32,14 @@ const CRUISE_COLUMNS: readonly Column[] = [{ header: 'Cruise', align: 'left', sh
  * it is the cause (common practice, no source). Higher rpm at full throttle: the impeller absorbs less
  * (worn or damaged, air drawn in). Lower rpm: the engine delivers less, or the impeller or boat asks more.
  */
-export const OFF_RANGE_CHECKS: Readonly<Record<'higher' | 'lower', { readonly heading: string; readonly items: readonly string[] }>> = {
+export const OFF_RANGE_CHECKS: Readonly<Record<'higher' | 'lower', { readonly lead: string; readonly heading: string; readonly items: readonly string[] }>> = {
   higher: {
+    lead: 'Higher rpm?',
     heading: 'Higher rpm? Check:',
     items: ['Intake grate: weed or a bag.', 'Impeller or wear ring worn.', 'Lighter impeller than listed.'],
   },
   lower: {
+    lead: 'Lower rpm?',
     heading: 'Lower rpm? Check:',
     items: ['Weed wound on the impeller.', 'More load, or a fouled hull.', 'Engine short of power.'],
   },
@@ -134,8 +136,8 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
           const head = paragraph({ x, y: cursor, widthMm, text: 'WOT rpm off the range? Check:', sizePt: type.body, weight: 'bold', role: 'heading', where });
           nodes.push(...head.nodes);
           cursor += head.heightMm;
-          for (const { heading, items } of [OFF_RANGE_CHECKS.higher, OFF_RANGE_CHECKS.lower]) {
-            const p = paragraph({ x, y: cursor, widthMm, text: `${heading.replace(/ Check:$/, '')} ${items.join(' · ')}`, sizePt: type.small, role: 'check-item', where });
+          for (const { lead, items } of [OFF_RANGE_CHECKS.higher, OFF_RANGE_CHECKS.lower]) {
+            const p = paragraph({ x, y: cursor, widthMm, text: `${lead} ${items.join(' · ')}`, sizePt: type.small, role: 'check-item', where });
             nodes.push(...p.nodes);
             cursor += p.heightMm;
           }

@@ -6,19 +6,19 @@ import type { SheetContext } from './context.ts';
 import { specSheetScene } from './specSheet.ts';
 import { upgradeSheetScene } from './upgradeSheet.ts';
 import { wallChartScene } from './wallChart.ts';
+import { withExtraCautions } from './kit/cautions.ts';
 
 export { sheetSlug } from './slug.ts';
 export { LayoutError } from './kit/errors.ts';
 export { BOAT_SHEET_PAPERS, WALL_CHART_PAPERS } from './papers.ts';
-export { BUILT_IN_CAUTIONS, cautionsFor } from './kit/cautions.ts';
+export { BUILT_IN_CAUTIONS, cautionsFor, withExtraCautions } from './kit/cautions.ts';
 export type { SheetContext } from './context.ts';
 
 /** The scene (mm) of one requested sheet; dates come from ctx.dateIso. Throws LayoutError when it cannot be laid out. */
 export function sheetScene(request: SheetRequest, given: SheetContext): Scene {
   // A book's own cautions print after the built-in ones and the site's, on every sheet of the book.
   const book = request.bookCautions;
-  const site = given.project.site;
-  const ctx: SheetContext = book ? { ...given, project: { ...given.project, site: { ...site, extraCautions: [...(site.extraCautions ?? []), ...book.texts] } } } : given;
+  const ctx: SheetContext = book ? { ...given, project: { ...given.project, site: withExtraCautions(given.project.site, book.texts) } } : given;
   switch (request.kind) {
     case 'wallChart':
       return wallChartScene(request, ctx);

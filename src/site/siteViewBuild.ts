@@ -2,7 +2,7 @@
 import { isWarning, type BandResult, type BoatResult, type WallChartResult } from '../analysis/index.ts';
 import type { Boat, EngineFamily, JetUnit, PowerUnit, Project, SpeedUnit } from '../data/types.ts';
 import { speedText } from '../sheets/boatTables.ts';
-import { cautionsFor } from '../sheets/kit/cautions.ts';
+import { cautionsFor, withExtraCautions } from '../sheets/kit/cautions.ts';
 import { powerText, rpmBandText, rpmWithUnit } from '../sheets/kit/format.ts';
 import { boatTables, calibratedSuffix } from './boatTables.ts';
 import { ratingCell } from './cells.ts';
@@ -159,7 +159,7 @@ export function siteView(args: SiteViewArgs): SiteView {
       href: `books/${book.id}/index.html`,
       pdfHref: `books/${book.id}.pdf`,
       sheets: pick(args.sheets, args.plan.byBook.get(book.id)),
-      cautions: cautionsFor({ ...project.site, extraCautions: [...(project.site.extraCautions ?? []), ...(book.extraCautions ?? [])] }),
+      cautions: cautionsFor(withExtraCautions(project.site, book.extraCautions)),
     })),
     schemas: args.schemas.map((name) => ({ label: name, href: `schema/${name}` })),
     guides: args.guides,

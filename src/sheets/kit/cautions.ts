@@ -33,6 +33,11 @@ export function cautionsFor(site: SiteConfig): readonly string[] {
   return [...BUILT_IN_CAUTIONS, ...extra];
 }
 
+/** The site as a book's sheets see it: the book's own cautions after the site's. */
+export function withExtraCautions(site: SiteConfig, extra: readonly string[] | undefined): SiteConfig {
+  return extra && extra.length > 0 ? { ...site, extraCautions: [...(site.extraCautions ?? []), ...extra] } : site;
+}
+
 /** Compares sentences by their words, ignoring case and spacing. */
 function sameWords(sentence: string): string {
   return sentence.trim().replace(/\s+/g, ' ').toLowerCase();
