@@ -11,7 +11,7 @@ const M_PER_IN = 0.0254;
 /** Avoirdupois pound in kilograms (exact). */
 const KG_PER_LB = 0.45359237;
 /** Standard acceleration of gravity, m/s² (exact, conventional). */
-const STANDARD_GRAVITY_M_S2 = 9.80665;
+export const STANDARD_GRAVITY_M_S2 = 9.80665;
 /** Pound-force in newtons: lb × g_n (exact). */
 const N_PER_LBF = KG_PER_LB * STANDARD_GRAVITY_M_S2;
 /** Conventional mercury density for the conventional inch of mercury, kg/m³ (NIST SP 811 B.8 footnote). */
@@ -146,6 +146,14 @@ export function mphToKn(x: number): number {
 /** Knots to km/h. */
 export function knToKmh(x: number): number {
   return (x * M_PER_NMI) / 1000;
+}
+/** Knots to metres per second. */
+export function knToMs(x: number): number {
+  return (x * M_PER_NMI) / 3600;
+}
+/** Metres per second to knots. */
+export function msToKn(x: number): number {
+  return (x * 3600) / M_PER_NMI;
 }
 /** km/h to knots. */
 export function kmhToKn(x: number): number {

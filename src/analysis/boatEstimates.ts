@@ -13,6 +13,7 @@ import {
   hullConstant,
   impellerTopSpeeds,
   installationAbsorber,
+  planingSpeedKn,
   powerChangeForSpeedGain,
   shaftPowerForSpeedKw,
   speedAtAbsorbedPowerRpm,
@@ -27,7 +28,7 @@ import { boatTrials, calibratedBoatInstallation } from './boatCalibration.ts';
 import { STATUS_WORDS } from './status.ts';
 
 export const SPEED_NOTE =
-  'Speeds are estimates from Crouch’s planing formula (power into the jet shaft, loaded displacement); they hold for planing speeds only and are best calibrated by a logged sea-trial speed.';
+  'Speeds are estimates from Crouch’s planing formula (power into the jet shaft, loaded displacement); they hold for planing speeds only, so a setting below planing speed gets no speed, and they are best calibrated by a logged sea-trial speed.';
 export const FUEL_NOTE = 'Fuel figures are estimates: brake power × BSFC / fuel density, with typical figures where the engine data give none.';
 
 export interface HullResult {
@@ -36,17 +37,25 @@ export interface HullResult {
   readonly trialDates: readonly string[];
   readonly note: string;
   readonly displacementKg: number;
+  /** Lowest speed (kn) taken as planing for this hull (model/planing.ts); below it no speed is estimated. */
+  readonly planingFromKn: number;
 }
+
+/** 'planing': the speed is a planing estimate; 'belowPlaning': the setting is below planing speed, so no speed is estimated. */
+export type SpeedBasisWord = 'planing' | 'belowPlaning';
 
 export interface CruiseEstimate {
   readonly label: string;
   readonly kind: CruiseSetting['kind'];
-  readonly status: 'ok' | 'aboveWot';
-  readonly speedRpm: number;
-  readonly powerKw: number;
-  readonly speedKn: number;
-  readonly fuelLPerH: number;
-  readonly fuelUsGalPerH: number;
+  /** 'belowPlaning' only for a speed setting below planing speed: its rpm, power and fuel cannot be estimated. */
+  readonly status: 'ok' | 'aboveWot' | 'belowPlaning';
+  readonly speedBasis: SpeedBasisWord;
+  readonly speedRpm?: number;
+  readonly powerKw?: number;
+  /** Absent below planing speed (speedBasis 'belowPlaning'). */
+  readonly speedKn?: number;
+  readonly fuelLPerH?: number;
+  readonly fuelUsGalPerH?: number;
   /** With a tank: hours and nautical miles keeping a third in reserve (rule of thirds). */
   readonly hoursWithReserve?: number;
   readonly rangeWithReserveNm?: number;
@@ -105,25 +114,30 @@ export interface BoatEstimates {
 /** Speed gains tabulated on upgrade sheets, %. */
 export const SPEED_GAINS_PCT: readonly number[] = [5, 10, 15];
 
-function cruiseEstimate(boat: Boat, setting: CruiseSetting, inst: Installation, speed: SpeedBasis, wotRpm: number): CruiseEstimate {
+function cruiseEstimate(boat: Boat, setting: CruiseSetting, inst: Installation, speed: SpeedBasis, wotRpm: number, planingFromKn: number): CruiseEstimate {
   const absorber = installationAbsorber(inst);
   const eff = inst.driveLine.efficiency;
+  // Crouch's formula holds on the plane only: a speed setting below planing speed gives no power, and a
+  // power or rpm setting whose estimate falls below it gets no speed (its rpm, power and fuel still hold).
+  if (setting.kind === 'speed' && setting.speedKn < planingFromKn) return { label: setting.label, kind: setting.kind, status: 'belowPlaning', speedBasis: 'belowPlaning' };
   // Engine-side power for each kind of setting; the impeller's absorption law gives the rpm.
   const powerKw =
     setting.kind === 'power' ? setting.powerKw
     : setting.kind === 'rpm' ? absorbedPowerKw(absorber, setting.speedRpm)
     : shaftPowerForSpeedKw({ ...speed, speedKn: setting.speedKn }) / eff;
   const speedRpm = setting.kind === 'rpm' ? setting.speedRpm : speedAtAbsorbedPowerRpm(absorber, powerKw);
-  const speedKn = setting.kind === 'speed' ? setting.speedKn : crouchSpeedKn({ ...speed, shaftPowerKw: powerKw * eff });
+  const crouchKn = setting.kind === 'speed' ? setting.speedKn : crouchSpeedKn({ ...speed, shaftPowerKw: powerKw * eff });
+  const planing = crouchKn >= planingFromKn;
   const fuel = fuelFlow({ powerKw, fuel: inst.engine.fuel, bsfcGPerKwh: inst.engine.bsfcGPerKwh });
-  const range = boat.fuelTankL === undefined ? undefined : fuelRange({ tankL: boat.fuelTankL, litresPerHour: fuel.litresPerHour, speedKn });
+  const range = boat.fuelTankL === undefined || !planing ? undefined : fuelRange({ tankL: boat.fuelTankL, litresPerHour: fuel.litresPerHour, speedKn: crouchKn });
   return {
     label: setting.label,
     kind: setting.kind,
     status: speedRpm > wotRpm ? 'aboveWot' : 'ok',
+    speedBasis: planing ? 'planing' : 'belowPlaning',
     speedRpm,
     powerKw,
-    speedKn,
+    ...(planing ? { speedKn: crouchKn } : {}),
     fuelLPerH: fuel.litresPerHour,
     fuelUsGalPerH: fuel.usGalPerHour,
     ...(range ? { hoursWithReserve: range.hoursWithReserve, rangeWithReserveNm: range.rangeWithReserveNm! } : {}),
@@ -155,6 +169,7 @@ export function boatEstimates(args: { boat: Boat; inst: Installation; calibratio
   const measured = crouchConstantsFromTrials({ inst: args.inst, calibration, trials: boatTrials(boat), displacementKg: boat.hull.displacementKg });
   const hc = hullConstant({ hullType: boat.hull.type, statedConstant: boat.hull.crouchConstant, measured });
   const speed: SpeedBasis = { crouchConstant: hc.value, displacementKg: boat.hull.displacementKg };
+  const planingFromKn = planingSpeedKn({ displacementKg: boat.hull.displacementKg, waterDensityKgM3: boat.water.densityKgM3 });
   const topSpeeds = impellerTopSpeeds({ inst, impellers: boat.jet.impellers, speed }).map((p) => topSpeedRow(boat, p));
   const fitted = topSpeeds.find((r) => r.fitted === 'yes')!;
   const what = upgradeWhatIf({ inst, impellers: boat.jet.impellers, speed });
@@ -185,13 +200,13 @@ export function boatEstimates(args: { boat: Boat; inst: Installation; calibratio
   return {
     basis: calibrated ? 'calibrated' : 'nominal',
     trialDates,
-    hull: { crouchConstant: hc.value, source: hc.source, trialDates: hc.trialDates, note: hc.note, displacementKg: boat.hull.displacementKg },
+    hull: { crouchConstant: hc.value, source: hc.source, trialDates: hc.trialDates, note: hc.note, displacementKg: boat.hull.displacementKg, planingFromKn },
     wotSpeedKn: fitted.speedKn,
     wotFuelLPerH: wotFuel.litresPerHour,
     bsfcGPerKwh: wotFuel.bsfcGPerKwh,
     bsfcSource: wotFuel.bsfcSource,
     fuelKgPerL: wotFuel.fuelKgPerL,
-    cruise: boat.cruise.map((c) => cruiseEstimate(boat, c, inst, speed, fitted.wotRpm)),
+    cruise: boat.cruise.map((c) => cruiseEstimate(boat, c, inst, speed, fitted.wotRpm, planingFromKn)),
     topSpeeds,
     upgrade,
     speedGains,

@@ -20,7 +20,10 @@ export interface CruiseRow {
   readonly label: string;
   readonly kind: CruiseSetting['kind'];
   /** 'ok'; 'aboveWot' (asks more than the engine makes at WOT). 'needsSpeedModel' is no longer produced (speed settings use the Crouch estimate); kept so older readers still type-check. */
-  readonly status: 'ok' | 'aboveWot' | 'needsSpeedModel';
+  /** 'belowPlaning': a speed setting below planing speed, so its rpm, power and fuel are not estimated. */
+  readonly status: 'ok' | 'aboveWot' | 'belowPlaning' | 'needsSpeedModel';
+  /** 'belowPlaning' when the setting runs below planing speed: then no speed is estimated (speedKn absent). */
+  readonly speedBasis: 'planing' | 'belowPlaning';
   readonly speedRpm?: number;
   readonly powerKw?: number;
   /** Boat speed, knots (filled by the speed model). */
@@ -81,9 +84,9 @@ export function windowPlace(speedRpm: number, limits: EngineLimits): WindowPlace
 function cruiseRow(setting: CruiseSetting, inst: Installation, wotRpm: number, est: BoatEstimates['cruise'][number]): CruiseRow {
   const absorber = installationAbsorber(inst);
   const range = est.rangeWithReserveNm !== undefined ? { hoursWithReserve: est.hoursWithReserve!, rangeWithReserveNm: est.rangeWithReserveNm } : {};
-  const estimates = { speedKn: est.speedKn, fuelLPerH: est.fuelLPerH, fuelUsGalPerH: est.fuelUsGalPerH, ...range };
-  // A speed setting needs the speed model: its rpm and power come from the Crouch estimate inverted.
-  if (setting.kind === 'speed') return { label: setting.label, kind: setting.kind, status: est.status, speedRpm: est.speedRpm, powerKw: est.powerKw, ...estimates };
+  const estimates = { speedBasis: est.speedBasis, ...(est.speedKn !== undefined ? { speedKn: est.speedKn } : {}), ...(est.fuelLPerH !== undefined ? { fuelLPerH: est.fuelLPerH, fuelUsGalPerH: est.fuelUsGalPerH } : {}), ...range };
+  // A speed setting needs the speed model: its rpm and power come from the Crouch estimate inverted (none below planing speed).
+  if (setting.kind === 'speed') return { label: setting.label, kind: setting.kind, status: est.status, ...(est.speedRpm !== undefined ? { speedRpm: est.speedRpm, powerKw: est.powerKw } : {}), ...estimates };
   const speedRpm = setting.kind === 'rpm' ? setting.speedRpm : speedAtAbsorbedPowerRpm(absorber, setting.powerKw);
   const powerKw = setting.kind === 'power' ? setting.powerKw : absorbedPowerKw(absorber, setting.speedRpm);
   return { label: setting.label, kind: setting.kind, status: speedRpm > wotRpm ? 'aboveWot' : 'ok', speedRpm, powerKw, ...estimates };

@@ -38,6 +38,7 @@ export {
   type HullConstant,
   type HullConstantSource,
 } from './speed.ts';
+export { PLANING_FROUDE_VOLUME, planingSpeedKn, volumeFroudeNumber } from './planing.ts';
 export { DEFAULT_RESERVE_FRACTION, fuelFlow, fuelRange, TYPICAL_BSFC_G_PER_KWH, TYPICAL_FUEL_KG_PER_L, type FuelFlow, type FuelRange } from './fuel.ts';
 export {
   bestImpeller,

@@ -40,8 +40,15 @@ function cruiseAsked(row: CruiseRow, boat: Boat, unit: PowerUnit): string {
 const CRUISE_NOTES: Readonly<Record<CruiseRow['status'], string>> = {
   ok: '',
   aboveWot: 'more than WOT: not reachable',
+  belowPlaning: 'below planing speed: not estimated',
   needsSpeedModel: 'needs a speed estimate (not yet computed)',
 };
+
+/** What the note column says of a cruise row: why a figure is missing, or '–'. */
+function cruiseNote(row: CruiseRow): string {
+  if (row.status === 'ok' && row.speedBasis === 'belowPlaning') return 'below planing speed: speed not estimated';
+  return CRUISE_NOTES[row.status] || '–';
+}
 
 /** Boat speed in the site's unit, whole numbers (estimates: a decimal would claim too much). */
 export function speedText(speedKn: number, unit: SpeedUnit): string {
@@ -88,7 +95,7 @@ export function cruiseRows(boat: Boat, result: BoatResult, unit: PowerUnit, spee
       row.powerKw !== undefined ? powerText(row.powerKw, unit).replace(` ${unit}`, '') : '–',
       row.speedKn !== undefined ? speedText(row.speedKn, speedUnit) : '–',
       row.fuelLPerH !== undefined ? numberText(row.fuelLPerH, 0, 'fuel flow') : '–',
-      CRUISE_NOTES[row.status] || '–',
+      cruiseNote(row),
     ]),
   };
 }

@@ -22,6 +22,7 @@ export interface BoatTableArgs {
 const CRUISE_STATUS: Readonly<Record<CruiseRow['status'], string>> = {
   ok: 'Below WOT',
   aboveWot: 'Above WOT: not reachable',
+  belowPlaning: 'Below planing speed: not estimated',
   needsSpeedModel: 'Needs a speed estimate',
 };
 
@@ -125,7 +126,7 @@ export function cruiseTable(args: BoatTableArgs): TableView {
         optionalNumber(c.fuelUsGalPerH, 1, 'fuel flow'),
         ...(range ? [optionalNumber(c.rangeWithReserveNm, 0, 'range')] : []),
         ...(cal ? [dataSheet(data?.speedRpm === undefined ? '–' : rpmText(data.speedRpm)), dataSheet(data?.powerKw === undefined ? '–' : powerCell(data.powerKw, unit))] : []),
-        status(CRUISE_STATUS[c.status], c.status === 'aboveWot'),
+        status(c.status === 'ok' && c.speedBasis === 'belowPlaning' ? 'Below WOT; below planing speed, so no speed estimate' : CRUISE_STATUS[c.status], c.status === 'aboveWot'),
       ];
     }),
     note: `${estimatesNote(r)}${range ? ` Range: a ${boat.fuelTankL} L tank less a third kept in reserve.` : ''}`,

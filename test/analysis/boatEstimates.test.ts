@@ -36,7 +36,7 @@ describe('boatEstimates()', () => {
     const { est } = estimatesOf(boat);
     const towing = est.cruise.find((c) => c.kind === 'speed')!;
     expect(towing.speedKn).toBe(22);
-    expect(crouchSpeedKn({ crouchConstant: 150, displacementKg: 1250, shaftPowerKw: towing.powerKw * 0.97 })).toBeCloseTo(22, 9);
+    expect(crouchSpeedKn({ crouchConstant: 150, displacementKg: 1250, shaftPowerKw: towing.powerKw! * 0.97 })).toBeCloseTo(22, 9);
     const economy = est.cruise.find((c) => c.kind === 'power')!;
     // Typical petrol 350 g/kWh and 0.74 kg/L (common practice, no source): 50 kW → 23.65 L/h.
     expect(economy.fuelLPerH).toBeCloseTo((50 * 0.35) / 0.74, 9);
@@ -100,5 +100,35 @@ describe('calibrationResult()', () => {
     }
     expect(r.exponentSource).toBe('fitted');
     expect(r.trialDates).toEqual(['2026-04-01', '2026-04-02', '2026-04-03']);
+  });
+});
+
+describe('boatEstimates() below planing speed', () => {
+  // The demo boat (1250 kg, fresh water) planes from Fn∇ = 3, about 19 kn (model/planing.ts).
+  const slow: Boat = {
+    ...boat,
+    fuelTankL: 120,
+    cruise: [
+      { label: 'Trolling', kind: 'power', powerKw: 8 },
+      { label: 'No-wake zone', kind: 'speed', speedKn: 5 },
+      { label: 'Fast', kind: 'power', powerKw: 90 },
+    ],
+  };
+
+  it('gives no speed for a cruise point below planing speed, but keeps its rpm, power and fuel', () => {
+    const { est } = estimatesOf(slow);
+    expect(est.hull.planingFromKn).toBeGreaterThan(18);
+    expect(est.hull.planingFromKn).toBeLessThan(20);
+    const [trolling, noWake, fast] = est.cruise;
+    // Crouch at 8 kW would say 150 / sqrt(1250 kg / 8 kW) in lb and hp: about 9 kn, far below planing.
+    expect(crouchSpeedKn({ crouchConstant: 150, displacementKg: 1250, shaftPowerKw: 8 * 0.97 })).toBeLessThan(est.hull.planingFromKn);
+    expect(trolling).toMatchObject({ status: 'ok', speedBasis: 'belowPlaning', powerKw: 8 });
+    expect(trolling.speedKn).toBeUndefined();
+    expect(trolling.rangeWithReserveNm).toBeUndefined();
+    // Typical petrol 350 g/kWh and 0.74 kg/L (common practice, no source).
+    expect(trolling.fuelLPerH).toBeCloseTo((8 * 0.35) / 0.74, 9);
+    expect(noWake).toEqual({ label: 'No-wake zone', kind: 'speed', status: 'belowPlaning', speedBasis: 'belowPlaning' });
+    expect(fast.speedBasis).toBe('planing');
+    expect(fast.speedKn).toBeGreaterThan(est.hull.planingFromKn);
   });
 });
