@@ -79,6 +79,12 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
     widthMm: pct === 0 ? STROKE.emphasis : STROKE.series,
     dashMm: CHART_DASHES[i],
   }));
+  // The chart holds each drawn power change's curve across the window and its new WOT point (up to the
+  // maximum rpm), so every curve the chart names crosses the plot.
+  const chartRegion = [
+    ...upgrade.filter((u) => CHART_STEPS_PCT.includes(u.changePct)).map((u) => ({ speedRpm: Math.min(u.wot.speedRpm, result.limits.maxRpm), powerKw: u.wot.powerKw })),
+    ...engines.flatMap((e) => [result.limits.windowLowRpm, result.limits.windowHighRpm].map((rpm) => ({ speedRpm: rpm, powerKw: e.site.powerKwUnchecked(rpm) }))),
+  ];
   const upgradeRows = [
     ['As now', rpmText(wot.nominal.speedRpm), powerText(wot.nominal.powerKw, unit), fittedTop !== undefined ? speedText(fittedTop, speedUnit) : '–', wot.nominal.statusText, '–'],
     ...upgrade.map((u) => [
@@ -113,7 +119,7 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
     whole(({ x, y, widthMm }) =>
       paragraph({ x, y, widthMm, text: `Same impeller, more power: WOT rpm rises only a little, as the impeller takes power as rpm to the power ${kText} (x % more power, about x/${kText} % more rpm). Aim only for WOT inside the window (${rpmText(result.limits.windowLowRpm)}–${rpmText(result.limits.windowHighRpm)} rpm); never past the maximum (${rpmText(result.limits.maxRpm)} rpm).`, sizePt: type.body, where })),
     whole(({ x, y, widthMm }) => {
-      const chart = boatChart({ ...(view ?? { boat, result }), box: { x, y, width: widthMm, height: chartMm }, sizePt: type.small, powerUnitFirst: unit, engines, points: 'fitted', where });
+      const chart = boatChart({ ...(view ?? { boat, result }), box: { x, y, width: widthMm, height: chartMm }, sizePt: type.small, powerUnitFirst: unit, engines, points: 'fitted', region: chartRegion, where });
       const notes = [chartImpellersNote(boat), chart.notes.map((n) => `(${n.number}) ${n.text}`).join('  ')].filter((t) => t !== '').join('  ');
       const note = notes ? paragraph({ x, y: y + chartMm + 1, widthMm, text: notes, sizePt: type.small, where }) : { nodes: [], heightMm: 0 };
       return { nodes: [chart.node, ...note.nodes], heightMm: chartMm + 1 + note.heightMm };

@@ -5,7 +5,6 @@
 import type { Boat, PowerUnit } from '../../data/types.ts';
 import type { Box } from '../../scene/types.ts';
 import type { BoatResult } from '../../analysis/index.ts';
-import type { EngineCurve } from '../../analysis/index.ts';
 import { isWarning } from '../../analysis/index.ts';
 import { rpmText } from '../kit/format.ts';
 import { matchChart, type MatchChart } from './matchChart.ts';
@@ -13,31 +12,37 @@ import type { EngineSeries } from './seriesTypes.ts';
 import { engineSeries, impellerSeries } from './series.ts';
 import { pointSuffix } from '../words.ts';
 
-/**
- * Rpm and power ranges around a boat's WOT points and cruise settings. The power range also holds every
- * engine curve drawn (site and published) across the rpm range, so no curve leaves the plot (never clipped).
- */
-export function boatDomains(result: BoatResult, curves: readonly EngineCurve[] = []): { rpm: [number, number]; powerKw: [number, number] } {
-  const rpms = result.alternatives.flatMap((a) => [a.band.low.speedRpm, a.band.high.speedRpm]);
-  const cruiseRpms = result.cruise.flatMap((c) => (c.speedRpm !== undefined ? [c.speedRpm] : []));
-  const lo = Math.floor((Math.min(result.limits.windowLowRpm * 0.8, ...rpms, ...cruiseRpms) * 0.95) / 100) * 100;
-  const hi = result.limits.maxRpm * 1.04;
-  const powers = result.alternatives.flatMap((a) => [a.band.low.powerKw, a.band.high.powerKw]);
-  const drawn = curves.flatMap((c) => curveValuesKw(c, lo, hi));
-  const peak = Math.max(...powers, ...drawn);
-  return { rpm: [lo, hi], powerKw: [Math.min(peak * 0.4, ...drawn.map((kw) => kw * 0.96)), peak * 1.08] };
+/** A point of the operating region (rpm, kW). */
+export interface RegionPoint {
+  readonly speedRpm: number;
+  readonly powerKw: number;
 }
 
 /**
- * The values (kW) that bound an engine curve over [loRpm, hiRpm]: its ends there and its knots inside.
- * The curve is monotone between knots (monotone Hermite pieces), so its extremes are among these.
+ * Rpm and power ranges cropped to the operating region: every drawn impeller's WOT point with the ends of
+ * its band, any extra points (an upgrade sheet's new WOT points), the WOT window and the maximum rpm, plus
+ * a margin. The curves are clipped to the plot, so the answer, not the whole engine curve, fills it.
  */
-function curveValuesKw(curve: EngineCurve, loRpm: number, hiRpm: number): number[] {
-  const a = Math.min(Math.max(loRpm, curve.minRpm), curve.maxRpm);
-  const b = Math.min(Math.max(hiRpm, curve.minRpm), curve.maxRpm);
-  const knots = curve.pieces.map((p) => p.x0).filter((x) => x > a && x < b);
-  return [a, b, ...knots].map((x) => curve.powerKwUnchecked(x));
+export function boatDomains(result: BoatResult, extra: readonly RegionPoint[] = []): { rpm: [number, number]; powerKw: [number, number] } {
+  const points = [...result.alternatives.flatMap((a) => [a.band.low, a.band.nominal, a.band.high]), ...extra];
+  const rpms = [...points.map((p) => p.speedRpm), result.limits.windowLowRpm, result.limits.windowHighRpm, result.limits.maxRpm];
+  const rpmLo = Math.min(...rpms);
+  const rpmHi = Math.max(...rpms);
+  const rpmMargin = Math.max(RPM_MARGIN * (rpmHi - rpmLo), MIN_RPM_MARGIN);
+  const powers = points.map((p) => p.powerKw);
+  const kwLo = Math.min(...powers);
+  const kwHi = Math.max(...powers);
+  // Room above and below the points for their labels, at least a share of the power so a flat row of
+  // points does not blow up the scale.
+  const kwMargin = Math.max(POWER_MARGIN * (kwHi - kwLo), MIN_POWER_MARGIN * kwHi);
+  return { rpm: [rpmLo - rpmMargin, rpmHi + rpmMargin], powerKw: [Math.max(0, kwLo - kwMargin), kwHi + kwMargin] };
 }
+
+/** Margins of the cropped ranges: shares of the span, and the least (rpm; share of the highest power). */
+const RPM_MARGIN = 0.06;
+const MIN_RPM_MARGIN = 60;
+const POWER_MARGIN = 0.25;
+const MIN_POWER_MARGIN = 0.06;
 
 /**
  * Most impellers a boat chart draws: six keeps every curve its own colour (style.ts) and the labels
@@ -64,7 +69,7 @@ export function chartImpellersNote(boat: Boat): string {
 }
 
 /** Match chart for one boat in a box. `engines` overrides the site curve (upgrade sheets). */
-export function boatChart(args: { boat: Boat; result: BoatResult; box: Box; sizePt: number; powerUnitFirst: PowerUnit; engines?: readonly EngineSeries[]; points?: 'all' | 'fitted'; where: string }): MatchChart {
+export function boatChart(args: { boat: Boat; result: BoatResult; box: Box; sizePt: number; powerUnitFirst: PowerUnit; engines?: readonly EngineSeries[]; points?: 'all' | 'fitted'; /** More points the plot must hold (upgrade WOT points). */ region?: readonly RegionPoint[]; where: string }): MatchChart {
   const { boat } = args;
   // A jet with many impellers: the chart draws those around the fitted one, styled as on every sheet.
   const ids = new Set(chartImpellerIds(boat));
@@ -72,7 +77,7 @@ export function boatChart(args: { boat: Boat; result: BoatResult; box: Box; size
   const engines = args.engines ?? engineSeries({ family: boatFamily(boat), ambient: boat.site.ambient });
   const impellers = impellerSeries({ jet: boat.jet, driveLine: boat.driveLine, waterDensityKgM3: boat.water.densityKgM3 }).filter((s) => ids.has(s.id));
   const shown = args.points === 'fitted' ? result.alternatives.filter((a) => a.fitted === 'yes') : result.alternatives;
-  const d = boatDomains(result, engines.flatMap((e) => [e.site, ...(e.reference ? [e.reference] : [])]));
+  const d = boatDomains(result, args.region);
   return matchChart({
     box: args.box,
     sizePt: args.sizePt,
@@ -89,11 +94,13 @@ export function boatChart(args: { boat: Boat; result: BoatResult; box: Box; size
       powerKw: a.band.nominal.powerKw,
       text: `${a.fitted === 'yes' ? 'Fitted: ' : ''}${rpmText(a.band.nominal.speedRpm)} rpm${pointSuffix(a.band.nominal.status)}`,
       warn: isWarning(a.band.nominal.status),
+      band: { low: a.band.low, high: a.band.high },
     })),
     window: { lowRpm: result.limits.windowLowRpm, highRpm: result.limits.windowHighRpm },
     maxRpm: result.limits.maxRpm,
     cruise: [],
     markerMm: 2.4,
+    clipToPlot: true,
     where: args.where,
   });
 }

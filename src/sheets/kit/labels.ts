@@ -5,11 +5,16 @@
  * When no ring fits, the label becomes a numbered callout (a small number placed the same way, else at the
  * nearest free spot anywhere in the bounds, with a leader) and its text goes into a note the sheet prints;
  * when even the number finds no room anywhere, LayoutError.
+ *
+ * Given the chart's marks (operating points), every spot must also keep three rules: no leader crosses
+ * another, no leader passes through a mark other than the label's own, and a label that names marks is
+ * nearer one of its own marks than any other mark. Only when no spot anywhere keeps them (a mark on top of
+ * another's) does a callout number take the nearest free spot without them.
  */
 import type { Box, Colour, FontWeight, SceneNode } from '../../scene/types.ts';
 import { fontExtentMm, measureTextMm } from '../../scene/text.ts';
 import { label } from './block.ts';
-import { boxesOverlap, boxInside } from './boxes.ts';
+import { boxesOverlap, boxInside, pointBoxDistanceMm, segmentHitsBox, segmentsCross, type Point } from './boxes.ts';
 import { LayoutError } from './errors.ts';
 import { INK, PAPER_WHITE, STROKE, stroke } from './style.ts';
 
@@ -23,6 +28,16 @@ export interface LabelRequest {
   readonly colour?: Colour;
   /** Directions to try first, e.g. [[1, -1]] = up-right. */
   readonly prefer?: readonly (readonly [number, number])[];
+  /** Keys of the marks this label names (an operating point's label names its marker). */
+  readonly marks?: readonly string[];
+}
+
+/** A mark on the chart (a marker), which labels keep the rules of the file comment against. */
+export interface LabelMark {
+  readonly key: string;
+  readonly x: number;
+  readonly y: number;
+  readonly box: Box;
 }
 
 export interface PlacedLabels {
@@ -47,13 +62,17 @@ function candidateBox(x: number, y: number, dir: readonly [number, number], d: n
   return { x: bx, y: by, width: w, height: h };
 }
 
-function findSpot(args: { x: number; y: number; w: number; h: number; prefer: readonly (readonly [number, number])[]; bounds: Box; occupied: readonly Box[] }): { box: Box; ring: number } | null {
+/** A spot's box passes the placement rules (true when there are none). */
+type SpotRule = (box: Box) => boolean;
+
+function findSpot(args: { x: number; y: number; w: number; h: number; prefer: readonly (readonly [number, number])[]; bounds: Box; occupied: readonly Box[]; ok: SpotRule }): { box: Box; ring: number } | null {
   const dirs = [...args.prefer, ...DIRECTIONS.filter((d) => !args.prefer.some((p) => p[0] === d[0] && p[1] === d[1]))];
   for (let ring = 0; ring < RINGS_MM.length; ring += 1) {
     for (const dir of dirs) {
       const box = candidateBox(args.x, args.y, dir, RINGS_MM[ring], args.w, args.h);
       if (!boxInside(box, args.bounds)) continue;
       if (args.occupied.some((o) => boxesOverlap(box, o, PAD_MM))) continue;
+      if (!args.ok(box)) continue;
       return { box, ring };
     }
   }
@@ -67,7 +86,7 @@ const FAR_STEP_MM = 1.5;
  * The free spot nearest the anchor anywhere in the bounds (a leader line points home), for a callout
  * number the rings could not place: a crowded corner of a chart still leaves room elsewhere.
  */
-function farSpot(args: { x: number; y: number; w: number; h: number; bounds: Box; occupied: readonly Box[] }): { box: Box; ring: number } | null {
+function farSpot(args: { x: number; y: number; w: number; h: number; bounds: Box; occupied: readonly Box[]; ok: SpotRule }): { box: Box; ring: number } | null {
   const { bounds, w, h } = args;
   let best: { box: Box; ring: number; d: number } | null = null;
   for (let y = bounds.y; y + h <= bounds.y + bounds.height; y += FAR_STEP_MM) {
@@ -76,25 +95,62 @@ function farSpot(args: { x: number; y: number; w: number; h: number; bounds: Box
       const d = Math.hypot(x + w / 2 - args.x, y + h / 2 - args.y);
       if (best && d >= best.d) continue;
       if (args.occupied.some((o) => boxesOverlap(box, o, PAD_MM))) continue;
+      if (!args.ok(box)) continue;
       best = { box, ring: RINGS_MM.length, d };
     }
   }
   return best && { box: best.box, ring: best.ring };
 }
 
+/** The leader a label at this box gets (anchor to the nearest point of the box), or null when it sits close enough. */
+function leaderTo(anchor: Point, box: Box): { from: Point; to: Point } | null {
+  const to = { x: Math.min(Math.max(anchor.x, box.x), box.x + box.width), y: Math.min(Math.max(anchor.y, box.y), box.y + box.height) };
+  return Math.hypot(to.x - anchor.x, to.y - anchor.y) > LEADER_FROM_MM ? { from: anchor, to } : null;
+}
+
+/** The rules of the file comment for one label, against the marks and the leaders drawn so far. */
+function markRules(req: LabelRequest, marks: readonly LabelMark[], leaders: readonly { from: Point; to: Point }[]): SpotRule {
+  if (marks.length === 0) return () => true;
+  const own = marks.filter((m) => req.marks?.includes(m.key));
+  const others = marks.filter((m) => !req.marks?.includes(m.key));
+  return (box) => {
+    const leader = leaderTo(req, box);
+    if (leader) {
+      if (others.some((m) => segmentHitsBox(leader.from, leader.to, m.box))) return false;
+      if (leaders.some((l) => segmentsCross(leader.from, leader.to, l.from, l.to))) return false;
+    }
+    if (own.length === 0) return true;
+    const near = Math.min(...own.map((m) => pointBoxDistanceMm(m, box)));
+    return others.every((m) => pointBoxDistanceMm(m, box) > near);
+  };
+}
+
 /** Places labels in order (earlier = higher priority); see the file comment for the rules. */
-export function placeLabels(requests: readonly LabelRequest[], opts: { bounds: Box; obstacles: readonly Box[]; where: string; /** Callout numbers continue after this many (a chart placing labels in two areas). */ numbersBefore?: number }): PlacedLabels {
+export function placeLabels(
+  requests: readonly LabelRequest[],
+  opts: {
+    bounds: Box;
+    obstacles: readonly Box[];
+    where: string;
+    /** Callout numbers continue after this many (a chart placing labels in two areas). */
+    numbersBefore?: number;
+    /** Marks the placement rules hold against (none: only bounds and collisions count). */
+    marks?: readonly LabelMark[];
+  },
+): PlacedLabels {
   const occupied: Box[] = [...opts.obstacles];
   const nodes: SceneNode[] = [];
   const notes: { number: number; key: string; text: string }[] = [];
+  const leaders: { from: Point; to: Point }[] = [];
+  const marks = opts.marks ?? [];
   const emit = (req: LabelRequest, text: string, spot: { box: Box; ring: number }, weight: FontWeight, role: string): void => {
     const { ascentMm } = fontExtentMm({ sizePt: req.sizePt, weight });
     const { box } = spot;
     // Leader from the anchor to the nearest point of the box, so a label set apart still points home.
-    const lx = Math.min(Math.max(req.x, box.x), box.x + box.width);
-    const ly = Math.min(Math.max(req.y, box.y), box.y + box.height);
-    if (Math.hypot(lx - req.x, ly - req.y) > LEADER_FROM_MM) {
-      nodes.push({ type: 'path', role: 'leader', key: req.key, segments: [{ op: 'M', x: req.x, y: req.y }, { op: 'L', x: lx, y: ly }], stroke: stroke(req.colour ?? INK, STROKE.hairline) });
+    const leader = leaderTo(req, box);
+    if (leader) {
+      leaders.push(leader);
+      nodes.push({ type: 'path', role: 'leader', key: req.key, segments: [{ op: 'M', x: req.x, y: req.y }, { op: 'L', x: leader.to.x, y: leader.to.y }], stroke: stroke(req.colour ?? INK, STROKE.hairline) });
     }
     // A white backing keeps the text readable where it sits over grid or curves.
     nodes.push({ type: 'rect', role: 'label-backing', key: req.key, x: box.x, y: box.y, width: box.width, height: box.height, fill: { colour: PAPER_WHITE, opacity: 0.85 } });
@@ -107,7 +163,8 @@ export function placeLabels(requests: readonly LabelRequest[], opts: { bounds: B
     const h = ascentMm + descentMm;
     const prefer = req.prefer ?? [];
     const w = measureTextMm({ text: req.text, sizePt: req.sizePt, weight });
-    const spot = findSpot({ x: req.x, y: req.y, w, h, prefer, bounds: opts.bounds, occupied });
+    const ok = markRules(req, marks, leaders);
+    const spot = findSpot({ x: req.x, y: req.y, w, h, prefer, bounds: opts.bounds, occupied, ok });
     if (spot) {
       emit(req, req.text, spot, weight, 'direct-label');
       continue;
@@ -115,7 +172,8 @@ export function placeLabels(requests: readonly LabelRequest[], opts: { bounds: B
     const number = (opts.numbersBefore ?? 0) + notes.length + 1;
     const numText = String(number);
     const nw = measureTextMm({ text: numText, sizePt: req.sizePt, weight: 'bold' });
-    const numSpot = findSpot({ x: req.x, y: req.y, w: nw, h, prefer, bounds: opts.bounds, occupied }) ?? farSpot({ x: req.x, y: req.y, w: nw, h, bounds: opts.bounds, occupied });
+    const num = { x: req.x, y: req.y, w: nw, h, bounds: opts.bounds, occupied };
+    const numSpot = findSpot({ ...num, prefer, ok }) ?? farSpot({ ...num, ok }) ?? farSpot({ ...num, ok: () => true });
     if (!numSpot) {
       throw new LayoutError(opts.where, `no room for the label "${req.text}" or a callout number near (${req.x.toFixed(1)}, ${req.y.toFixed(1)}) mm; use larger paper or fewer series`);
     }
