@@ -122,55 +122,8 @@ export function acrossBandText(band: BandResult): string {
   return note !== '' ? note : SAME_ACROSS[band.nominal.status];
 }
 
-/** Every impeller of the jet with its WOT band (calibrated first when there are trials), status and estimated top speed. */
-export function alternativeRows(result: BoatResult, unit: PowerUnit, speedUnit: SpeedUnit = 'kn'): { columns: Column[]; rows: Cell[][] } {
-  const cal = result.calibrated !== undefined;
-  return {
-    columns: [
-      words('Impeller'),
-      right('WOT band'),
-      right('Most likely'),
-      ...(cal ? [{ ...right(DATA_SHEET_HEADER), optional: true }] : []),
-      right(`Power (${unit})`),
-      right(speedHeader(speedUnit, 'Top')),
-      words('Status'),
-      words('Across the band'),
-    ],
-    rows: result.alternatives.map((a) => {
-      const b = a.calibratedBand ?? a.band;
-      const top = a.calibratedTopSpeedKn ?? a.topSpeedKn;
-      const warn = isWarning(b.nominal.status);
-      const bold = a.fitted === 'yes' ? ('bold' as const) : ('regular' as const);
-      return [
-        { text: a.fitted === 'yes' ? `${a.label} (fitted)` : a.label, weight: bold },
-        { text: rpmBandText(b.low.speedRpm, b.high.speedRpm), weight: bold },
-        { text: rpmText(b.nominal.speedRpm), weight: bold },
-        ...(cal ? [soft(rpmText(a.band.nominal.speedRpm))] : []),
-        { text: powerText(b.nominal.powerKw, unit).replace(` ${unit}`, ''), weight: bold },
-        { text: top !== undefined ? speedText(top, speedUnit) : '–', weight: bold },
-        { text: b.nominal.statusText, weight: warn ? 'bold' : bold, colour: warn ? WARN : INK },
-        acrossBandText(b),
-      ];
-    }),
-  };
-}
-
 /** "Predicted WOT 5070 rpm (band 4910–5220 rpm), 154 kW (207 hp): Good match", or "Calibrated WOT …" on the calibrated model. */
 export function wotHeadline(result: BoatResult, unit: PowerUnit): string {
   const b = result.calibrated?.wot ?? result.wot;
   return `${result.calibrated ? 'Calibrated' : 'Predicted'} WOT ${rpmText(b.nominal.speedRpm)} rpm (band ${rpmBandText(b.low.speedRpm, b.high.speedRpm)}), ${powerBothText(b.nominal.powerKw, unit)}: ${b.nominal.statusText}`;
-}
-
-/** Under the headline: the verdict and, with trials, where the calibration comes from and the data-sheet figure (body); what the band covers (small). */
-export function wotSubLines(result: BoatResult, tolerances: { impellerPct: number; enginePct: number }, unit: PowerUnit): { body: string; small: string } {
-  const nominalCovers = `impeller rating ± ${tolerances.impellerPct} % and engine power ± ${tolerances.enginePct} %`;
-  const cal = result.calibrated;
-  // The headline already ends in the status: repeat the verdict only when the band's ends add to it.
-  const verdict = (b: BandResult) => (b.verdict === b.nominal.statusText ? '' : `${b.verdict}. `);
-  if (!cal) return { body: `${verdict(result.wot)}The band covers ${nominalCovers}.`, small: '' };
-  const n = result.wot;
-  return {
-    body: `${verdict(cal.wot)}Calibrated to ${trialDatesText(result)}; data-sheet model ${rpmText(n.nominal.speedRpm)} rpm (band ${rpmBandText(n.low.speedRpm, n.high.speedRpm)}), ${powerText(n.nominal.powerKw, unit)}.`,
-    small: `${cal.bandNote} The data-sheet band covers ${nominalCovers}.`,
-  };
 }

@@ -1,14 +1,17 @@
 /**
- * Boat spec sheet (A4 portrait by default), for dealers: fitted combination and conditions, the predicted
- * WOT band and power, a small match chart, the cruise table, every alternative impeller, and the cautions.
+ * Boat spec sheet (A4 portrait by default), for a buyer: the answer first (top speed, full-throttle rpm and
+ * whether the impeller suits the engine, cruising speed and fuel), a match chart cropped to the operating
+ * region, cruising, the other impellers in plain words, what is fitted, sea trials, the cautions, and a
+ * short technical note with the working at the end.
  */
 import type { SheetRequest } from '../data/types.ts';
 import type { Scene } from '../scene/types.ts';
 import { analyseBoat, isWarning } from '../analysis/index.ts';
 import { boatChart, chartImpellersNote } from './chart/boatChart.ts';
-import { alternativeRows, cruiseRows, estimatesNote, fittedRows, trialDatesText, wotHeadline, wotSubLines } from './boatTables.ts';
+import { cruiseRows, fittedRows, trialDatesText, wotHeadline } from './boatTables.ts';
+import { buyerAnswer, otherImpellerRows, technicalNote } from './buyerWords.ts';
 import { calibratedChartView } from './calibratedView.ts';
-import { calibrationText, MAX_TRIAL_ROWS, trialRows } from './trialTables.ts';
+import { MAX_TRIAL_ROWS, trialRows } from './trialTables.ts';
 import { assembleScene } from './kit/assemble.ts';
 import { paragraph, type Block } from './kit/block.ts';
 import { cautionsFlow, CONTINUING_CAUTION } from './kit/cautions.ts';
@@ -27,8 +30,8 @@ const CHART_MIN_MM = 45;
 /** Gap between the sheet's parts, and the least it closes to when the page is full. */
 const GAP_MM = 4;
 const TIGHT_GAP_MM = 2.5;
-/** The estimates note of a full sheet: the figures stay marked as estimates, the working is left out. */
-const COMPACT_NOTE = 'Speed and fuel are estimates; band and estimate explanations left out for room.';
+/** What the chart's marks mean, under it. */
+const CHART_KEY = 'Marks: where full throttle settles with each impeller; bars: the range it may fall in.';
 
 /** A heading followed by a table, as one part. */
 export function tablePart(args: TableFlowArgs): Part {
@@ -75,23 +78,24 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
   const warn = isWarning(shownWot.nominal.status);
   const view = calibratedChartView(boat, result);
   const calibratedTo = trialDatesText(result);
-  const subLines = wotSubLines(result, { impellerPct: boat.jet.family.tolerancePct, enginePct: boat.engine.powerTolerancePct }, unit);
+  const tolerances = { impellerPct: boat.jet.family.tolerancePct, enginePct: boat.engine.powerTolerancePct };
   const common = { sizePt: type.body, minSizePt: type.min, headingPt: type.heading, where };
   const fitted = fittedRows(boat, result, unit);
   const speedUnit = site.speedUnit;
+  const answer = buyerAnswer(result, speedUnit);
   const cruise = cruiseRows(boat, result, unit, speedUnit);
-  const cruiseHeading = !calibratedTo ? 'Cruise settings' : `Cruise settings, calibrated to ${calibratedTo}${cruise.sameRpmAsDataSheet ? ' (rpm as on the data sheet)' : ''}`;
-  const alts = alternativeRows(result, unit, speedUnit);
+  const cruiseHeading = !calibratedTo ? 'Cruising' : `Cruising, calibrated to ${calibratedTo}${cruise.sameRpmAsDataSheet ? ' (rpm as on the data sheet)' : ''}`;
+  const others = otherImpellerRows(result, speedUnit);
   const trialCount = result.calibrated?.calibration.trials.length ?? 0;
   const parts = (chartMm: number, trials: ReturnType<typeof trialRows>, compact: boolean): Flowable[] => [
-    tableFlow({ heading: 'Fitted combination', ...fitted, header: false, ...common, role: 'fitted-table' }),
     whole(({ x, y, widthMm }) => {
-      const head = paragraph({ x, y, widthMm, text: wotHeadline(result, unit), sizePt: type.heading, weight: 'bold', colour: warn ? WARN : INK, role: 'wot-headline', where });
+      const head = paragraph({ x, y, widthMm, text: answer.headline, sizePt: type.heading, weight: 'bold', role: 'buyer-headline', where });
       let cursor = y + head.heightMm + 0.5;
       const nodes = [...head.nodes];
-      for (const [text, sizePt] of [[subLines.body, type.body], [compact ? '' : subLines.small, type.small]] as const) {
+      const lines: [string, 'bold' | 'regular', typeof INK][] = [[answer.match, warn ? 'bold' : 'regular', warn ? WARN : INK], [answer.cruise, 'regular', INK]];
+      for (const [text, weight, colour] of lines) {
         if (text === '') continue;
-        const line = paragraph({ x, y: cursor, widthMm, text, sizePt, role: 'wot-verdict', where });
+        const line = paragraph({ x, y: cursor, widthMm, text, sizePt: type.body, weight, colour, role: 'buyer-answer', where });
         nodes.push(...line.nodes);
         cursor += line.heightMm;
       }
@@ -99,25 +103,24 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
     }),
     whole(({ x, y, widthMm }) => {
       const chart = boatChart({ ...(view ?? { boat, result }), box: { x, y, width: widthMm, height: chartMm }, sizePt: type.small, powerUnitFirst: unit, where });
-      const notes = [chartImpellersNote(boat), chart.notes.map((n) => `(${n.number}) ${n.text}`).join('  ')].filter((t) => t !== '').join('  ');
-      const note = notes ? paragraph({ x, y: y + chartMm + 1, widthMm, text: notes, sizePt: type.small, where }) : { nodes: [], heightMm: 0 };
+      const notes = [CHART_KEY, chartImpellersNote(boat), chart.notes.map((n) => `(${n.number}) ${n.text}`).join('  ')].filter((t) => t !== '').join('  ');
+      const note = paragraph({ x, y: y + chartMm + 1, widthMm, text: notes, sizePt: type.small, where });
       return { nodes: [chart.node, ...note.nodes], heightMm: chartMm + 1 + note.heightMm };
     }),
     tableFlow({ heading: cruiseHeading, columns: cruise.columns, rows: cruise.rows, ...common, role: 'cruise-table' }),
-    tableFlow({ heading: calibratedTo ? `Every impeller of this jet on this boat, calibrated to ${calibratedTo}` : 'Every impeller of this jet on this boat', ...alts, ...common, role: 'alternatives-table' }),
+    tableFlow({ heading: calibratedTo ? `Other impellers for this jet, calibrated to ${calibratedTo}` : 'Other impellers for this jet', ...others, ...common, role: 'alternatives-table' }),
+    tableFlow({ heading: 'What is fitted', ...fitted, header: false, ...common, role: 'fitted-table' }),
     ...(trials.rows.length > 0
       ? [
           tableFlow({ heading: 'Sea trials', columns: trials.columns, rows: trials.rows, ...common, role: 'trials-table' }),
         ]
       : []),
+    cautionsFlow({ site, sizePt: type.body, headingPt: type.heading, where }),
     whole(({ x, y, widthMm }) => {
       const hidden = trials.hidden > 0 ? (trials.rows.length > 0 ? ` ${trials.hidden} older trial(s) not listed.` : ` The ${trials.hidden} sea trial(s) are not listed, for room.`) : '';
-      const calibration = trialCount > 0 ? `${compact ? '' : calibrationText(result)}${hidden} ` : '';
-      const refused = result.trialsNotUsed ? `${result.trialsNotUsed} ` : '';
-      const estimates = `${refused}${compact ? COMPACT_NOTE : estimatesNote(result)}`;
-      return paragraph({ x, y, widthMm, text: `${calibration}${estimates}`.trim(), sizePt: type.small, role: 'estimates-note', where });
+      const refused = result.trialsNotUsed ? ` ${result.trialsNotUsed}` : '';
+      return paragraph({ x, y, widthMm, text: `${technicalNote(result, tolerances, { compact })}${refused}${trialCount > 0 ? hidden : ''}`, sizePt: type.small, role: 'technical-note', where });
     }),
-    cautionsFlow({ site, sizePt: type.body, headingPt: type.heading, where }),
   ];
   // The chart gives up height when the tables, sea trials and notes need it (its figures are in the tables
   // too), down to CHART_MIN_MM, while the gaps between parts close from GAP_MM to TIGHT_GAP_MM; then older
@@ -156,7 +159,7 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
     content: pages[0].nodes,
     more: pages.slice(1).map((p) => ({ frame: p.frame, content: p.nodes })),
     title: `${boat.name}: spec sheet`,
-    description: `Spec sheet for ${boat.name}: ${wotHeadline(result, unit)}; cruise table, every impeller of ${boat.jet.label}, and cautions.`,
+    description: `Spec sheet for ${boat.name}: ${buyerAnswer(result, site.speedUnit).headline}; ${wotHeadline(result, unit)}; cruising, every impeller of ${boat.jet.label}, and cautions.`,
     subject: 'Boat spec sheet',
     keywords: ['spec sheet', boat.id, boat.engineFamilyId, boat.jetId],
     dateIso: ctx.dateIso,

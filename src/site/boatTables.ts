@@ -77,7 +77,7 @@ export function alternativesTable(args: BoatTableArgs): TableView {
     }),
     note: cal
       ? `Low and high: the ends of the calibrated band. ${r.calibrated!.bandNote} Data-sheet figures: the model from the published ratings, before the sea trials. ${r.conditions.waterKind} water, site ${r.conditions.siteLabel}.`
-      : `Low and high: the tolerance corners of impeller rating and engine power; ${r.conditions.waterKind} water, site ${r.conditions.siteLabel}.`,
+      : `Low and high: the tolerance corners of impeller rating (± ${args.boat.jet.family.tolerancePct} %) and engine power (± ${args.boat.engine.powerTolerancePct} %); ${r.conditions.waterKind} water, site ${r.conditions.siteLabel}.`,
   };
 }
 

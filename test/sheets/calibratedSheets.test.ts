@@ -49,26 +49,35 @@ describe('boat sheets of a boat with sea trials', () => {
   const result = analyseBoat({ boat: b, project: ctxFor(b).project });
   const cal = result.calibrated!;
 
-  it('headline the spec sheet with the calibrated WOT, the trial dates and the data-sheet figure beside it', () => {
+  it('leads the spec sheet with the calibrated top speed and WOT rpm, says whether the impeller suits the engine and names the trials', () => {
     const scene = sheet(b, 'specSheet', A4);
-    expect(textOf(scene, 'wot-headline')).toBe(
-      `Calibrated WOT ${rpmText(cal.wot.nominal.speedRpm)} rpm (band ${rpmBandText(cal.wot.low.speedRpm, cal.wot.high.speedRpm)}), ${Math.round(cal.wot.nominal.powerKw)} kW (${Math.round(cal.wot.nominal.powerKw / 0.7456998715822702)} hp): ${cal.wot.nominal.statusText}`,
-    );
-    const under = textOf(scene, 'wot-verdict');
-    expect(under).toContain('Calibrated to sea trials of 2026-06-02, 2026-06-09');
-    expect(under).toContain(`data-sheet model ${rpmText(result.wot.nominal.speedRpm)} rpm`);
-    expect(under).toContain('Calibrated bands cover');
+    const fitted = result.alternatives.find((a) => a.fitted === 'yes')!;
+    expect(textOf(scene, 'buyer-headline')).toBe(`Top speed about ${Math.round(fitted.calibratedTopSpeedKn!)} kn at full throttle, ${rpmText(cal.wot.nominal.speedRpm)} rpm`);
+    const answer = textOf(scene, 'buyer-answer');
+    expect(answer).toContain(`between ${rpmBandText(cal.wot.low.speedRpm, cal.wot.high.speedRpm)} (calibrated to sea trials of 2026-06-02, 2026-06-09)`);
+    // The statistics go to the technical note at the end, not the answer.
+    expect(answer).not.toMatch(/standard error|factor|±/);
+    const note = textOf(scene, 'technical-note');
+    expect(note).toMatch(/^Technical note\./);
+    expect(note).toContain('Calibrated bands cover');
+    expect(note).toContain('engine power factor');
     // The engine is 4 % down on its data sheet: calibration moves the fitted impeller's WOT below the data-sheet figure.
     expect(cal.wot.nominal.speedRpm).toBeLessThan(result.wot.nominal.speedRpm - 10);
   });
 
-  it('prints the alternatives on the calibrated model, the data-sheet rpm beside them and an "Across the band" column', () => {
+  it('prints every other impeller on the calibrated model in plain words against the fitted one', () => {
     const rows = tableRows(sheet(b, 'specSheet', A4), 'alternatives-table');
-    expect(rows[0]).toEqual(['Impeller', 'WOT band', 'Most likely', 'Data sheet', 'Power (kW)', 'Top (kn, est.)', 'Status', 'Across the band']);
+    expect(rows[0]).toEqual(['Impeller', 'Against the fitted one', 'Full throttle (rpm)', 'Top (kn, est.)']);
+    const fittedRpm = result.alternatives.find((a) => a.fitted === 'yes')!.calibratedBand!.nominal.speedRpm;
     for (const [i, a] of result.alternatives.entries()) {
-      expect(rows[i + 1][1]).toBe(rpmBandText(a.calibratedBand!.low.speedRpm, a.calibratedBand!.high.speedRpm));
-      expect(rows[i + 1][2]).toBe(rpmText(a.calibratedBand!.nominal.speedRpm));
-      expect(rows[i + 1][3]).toBe(rpmText(a.band.nominal.speedRpm));
+      const row = rows[i + 1];
+      expect(row[2]).toBe(rpmText(a.calibratedBand!.nominal.speedRpm));
+      if (a.fitted === 'yes') continue;
+      // Heavier impellers (higher rating) pull rpm down, lighter ones let it rise (cube law; DOMAIN.md).
+      const heavier = a.ratingKw > result.alternatives.find((x) => x.fitted === 'yes')!.ratingKw;
+      expect(row[1]).toMatch(heavier ? /steps? heavier: about \d+ rpm lower/ : /steps? lighter: about \d+ rpm higher/);
+      const said = Number(/about (\d+) rpm/.exec(row[1])![1]);
+      expect(Math.abs(said - Math.abs(a.calibratedBand!.nominal.speedRpm - fittedRpm))).toBeLessThanOrEqual(5);
     }
   });
 
@@ -131,7 +140,7 @@ describe('boat sheets of a boat without sea trials', () => {
     const scene = sheet(boat, kind, paper);
     const all = textOf(scene);
     expect(all).not.toMatch(/calibrated to|Calibrated WOT|Calibrated bands|data-sheet model|Data sheet|Measured \d+ rpm on/);
-    if (kind === 'specSheet') expect(textOf(scene, 'wot-headline')).toMatch(/^Predicted WOT /);
+    if (kind === 'specSheet') expect(textOf(scene, 'buyer-headline')).toMatch(/^Top speed about \d+ kn at full throttle, \d+ rpm$/);
   });
 });
 
@@ -173,7 +182,7 @@ describe('sea trials the calibration refuses', () => {
     const result = analyseBoat({ boat: b, project: { ...project, boats: [b] } as Project });
     expect(result.calibrated).toBeUndefined();
     expect(result.trialsNotUsed).toMatch(/sea trials were not used/);
-    const words = textOf(sheet(b, 'specSheet', A4), 'estimates-note');
+    const words = textOf(sheet(b, 'specSheet', A4), 'technical-note');
     expect(words).toMatch(/sea trials were not used/);
     expect(words).toMatch(/qualified marine/);
   });

@@ -10,7 +10,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { Paper, Project, SheetRequest } from '../../src/data/types.ts';
 import { scenePages, type Scene } from '../../src/scene/types.ts';
-import { defaultWallCharts } from '../../src/analysis/index.ts';
+import { analyseBoat, defaultWallCharts } from '../../src/analysis/index.ts';
 import { BOAT_SHEET_PAPERS, BUILT_IN_CAUTIONS, cautionsFor, sheetScene, WALL_CHART_PAPERS } from '../../src/sheets/index.ts';
 import { CONTINUING_CAUTION } from '../../src/sheets/kit/cautions.ts';
 import { demoProject } from './fixtures/boatVariation.ts';
@@ -43,7 +43,11 @@ function sheetWords(scene: Scene, role?: string): string {
 function mustPrint(kind: Kind, project: Project): string[] {
   const boat = project.boats[0];
   const name = [boat.name];
-  if (kind === 'consoleCard') return [...name, ...boat.cruise.map((c) => c.label)];
+  // A card lists cruise rpm: a speed setting below planing speed has none (no speed model there), so it is left off.
+  if (kind === 'consoleCard') {
+    const result = analyseBoat({ boat, project });
+    return [...name, ...(result.calibrated?.cruise ?? result.cruise).filter((c) => c.status !== 'belowPlaning').map((c) => c.label)];
+  }
   if (kind === 'upgradeSheet') return [...name, boat.engine.label, boat.jet.label];
   return [...name, boat.engine.label, boat.jet.label, ...boat.jet.impellers.map((i) => i.label), ...boat.cruise.map((c) => c.label)];
 }

@@ -3,11 +3,13 @@ import type { Paper, SheetRequest } from '../../src/data/types.ts';
 import { defaultWallCharts, boatInstallation } from '../../src/analysis/index.ts';
 import { solveInstallation } from '../../src/model/index.ts';
 import { renderSvg } from '../../src/render/index.ts';
-import { LayoutError, sheetScene, sheetSlug } from '../../src/sheets/index.ts';
+import { sheetScene, sheetSlug } from '../../src/sheets/index.ts';
 import { boxesOverlap, boxInside } from '../../src/sheets/kit/boxes.ts';
 import { MIN_STROKE_MM } from '../../src/sheets/kit/style.ts';
 import { boat, family, jet, project } from './fixtures/demoProject.ts';
 import { leaves, markBox, scaleFromTicks, texts } from './sceneWalk.ts';
+import { sceneProblems } from './sceneChecks.ts';
+import { scenePages } from '../../src/scene/types.ts';
 
 const ctx = { project, dateIso: '2026-11-02' };
 const A4: Paper = { size: 'A4', orientation: 'portrait', bleedMm: 0 };
@@ -73,8 +75,11 @@ describe('boat sheets', () => {
     expect(Math.abs(box.y + box.height / 2 - scaleFromTicks(scene, 'left')(p.powerKw))).toBeLessThan(0.1);
   });
 
-  it('refuses a spec sheet on an A6 card with a LayoutError instead of clipping', () => {
-    expect(() => sheetScene({ kind: 'specSheet', boatId: boat.id, paper: { size: 'A6', orientation: 'portrait', bleedMm: 0 } }, ctx)).toThrow(LayoutError);
+  it('flows a spec sheet onto more A6 pages within the print rules instead of clipping', () => {
+    const paper: Paper = { size: 'A6', orientation: 'portrait', bleedMm: 0 };
+    const scene = sheetScene({ kind: 'specSheet', boatId: boat.id, paper }, ctx);
+    expect(scenePages(scene).length).toBeGreaterThan(1);
+    for (const page of scenePages(scene)) expect(sceneProblems(page, paper)).toEqual([]);
   });
 
   it('puts crop marks outside the trim only when the sheet has bleed', () => {

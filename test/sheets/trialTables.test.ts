@@ -40,8 +40,8 @@ describe('spec sheet of a boat with sea trials', () => {
     expect(listed.length).toBeLessThanOrEqual(Math.min(n, MAX_TRIAL_ROWS));
     expect(listed).toEqual(b.trials.slice(n - listed.length).map((t) => t.date));
     if (listed.length < n) expect(text).toContain(`${n - listed.length} older trial(s) not listed.`);
-    expect(text).toMatch(/Calibrated to the sea trials of 2026-04-10/);
-    expect(text).toMatch(/Hull constant 165 calibrated/);
+    expect(text).toMatch(/Calibrated\sto\sthe\ssea\strials\sof\s2026-04-10/);
+    expect(text).toMatch(/Hull\sconstant\s165\scalibrated/);
     expect(text).not.toMatch(/NaN|Infinity|undefined|null/);
     const boxes = all.map((t) => markBox(t)!);
     for (let i = 0; i < boxes.length; i++) for (let j = i + 1; j < boxes.length; j++) expect(boxesOverlap(boxes[i], boxes[j], -0.01), `${all[i].text} / ${all[j].text}`).toBe(false);
