@@ -69,10 +69,10 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
   const result = analyseBoat({ boat, project: ctx.project });
   const type = typeScale(request.paper);
   const frameArgs = { paper: request.paper, site, title: boat.name, subtitle: `${boat.engine.label} · ${boat.jet.label} · impeller ${result.impellerLabel}`, dateIso: ctx.dateIso, type, where };
-  const frame = sheetFrame({ ...frameArgs, titleSuffix: ': spec sheet' });
+  const frame = sheetFrame({ ...frameArgs, kind: 'specSheet' });
   // A sheet that continues carries the built-in cautions at the foot of every page (the full block is on one).
-  const firstOfMany = sheetFrame({ ...frameArgs, titleSuffix: ': spec sheet', cautionLine: CONTINUING_CAUTION });
-  const continuedFrame = (n: number) => sheetFrame({ ...frameArgs, shop: false, cautionLine: CONTINUING_CAUTION, titleSuffix: `: spec sheet, page ${n + 1}` });
+  const firstOfMany = sheetFrame({ ...frameArgs, kind: 'specSheet', pageNote: 'page 1', cautionLine: CONTINUING_CAUTION });
+  const continuedFrame = (n: number) => sheetFrame({ ...frameArgs, kind: 'specSheet', pageNote: `page ${n + 1}`, cautionLine: CONTINUING_CAUTION });
   const box = frame.contentBox;
   const shownWot = result.calibrated?.wot ?? result.wot;
   const warn = isWarning(shownWot.nominal.status);

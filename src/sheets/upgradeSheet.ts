@@ -50,10 +50,10 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
   const result = analyseBoat({ boat, project: ctx.project });
   const type = typeScale(request.paper);
   const frameArgs = { paper: request.paper, site, title: boat.name, subtitle: `${boat.engine.label} · ${boat.jet.label} · impeller ${result.impellerLabel} kept`, dateIso: ctx.dateIso, type, where };
-  const frame = sheetFrame({ ...frameArgs, titleSuffix: ': engine upgrade' });
+  const frame = sheetFrame({ ...frameArgs, kind: 'upgradeSheet' });
   // A sheet that continues carries the built-in cautions at the foot of every page (the full block is on one).
-  const firstOfMany = sheetFrame({ ...frameArgs, titleSuffix: ': engine upgrade', cautionLine: CONTINUING_CAUTION });
-  const continuedFrame = (n: number) => sheetFrame({ ...frameArgs, shop: false, cautionLine: CONTINUING_CAUTION, titleSuffix: `: engine upgrade, page ${n + 1}` });
+  const firstOfMany = sheetFrame({ ...frameArgs, kind: 'upgradeSheet', pageNote: 'page 1', cautionLine: CONTINUING_CAUTION });
+  const continuedFrame = (n: number) => sheetFrame({ ...frameArgs, kind: 'upgradeSheet', pageNote: `page ${n + 1}`, cautionLine: CONTINUING_CAUTION });
   const box = frame.contentBox;
   const common = { sizePt: type.body, minSizePt: type.min, headingPt: type.heading, where };
   const speedUnit = site.speedUnit;

@@ -152,8 +152,9 @@ export function wallChartScene(request: WallChartRequest, ctx: SheetContext): Sc
       return sheetFrame({
         paper: request.paper,
         site,
+        kind: 'wallChart',
         title,
-        ...(pages > 1 ? { titleSuffix: `: page ${i + 1} of ${pages}` } : {}),
+        ...(pages > 1 ? { pageNote: `page ${i + 1} of ${pages}` } : {}),
         subtitle: pages > 1 ? `Impeller ladder for ${names}${rows} · ${subtitleEnd}` : `Impeller ladder: which impeller puts each engine variant in its WOT window · ${subtitleEnd}`,
         dateIso: ctx.dateIso,
         type,

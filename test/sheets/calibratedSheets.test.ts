@@ -4,7 +4,7 @@ import type { Boat, Paper, Project, SheetRequest } from '../../src/data/types.ts
 import { solveInstallation, type MatchStatus } from '../../src/model/index.ts';
 import type { Scene, SceneNode, TextNode } from '../../src/scene/types.ts';
 import { sheetScene } from '../../src/sheets/index.ts';
-import { cardWarning } from '../../src/sheets/consoleCard.ts';
+import { CARD_FIGURE_PT, cardWarning } from '../../src/sheets/consoleCard.ts';
 import { rpmBandText, rpmText } from '../../src/sheets/kit/format.ts';
 import { RESIDUAL_HEADER } from '../../src/sheets/trialTables.ts';
 import { TARGET_WORDS } from '../../src/sheets/upgradeSheet.ts';
@@ -110,7 +110,13 @@ describe('boat sheets of a boat with sea trials', () => {
     // The line naming the trials gives way first on a full card; the measured line keeps its date.
     const calibrationLine = textOf(scene, 'wot-calibration');
     if (calibrationLine !== '') expect(calibrationLine).toBe('Range calibrated to sea trials of 2026-06-02, 2026-06-09.');
-    expect(textOf(scene, 'table-cell')).toContain(`${rpmText(cal.cruise[0].speedRpm!)} rpm`);
+    expect(textOf(scene, 'cruise-rpm')).toContain(`${rpmText(cal.cruise[0].speedRpm!)} rpm`);
+    // What the owner reads at the helm is large: the most likely rpm, the rpm never to pass, each cruise rpm.
+    const figures = texts(scene).filter((t) => ['wot-likely', 'wot-never-above', 'cruise-rpm'].includes(t.role ?? ''));
+    expect(figures.map((t) => t.role)).toEqual(expect.arrayContaining(['wot-likely', 'wot-never-above', 'cruise-rpm']));
+    for (const t of figures) expect(t.sizePt, t.text).toBeGreaterThanOrEqual(CARD_FIGURE_PT);
+    expect(textOf(scene, 'wot-likely')).toBe(`${rpmText(cal.wot.nominal.speedRpm)} rpm`);
+    expect(textOf(scene, 'wot-never-above')).toBe(`${rpmText(b.engine.limits.maxRpm)} rpm`);
   });
 
   it('rests the upgrade sheet on the calibrated model and marks rpm targets above the window', () => {

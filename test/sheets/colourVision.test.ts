@@ -69,7 +69,7 @@ const requests: [string, SheetRequest][] = [
 ];
 
 /** Roles that may use the warning colour: the reserved marks and warning words. */
-const WARNING_ROLES = new Set(['warning-box', 'operating-point', 'legend-marker', 'cautions-bar', 'leader']);
+const WARNING_ROLES = new Set(['warning-box', 'operating-point', 'legend-marker', 'cautions-bar', 'caution-bar', 'warning-bar', 'leader']);
 
 const paints = (n: SceneNode): Colour[] => (n.type === 'group' ? [] : n.type === 'text' ? [n.colour] : [n.stroke?.colour, n.fill?.colour].filter((c): c is Colour => Boolean(c)));
 
@@ -128,6 +128,45 @@ describe('the series palette', () => {
       const [a, b] = [SERIES_COLOURS[i], SERIES_COLOURS[(i + 1) % n]];
       expect(Math.abs(greyL(a) - greyL(b)), `${a} / ${b}`).toBeGreaterThanOrEqual(10);
       expect(deltaE(lab(deut(linear(a))), lab(deut(linear(b)))), `${a} / ${b}`).toBeGreaterThanOrEqual(12);
+    }
+  });
+});
+
+describe("the console card's warning at the helm", () => {
+  // Each impeller of the demo jet fitted in turn: those whose fit warns print the warning in bold black
+  // beside a bar of the warning colour, so the words keep their contrast in grey and any colour vision.
+  const cards = boat.jet.impellers.map((imp) => {
+    const fitted = { ...boat, impellerId: imp.id };
+    const scene = sheetScene({ kind: 'consoleCard', boatId: boat.id, paper: { size: 'A6', orientation: 'landscape', bleedMm: 0 } }, { project: { ...project, boats: [fitted] }, dateIso: '2026-11-02' });
+    return { id: imp.id, all: leaves(scene) };
+  });
+  const warned = cards.filter((c) => c.all.some((n) => n.role === 'wot-warning'));
+
+  it('is raised for an impeller whose range leaves the window, and not when the range sits inside it', () => {
+    expect(warned.map((c) => c.id)).toEqual(['a', 'b', 'c', 'd', 'e']);
+    // The same boat with a window wide enough for impeller b's whole range (about 4750–5080 rpm): no warning, no bar.
+    const wide = { ...boat, engine: { ...boat.engine, limits: { ...boat.engine.limits, windowLowRpm: 4600, windowHighRpm: 5300, maxRpm: 5600 } } };
+    const calm = leaves(sheetScene({ kind: 'consoleCard', boatId: boat.id, paper: { size: 'A6', orientation: 'landscape', bleedMm: 0 } }, { project: { ...project, boats: [wide] }, dateIso: '2026-11-02' }));
+    expect(calm.some((n) => n.role === 'wot-warning' || n.role === 'warning-bar')).toBe(false);
+  });
+
+  it('is bold black words (at least 4.5:1 on white in grey and under deuteranopia) beside a warning bar as tall as they are', () => {
+    for (const { id, all } of warned) {
+      const words = all.filter((n) => n.type === 'text' && n.role === 'wot-warning');
+      const bar = all.find((n) => n.type === 'rect' && n.role === 'warning-bar');
+      expect(bar, id).toBeDefined();
+      for (const w of words) {
+        if (w.type !== 'text') continue;
+        expect(w.weight).toBe('bold');
+        expect(contrast(luminance(linear(w.colour)), 1), id).toBeGreaterThanOrEqual(4.5);
+        expect(contrast(luminance(deut(linear(w.colour))), 1), id).toBeGreaterThanOrEqual(4.5);
+        if (bar?.type === 'rect') {
+          expect(bar.fill?.colour).toBe(WARN);
+          expect(w.x).toBeGreaterThan(bar.x + bar.width);
+          expect(w.y).toBeGreaterThan(bar.y);
+          expect(w.y).toBeLessThan(bar.y + bar.height);
+        }
+      }
     }
   });
 });

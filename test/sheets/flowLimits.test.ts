@@ -100,7 +100,8 @@ describe('a sheet that does not fit one page', () => {
     const scene = sheetScene({ kind: 'specSheet', boatId: project.boats[0].id, paper }, { project, dateIso: '2026-12-03' });
     const pages = scenePages(scene);
     expect(pages.length).toBeGreaterThan(1);
-    expect(texts(pages[1]).find((t) => t.role === 'sheet-title')?.text).toMatch(/: spec sheet, page 2$/);
+    expect(texts(pages[0]).find((t) => t.role === 'sheet-kind')?.text).toBe('SPEC SHEET · page 1');
+    expect(texts(pages[1]).find((t) => t.role === 'sheet-kind')?.text).toBe('SPEC SHEET · page 2');
     expect(pages[1].title).toBe(`${project.boats[0].name}: spec sheet, page 2 of ${pages.length}`);
     // The one-page demo sheet stays one page.
     expect(scenePages(sheetScene({ kind: 'specSheet', boatId: demo.boats[0].id, paper }, { project: demo, dateIso: '2026-12-03' })).length).toBe(1);
@@ -191,8 +192,8 @@ describe('wall chart at the limits', () => {
     const request = { ...defaultWallCharts(project).find((r) => r.kind === 'wallChart' && r.engineFamilyId === family.id && r.jetId === boat.jet.id)!, paper } as SheetRequest;
     const pages = scenePages(sheetScene(request, { project, dateIso: '2026-12-03' }));
     expect(pages.length).toBe(2);
-    expect(texts(pages[0]).find((t) => t.role === 'sheet-title')?.text).toMatch(/: page 1 of 2$/);
-    expect(texts(pages[1]).find((t) => t.role === 'sheet-title')?.text).toMatch(/: page 2 of 2$/);
+    expect(texts(pages[0]).find((t) => t.role === 'sheet-kind')?.text).toBe('WALL CHART · page 1 of 2');
+    expect(texts(pages[1]).find((t) => t.role === 'sheet-kind')?.text).toBe('WALL CHART · page 2 of 2');
     // Three variants a page, in the family's order; each page's subtitle names its own.
     const headingsOf = (i: number) => texts(pages[i]).filter((t) => t.role === 'ladder-rpm').map((t) => t.key!.split('|engine:')[1]);
     expect([...new Set(headingsOf(0))]).toEqual(family.variants.slice(0, 3).map((v) => v.variantId));

@@ -6,6 +6,7 @@ import { renderSvg } from '../../src/render/index.ts';
 import { sheetScene, sheetSlug } from '../../src/sheets/index.ts';
 import { boxesOverlap, boxInside } from '../../src/sheets/kit/boxes.ts';
 import { MIN_STROKE_MM } from '../../src/sheets/kit/style.ts';
+import { ESTIMATES_LINE, SHEET_KIND_NAMES } from '../../src/sheets/kit/frame.ts';
 import { boat, family, jet, project } from './fixtures/demoProject.ts';
 import { leaves, markBox, scaleFromTicks, texts } from './sceneWalk.ts';
 import { sceneProblems } from './sceneChecks.ts';
@@ -53,9 +54,15 @@ describe.each(requests.map((r) => [name(r), r] as const))('sheetScene() for %s',
   it('prints no NaN, Infinity or undefined, dates from the context, and the cautions', () => {
     const all = texts(scene).map((t) => t.text).join('\n');
     expect(all).not.toMatch(/NaN|Infinity|undefined|null/);
-    expect(all).toContain('Issued 2026-11-02');
-    expect(all).toContain('Data revision 2026-11 rev 3');
-    expect(texts(scene).filter((t) => t.role === 'caution').map((t) => t.text).join(' ')).toContain("maker's maximum rpm");
+    const revision = texts(scene).filter((t) => t.role === 'revision-line').map((t) => t.text);
+    expect(revision.length).toBeGreaterThan(0);
+    for (const line of revision) expect(['Data revision 2026-11 rev 3 · issued 2026-11-02', 'Rev. 2026-11 rev 3 · 2026-11-02']).toContain(line);
+    expect(texts(scene).filter((t) => t.role === 'estimates-line').map((t) => t.text)).toContain(ESTIMATES_LINE);
+    // Every page carries the cautions: the block, or on the front of a two-sided card its one-line form.
+    for (const page of scenePages(scene)) {
+      const cautions = texts(page).filter((t) => t.role === 'caution' || t.role === 'caution-line').map((t) => t.text).join(' ');
+      expect(cautions).toMatch(/maker's maximum rpm/);
+    }
   });
 
   it('matches the SVG file snapshot', async () => {
@@ -64,6 +71,42 @@ describe.each(requests.map((r) => [name(r), r] as const))('sheetScene() for %s',
 });
 
 // The wall chart's own checks (panels, shared scales, points, windows, table) are in wallChart.test.ts.
+
+describe('one title block on every sheet kind', () => {
+  const kindOf = (r: SheetRequest) => SHEET_KIND_NAMES[r.kind].toUpperCase();
+  it.each(requests.map((r) => [name(r), r] as const))('%s: kind line, revision, title, subtitle and shop in the same places and weights', (_n, request) => {
+    const scene = sheetScene(request, ctx);
+    const pages = scenePages(scene);
+    for (const [i, page] of pages.entries()) {
+      const t = texts(page);
+      const one = (role: string) => {
+        const found = t.filter((n) => n.role === role);
+        expect(found.length, `${role} on page ${i + 1}`).toBe(1);
+        return found[0];
+      };
+      const kind = one('sheet-kind');
+      const revision = one('revision-line');
+      const title = one('sheet-title');
+      const subtitle = t.filter((n) => n.role === 'sheet-subtitle')[0];
+      const shop = t.filter((n) => n.role === 'shop-name')[0];
+      // The kind names the sheet, with its page when it has more than one.
+      expect(kind.text).toBe(pages.length === 1 ? kindOf(request) : request.kind === 'wallChart' ? `${kindOf(request)} · page ${i + 1} of ${pages.length}` : `${kindOf(request)} · page ${i + 1}`);
+      expect(kind.weight).toBe('bold');
+      expect(revision.weight).toBe('regular');
+      expect(kind.sizePt).toBe(revision.sizePt);
+      // Top to bottom: kind line (revision beside it or under it), title, subtitle; the shop at the title's right or under the subtitle.
+      expect(revision.y).toBeGreaterThanOrEqual(kind.y - 1e-6);
+      expect(title.y).toBeGreaterThan(revision.y);
+      expect(subtitle.y).toBeGreaterThan(title.y);
+      expect(title.weight).toBe('bold');
+      expect(title.sizePt).toBeGreaterThan(subtitle.sizePt);
+      expect(shop.text.startsWith(project.site.shopName)).toBe(true);
+      expect(shop.y).toBeGreaterThanOrEqual(title.y - title.sizePt * 0.3528);
+      expect(one('estimates-line').text).toBe(ESTIMATES_LINE);
+      expect(kind.x).toBeCloseTo(title.x, 6);
+    }
+  });
+});
 
 describe('boat sheets', () => {
   it('marks the fitted WOT point where the model puts it on the spec sheet', () => {

@@ -24,6 +24,13 @@ export const CONTINUING_CAUTION =
   "Cautions: estimates only, confirm them by a sea trial. Never run the engine past its maker's maximum rpm. Impeller and engine work belong to a qualified marine technician following the makers' instructions and local regulations. Every caution, the shop's too, is under Cautions on the last page.";
 
 /**
+ * The built-in cautions in one short line, for the front of a two-sided console card: the full block,
+ * the shop's cautions too, is on the back.
+ */
+export const CARD_CAUTION_LINE =
+  "Estimates only: confirm by a sea trial. Never past the maker's maximum rpm. Impeller and engine work: a qualified marine technician, per the makers' instructions and local regulations. All cautions on the back.";
+
+/**
  * The cautions a sheet or page prints: the built-in ones, then the shop's extra ones in their order
  * (an extra caution that repeats a built-in one word for word is printed once).
  */

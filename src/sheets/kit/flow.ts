@@ -21,14 +21,17 @@ export interface Flowable {
    * when not even its first piece fits.
    */
   readonly split?: (at: { x: number; y: number; widthMm: number }, maxHeightMm: number) => { head: Block; rest: Flowable } | undefined;
-  /** Start this part at the top of a new slot (the advice column of a landscape card). */
-  readonly breakBefore?: boolean;
+  /**
+   * Start this part at the top of a new slot (true: the advice column of a landscape card), or 'back':
+   * anywhere but on the first page (the checks on the back of a two-sided card).
+   */
+  readonly breakBefore?: boolean | 'back';
   /** Move whole to the next slot rather than split, when it fits there whole (tables). */
   readonly keepTogether?: boolean;
 }
 
 /** A part that never splits. */
-export const whole = (layout: Part, breakBefore = false): Flowable => ({ layout, breakBefore });
+export const whole = (layout: Part, breakBefore: boolean | 'back' = false): Flowable => ({ layout, breakBefore });
 
 export interface FlowedSlot {
   readonly nodes: SceneNode[];
@@ -36,10 +39,11 @@ export interface FlowedSlot {
 }
 
 /**
- * Lays the parts into slots; slot(i) gives the i-th slot's box (page = i div columns). Returns what went
- * into each slot used, in order.
+ * Lays the parts into slots; slot(i) gives the i-th slot's box (page = i div columns, 1 column unless
+ * given). Returns what went into each slot used, in order.
  */
-export function flow(args: { slot: (index: number) => Box; gapMm: number; parts: readonly Flowable[]; where: string; maxSlots?: number }): FlowedSlot[] {
+export function flow(args: { slot: (index: number) => Box; gapMm: number; parts: readonly Flowable[]; where: string; maxSlots?: number; columns?: number }): FlowedSlot[] {
+  const columns = args.columns ?? 1;
   const maxSlots = args.maxSlots ?? 16;
   const slots: { nodes: SceneNode[]; bottomMm: number; empty: boolean }[] = [];
   let index = 0;
@@ -56,7 +60,9 @@ export function flow(args: { slot: (index: number) => Box; gapMm: number; parts:
   };
   for (const original of args.parts) {
     let part: Flowable = original;
-    if (part.breakBefore && !open().slot.empty) next();
+    if (part.breakBefore === 'back') {
+      while (index < columns) next();
+    } else if (part.breakBefore && !open().slot.empty) next();
     for (;;) {
       const { box, slot } = open();
       const y = slot.empty ? box.y : slot.bottomMm + args.gapMm;
@@ -130,7 +136,7 @@ export function flowPages(args: { frame: (page: number) => SheetFrame; columns?:
     const width = (box.width - gap * (columns - 1)) / columns;
     return { x: box.x + (i % columns) * (width + gap), y: box.y, width, height: box.height };
   };
-  const slots = flow({ slot, gapMm: args.gapMm, parts: args.parts, where: args.where });
+  const slots = flow({ slot, gapMm: args.gapMm, parts: args.parts, where: args.where, columns });
   const pages = Math.ceil(slots.length / columns);
   return Array.from({ length: pages }, (_, p) => {
     const mine = slots.slice(p * columns, (p + 1) * columns);

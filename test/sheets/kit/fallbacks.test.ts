@@ -50,11 +50,12 @@ describe('sheetFrame() with a long boat name', () => {
   const paper: Paper = { size: 'A6', orientation: 'portrait', bleedMm: 0 };
   const name = 'Whitewater Expedition Kestrel Harbour runner, fully loaded';
 
-  it('shortens the name with an ellipsis, keeps the suffix, and prints the full name under the title', () => {
-    const frame = sheetFrame({ paper, site, title: name, titleSuffix: ': spec sheet', subtitle: 'Harrowgate 5.7 V8 380 hp sport tune · Tarnwell 212 jet unit · impeller K23', dateIso: '2026-11-02', type: typeScale(paper), where: 'spec sheet w' });
+  it('shortens the name with an ellipsis, names the sheet kind above it, and prints the full name under the title', () => {
+    const frame = sheetFrame({ paper, site, kind: 'specSheet', pageNote: 'page 2', title: name, subtitle: 'Harrowgate 5.7 V8 380 hp sport tune · Tarnwell 212 jet unit · impeller K23', dateIso: '2026-11-02', type: typeScale(paper), where: 'spec sheet w' });
     const texts = textsOf(frame.nodes);
     const title = texts.find((n) => n.role === 'sheet-title')!;
-    expect(title.text).toMatch(/^Whitewater .*…: spec sheet$/);
+    expect(title.text).toMatch(/^Whitewater .*…$/);
+    expect(texts.find((n) => n.role === 'sheet-kind')?.text).toBe('SPEC SHEET · page 2');
     expect(texts.filter((n) => n.role === 'full-name-note').map((n) => n.text).join(' ')).toBe(`Full name: ${name}`);
     // The subtitle wraps instead of failing, and nothing in the header overlaps.
     expect(texts.filter((n) => n.role === 'sheet-subtitle').length).toBeGreaterThan(1);
