@@ -70,8 +70,11 @@ export interface PdfOptions {
   readonly author?: string;
   /** YYYY-MM-DD; creation and modification date (midnight UTC). */
   readonly dateIso: string;
-  /** Bookmark titles, one per page; default: the scene titles when there is more than one page. */
-  readonly outline?: readonly string[];
+  /**
+   * Bookmark titles, one per page (undefined: no bookmark at that page, as on a sheet's further pages);
+   * default: the scene titles when there is more than one page.
+   */
+  readonly outline?: readonly (string | undefined)[];
 }
 
 /** The characters each weight draws (as printed: printableText), for the subset tags. */

@@ -2,13 +2,19 @@
 import { PDFHexString, PDFName } from 'pdf-lib';
 import type { PDFDocument, PDFRef } from 'pdf-lib';
 
-/** Adds a flat outline whose i-th entry opens page i (whole page in view). */
-export function addOutline(doc: PDFDocument, titles: readonly string[]): void {
-  const pages = doc.getPages();
-  if (titles.length !== pages.length) {
-    throw new RangeError(`the outline has ${titles.length} titles for ${pages.length} pages; give one title per page`);
+/**
+ * Adds a flat outline: byPage[i], when given, is a bookmark that opens page i (whole page in view); a
+ * page whose entry is undefined gets none (a sheet's further pages).
+ */
+export function addOutline(doc: PDFDocument, byPage: readonly (string | undefined)[]): void {
+  const allPages = doc.getPages();
+  if (byPage.length !== allPages.length) {
+    throw new RangeError(`the outline has ${byPage.length} entries for ${allPages.length} pages; give one entry per page`);
   }
-  if (titles.length === 0) return;
+  const marked = byPage.flatMap((title, i) => (title === undefined ? [] : [{ title, page: allPages[i] }]));
+  if (marked.length === 0) return;
+  const titles = marked.map((m) => m.title);
+  const pages = marked.map((m) => m.page);
   const { context } = doc;
   const outlineRef = context.nextRef();
   const itemRefs: PDFRef[] = titles.map(() => context.nextRef());

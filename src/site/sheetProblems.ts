@@ -10,7 +10,9 @@ import { lfLineBreaks } from '../data/lineBreaks.ts';
 import { dataError, fieldName } from '../data/errors.ts';
 import type { DataError, Project, SheetRequest } from '../data/types.ts';
 import { parseYaml, type PathSegment, type YamlSource } from '../data/yamlSource.ts';
+import type { Scene } from '../scene/types.ts';
 import { sheetScene } from '../sheets/index.ts';
+import { bookPages } from './bookPages.ts';
 import { isUserFixable, type SheetDrawError } from './errors.ts';
 import { planSheets, type SheetPlan } from './planSheets.ts';
 
@@ -31,12 +33,26 @@ export function layoutProblems(project: Project, opts: SheetProblemOptions & { d
   const plan = opts.plan ?? planSheets(project);
   const place = placeFinder(opts.readText);
   const problems: DataError[] = [];
+  const scenes = new Map<string, Scene>();
   for (const { slug, request } of plan.sheets) {
     try {
-      sheetScene(request, { project, dateIso: opts.dateIso });
+      scenes.set(slug, sheetScene(request, { project, dateIso: opts.dateIso }));
     } catch (error) {
       if (!isUserFixable(error)) throw error;
       problems.push(sheetProblem({ project, plan, slug, request, cause: error, place }));
+    }
+  }
+  // Each book's contents page and numbered pages, laid out as the build lays them (when its sheets could be).
+  for (const book of project.books) {
+    const slugs = plan.byBook.get(book.id) ?? [];
+    if (slugs.length === 0 || !slugs.every((s) => scenes.has(s))) continue;
+    const firstPaper = plan.sheets.find((p) => p.slug === slugs[0])!.request.paper;
+    try {
+      bookPages({ book, project, scenes: slugs.map((s) => scenes.get(s)!), firstPaper, dateIso: opts.dateIso });
+    } catch (error) {
+      if (!isUserFixable(error)) throw error;
+      const at = place(book.source.file, ['title']);
+      problems.push(dataError({ file: book.source.file, ...at }, { field: fieldName(['title']), expected: "must give a book whose contents page fits its first sheet's paper", found: (error as Error).message }));
     }
   }
   return problems;

@@ -4,7 +4,8 @@
  * afterwards by Eleventy from the SiteData this returns.
  */
 import { join } from 'node:path';
-import type { Book, Project } from '../data/types.ts';
+import type { Book, Paper, Project } from '../data/types.ts';
+import { bookPages } from './bookPages.ts';
 import { renderPdf, type PdfOptions } from '../render/index.ts';
 import { FONT_FILES } from '../scene/fonts.ts';
 import { scenePages, type Scene } from '../scene/types.ts';
@@ -50,17 +51,18 @@ async function allSettled<T>(promises: readonly Promise<T>[]): Promise<T[]> {
   return results.map((r) => (r as PromiseFulfilledResult<T>).value);
 }
 
-/** One PDF for the whole book, a bookmark per sheet; reused while its scenes and title are unchanged. */
+/** One PDF for the whole book (see bookPages); reused while its scenes and title are unchanged. */
 async function bookPdf(args: {
   book: Book;
+  project: Project;
   scenes: readonly Scene[];
+  firstPaper: Paper;
   dateIso: string;
   cache?: BuildCache;
   renderer?: SheetRenderer;
 }): Promise<Uint8Array> {
   const { book } = args;
-  // A sheet that continues on further pages puts every page in the book.
-  const scenes = args.scenes.flatMap(scenePages);
+  const { pages: scenes, outline } = bookPages(args);
   const key = args.cache ? jsonHash({ title: book.title, audience: book.audience, scenes: scenes.map(sceneHash) }) : '';
   const cached = args.cache?.books.get(key);
   if (cached) return cached;
@@ -70,7 +72,7 @@ async function bookPdf(args: {
     keywords: ['waterjet', 'impeller', 'matching', book.audience],
     ...(scenes[0]?.author !== undefined ? { author: scenes[0].author } : {}),
     dateIso: args.dateIso,
-    outline: scenes.map((s) => s.title),
+    outline,
   };
   const pdf = args.renderer ? await args.renderer.renderBook(scenes, options) : await renderPdf(scenes, options);
   args.cache?.books.set(key, pdf);
@@ -89,7 +91,11 @@ export async function writeSiteFiles(args: SiteFilesArgs): Promise<{ site: SiteD
 
   // Books render side by side in the pool; files are written in book order.
   const books = project.books
-    .map((book) => ({ book, scenes: (plan.byBook.get(book.id) ?? []).map((slug) => bookScenes.get(slug) as Scene) }))
+    .map((book) => {
+      const slugs = plan.byBook.get(book.id) ?? [];
+      const first = plan.sheets.find((p) => p.slug === slugs[0]);
+      return { book, project, scenes: slugs.map((slug) => bookScenes.get(slug) as Scene), firstPaper: first?.request.paper ?? { size: 'A4', orientation: 'portrait', bleedMm: 0 } };
+    })
     .filter((b) => b.scenes.length > 0);
   const pdfs = await allSettled(
     books.map(async (b) => {

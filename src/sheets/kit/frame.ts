@@ -39,6 +39,7 @@ export const SHEET_KIND_NAMES = {
   specSheet: 'Spec sheet',
   upgradeSheet: 'Engine upgrade',
   consoleCard: 'Console card',
+  bookContents: 'Contents',
 } as const;
 export type SheetKindName = keyof typeof SHEET_KIND_NAMES;
 
