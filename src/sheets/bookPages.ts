@@ -8,7 +8,7 @@ import type { Scene, SceneNode, TextNode } from '../scene/types.ts';
 import { fitText, measureTextMm } from '../scene/text.ts';
 import { assembleScene } from './kit/assemble.ts';
 import { label, paragraph } from './kit/block.ts';
-import { cautionsFlow } from './kit/cautions.ts';
+import { CONTINUING_CAUTION, cautionsFlow } from './kit/cautions.ts';
 import { flowPages, splittable } from './kit/flow.ts';
 import { sheetFrame } from './kit/frame.ts';
 import { typeScale } from './kit/style.ts';
@@ -47,7 +47,8 @@ export function bookContentsScene(args: { title: string; audience: Audience; sit
     const totalPages = next - 1;
     const frameArgs = { paper, site, kind: 'bookContents' as const, title: args.title, subtitle: `${sheetCount} ${sheetCount === 1 ? 'sheet' : 'sheets'} on ${totalPages} pages, for ${AUDIENCE_WORDS[args.audience]}`, dateIso: args.dateIso, type, where };
     const laid = flowPages({
-      frame: (n) => sheetFrame({ ...frameArgs, ...(n > 0 || contentsPages > 1 ? { pageNote: `page ${n + 1}` } : {}) }),
+      // Contents over several pages carry the built-in cautions in one line at the foot of each (the block is on the last).
+      frame: (n) => sheetFrame({ ...frameArgs, ...(contentsPages > 1 ? { pageNote: `page ${n + 1}`, cautionLine: CONTINUING_CAUTION } : {}) }),
       gapMm: 4,
       parts: [
         splittable(rows.length, (from, to, { x, y, widthMm }) => table({ x, y, maxWidthMm: widthMm, columns: CONTENTS_COLUMNS, rows: rows.slice(from, to), measureRows: rows, firstRowIndex: from, noNote: to < rows.length, sizePt: type.body, minSizePt: type.min, fullWidth: true, role: 'contents-table', where }), 0, true),
@@ -59,7 +60,11 @@ export function bookContentsScene(args: { title: string; audience: Audience; sit
     return laid;
   };
   let pages = lay(1);
-  if (pages.length > 1) pages = lay(pages.length);
+  // More pages: lay out again numbered from after them, each with the caution line (which may take one more page).
+  for (let guess = pages.length; pages.length > 1 && guess <= 16; guess++) {
+    pages = lay(guess);
+    if (pages.length === guess) break;
+  }
   return assembleScene({
     frame: pages[0].frame,
     content: pages[0].nodes,

@@ -8,7 +8,7 @@
 import { cpSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { BUILT_IN_CAUTIONS } from '../../src/sheets/kit/cautions.ts';
+import { BUILT_IN_CAUTIONS, CARD_CAUTION_LINE, CONTINUING_CAUTION } from '../../src/sheets/kit/cautions.ts';
 import { checkLinks } from '../site/linkCheck.ts';
 import { matchbook } from './cli.ts';
 import { removeDir, tempDir } from './corpus.ts';
@@ -113,22 +113,38 @@ describe('cautions', () => {
     for (const page of pages) carries(page, visibleText(text(page)));
   });
 
+  // A page of a sheet that goes on over pages (the front of a two-sided console card, a spec sheet's
+  // further pages) may carry the built-in cautions in their one-line form instead, which makes every
+  // essential point; the whole sheet still carries them in full.
+  const shortForms = [CARD_CAUTION_LINE, CONTINUING_CAUTION];
+  const carriesOnPage = (where: string, body: string) => {
+    if (shortForms.some((line) => body.includes(folded(line)))) for (const e of essentials) expect(body, where).toMatch(e);
+    else carries(where, body);
+  };
+
   it('appear on every SVG sheet', () => {
     const sheets = of('.svg').filter((p) => p.startsWith('sheets/'));
     // 3 default wall charts (the pairings boats use), 3 sheets for each of 6 boats, and what the books add:
     // 1 wall chart under its own conditions (the books' other two are default charts), 1 spec sheet on
-    // Letter, 3 console cards on the 4x6 card.
-    expect(sheets.length).toBe(26);
-    for (const sheet of sheets) carries(sheet, visibleText(text(sheet)));
+    // Letter, 3 console cards on the 4x6 card; a sheet that goes on over pages has one file per page.
+    const firstPages = sheets.filter((p) => !/-page-\d+\.svg$/.test(p));
+    expect(firstPages.length).toBe(26);
+    for (const sheet of sheets) carriesOnPage(sheet, visibleText(text(sheet)));
+    for (const sheet of firstPages) {
+      const pages = sheets.filter((p) => p === sheet || p.startsWith(sheet.replace(/\.svg$/, '-page-')));
+      carries(`${sheet} with its pages`, pages.map((p) => visibleText(text(p))).join(' '));
+    }
   });
 
   it('appear on every page of every PDF, single sheets and books', () => {
     let pages = 0;
     for (const path of of('.pdf')) {
-      pdfPages(join(first, 'site/out', path)).forEach((page, i) => {
+      const all = pdfPages(join(first, 'site/out', path));
+      all.forEach((page, i) => {
         pages++;
-        carries(`${path} page ${i + 1}`, folded(page));
+        carriesOnPage(`${path} page ${i + 1}`, folded(page));
       });
+      carries(`${path}, all pages`, folded(all.join(' ')));
     }
     expect(pages).toBeGreaterThanOrEqual(26 + 15);
   });
