@@ -156,7 +156,7 @@ describe('renderPdf()', () => {
   });
 
   it('rejects an outline whose length differs from the page count', async () => {
-    await expect(renderPdf([TEXT_SCENE], { ...OPTIONS, outline: ['One', 'Two'] })).rejects.toThrow(/2 titles for 1 pages/);
+    await expect(renderPdf([TEXT_SCENE], { ...OPTIONS, outline: ['One', 'Two'] })).rejects.toThrow(/2 entries for 1 pages/);
   });
 });
 
