@@ -18,10 +18,38 @@ import { drawScene } from './pdfPage.ts';
 
 const PT_PER_MM = 72 / 25.4;
 
+/** The part of a fontkit font whose glyph cache withStableCodePoints guards. */
+interface GlyphSource {
+  getGlyph(id: number, codePoints?: number[]): { codePoints: number[] } | null;
+}
+
+/**
+ * fontkit keeps one glyph object per glyph id and stores in it the code points of the first call that
+ * asked for it. A TrueType subset asks for the components of a composite glyph with none (the curly
+ * quotes of Source Sans 3 are built from its apostrophe, the colon and ellipsis from its full stop), so
+ * on a shared font a document that drew "”" first would leave the apostrophe glyph with no characters,
+ * and every later document would lose the apostrophe from its ToUnicode table (text extraction, search
+ * and the file's bytes would depend on the order sheets were drawn in). Each call here gets its own
+ * view of the cached glyph (Object.create: every other property is the glyph's own) carrying the code
+ * points of that call, so what one document asked for never reaches another.
+ */
+export function withStableCodePoints<F extends GlyphSource>(font: F): F {
+  const cached = font.getGlyph.bind(font);
+  const view: F = Object.create(font);
+  Object.defineProperty(view, 'getGlyph', {
+    value: (id: number, codePoints: number[] = []) => {
+      const glyph = cached(id, codePoints);
+      return glyph && Object.create(glyph, { codePoints: { value: codePoints, enumerable: true } });
+    },
+  });
+  return view;
+}
+
 /**
  * pdf-lib asks fontkit to open the font for every document and shapes every string twice (width and
  * encoding). Opening each weight once and remembering its layouts makes a sheet's PDF several times
- * faster; each document still takes its own subset (createSubset is per embedder).
+ * faster; each document still takes its own subset (createSubset is per embedder), and its glyphs
+ * carry their own code points (withStableCodePoints).
  */
 const sharedFontkit = (() => {
   const opened = new Map<string, ReturnType<typeof fontkit.create>>();
@@ -30,7 +58,7 @@ const sharedFontkit = (() => {
       const key = createHash('sha256').update(data).digest('hex');
       let font = opened.get(key);
       if (!font) {
-        font = memoiseLayout(fontkit.create(data, postscriptName));
+        font = memoiseLayout(withStableCodePoints(fontkit.create(data, postscriptName)));
         opened.set(key, font);
       }
       return font;
