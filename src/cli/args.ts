@@ -3,6 +3,7 @@
  * option is a usage error (exit 2) that says what was found and what is accepted.
  */
 import { isIP } from 'node:net';
+import type { PrintOverride } from '../standards/paper.ts';
 
 export type CommandName = 'build' | 'check' | 'serve' | 'start';
 
@@ -18,19 +19,47 @@ export interface ParsedArgs {
   readonly portGiven: boolean;
   /** The address serve listens on: 127.0.0.1 (this machine only) unless --host says otherwise. */
   readonly host: string;
+  /** --bleed and --crop-marks / --no-crop-marks of build and check: they override every sheet's paper. */
+  readonly print: PrintOverride;
 }
 
 export class UsageError extends Error {}
 
 const COMMANDS: readonly CommandName[] = ['build', 'check', 'serve', 'start'];
 
-/** Options each command accepts (value-taking options only; --help is always accepted). */
+/** Options each command accepts that take a value (--help is always accepted). */
 const OPTIONS: Readonly<Record<CommandName, readonly string[]>> = {
-  build: ['--data', '--out'],
-  check: ['--data'],
+  build: ['--data', '--out', '--bleed'],
+  check: ['--data', '--bleed'],
   serve: ['--data', '--out', '--port', '--host'],
   start: ['--data'],
 };
+
+/** Options each command accepts that take no value. */
+const FLAGS: Readonly<Record<CommandName, readonly string[]>> = {
+  build: ['--crop-marks', '--no-crop-marks'],
+  check: ['--crop-marks', '--no-crop-marks'],
+  serve: [],
+  start: [],
+};
+
+const EXAMPLES: Readonly<Record<string, string>> = { '--port': '8080', '--host': '127.0.0.1', '--bleed': '3' };
+
+// Print shops commonly ask for 3 mm of bleed, some for 5 or 1/8 in (3.175 mm); 10 mm is far beyond any
+// of them (common practice, no source), so a larger figure is taken for a typing slip.
+const MAX_BLEED_MM = 10;
+
+/** --bleed in millimetres: a number from 0 (no bleed) to 10, with at most two decimals. */
+function parseBleed(text: string): number {
+  const bleedMm = /^\d{1,2}(\.\d{1,2})?$/.test(text) ? Number(text) : NaN;
+  if (!(bleedMm <= MAX_BLEED_MM)) {
+    throw new UsageError(
+      `--bleed must be the bleed in millimetres, a number from 0 (no bleed) to ${MAX_BLEED_MM}, for example --bleed 3 (the usual print-shop bleed), found "${text}"` +
+        (/^\d+(\.\d+)?\s*mm$/i.test(text) ? '; leave out the unit, millimetres are understood' : ''),
+    );
+  }
+  return bleedMm;
+}
 
 function isCommand(word: string | undefined): word is CommandName {
   return word !== undefined && (COMMANDS as readonly string[]).includes(word);
@@ -55,7 +84,7 @@ function parseHost(text: string): string {
 
 /** Parses argv (without node and script) into a command and its options. */
 export function parseArgs(argv: readonly string[]): ParsedArgs {
-  const defaults = { dataDir: 'data', outDir: 'out', port: 8080, portGiven: false, host: '127.0.0.1' };
+  const defaults = { dataDir: 'data', outDir: 'out', port: 8080, portGiven: false, host: '127.0.0.1', print: {} };
   const [first, ...rest] = argv;
   if (first === undefined || first === '--help' || first === '-h' || first === 'help') {
     const topic = first === 'help' ? rest[0] : undefined;
@@ -66,23 +95,36 @@ export function parseArgs(argv: readonly string[]): ParsedArgs {
     throw new UsageError(`unknown command "${first}"; expected one of ${COMMANDS.join(', ')}`);
   }
   const values = new Map<string, string>();
+  const flags = new Set<string>();
   for (let i = 0; i < rest.length; i += 1) {
     const word = rest[i];
     if (word === '--help' || word === '-h') return { command: 'help', helpFor: first, ...defaults };
+    if (FLAGS[first].includes(word)) {
+      flags.add(word);
+      continue;
+    }
     const eq = word.indexOf('=');
     const name = eq > 0 ? word.slice(0, eq) : word;
     if (!OPTIONS[first].includes(name)) {
+      const takesNoValue = FLAGS[first].includes(name) ? `; ${name} takes no value` : '';
       throw new UsageError(
-        `"${first}" does not take "${word}"; it accepts ${[...OPTIONS[first], '--help'].join(', ')}`,
+        `"${first}" does not take "${word}"${takesNoValue}; it accepts ${[...OPTIONS[first], ...FLAGS[first], '--help'].join(', ')}`,
       );
     }
     const value = eq > 0 ? word.slice(eq + 1) : rest[(i += 1)];
     if (value === undefined || value === '' || (eq < 0 && value.startsWith('--'))) {
-      const example = name === '--port' ? '8080' : name === '--host' ? '127.0.0.1' : 'DIR';
-      throw new UsageError(`${name} needs a value, for example ${name} ${example}`);
+      throw new UsageError(`${name} needs a value, for example ${name} ${EXAMPLES[name] ?? 'DIR'}`);
     }
     values.set(name, value);
   }
+  if (flags.has('--crop-marks') && flags.has('--no-crop-marks')) {
+    throw new UsageError('--crop-marks and --no-crop-marks contradict each other; give one of them');
+  }
+  const bleed = values.get('--bleed');
+  const print: PrintOverride = {
+    ...(bleed !== undefined ? { bleedMm: parseBleed(bleed) } : {}),
+    ...(flags.has('--crop-marks') ? { cropMarks: true } : flags.has('--no-crop-marks') ? { cropMarks: false } : {}),
+  };
   return {
     command: first,
     dataDir: values.get('--data') ?? defaults.dataDir,
@@ -90,5 +132,6 @@ export function parseArgs(argv: readonly string[]): ParsedArgs {
     port: values.has('--port') ? parsePort(values.get('--port') ?? '') : defaults.port,
     portGiven: values.has('--port'),
     host: values.has('--host') ? parseHost(values.get('--host') ?? '') : defaults.host,
+    print,
   };
 }

@@ -43,6 +43,7 @@ export async function runBuild(args: ParsedArgs, io: CliIo): Promise<number> {
       dataDir: args.dataDir,
       outDir: args.outDir,
       sourceDateEpoch: io.env.SOURCE_DATE_EPOCH,
+      print: args.print,
       onProgress: progressPrinter(io),
       fault: testFault(io.env.MATCHBOOK_TEST_FAULT),
     });

@@ -15,21 +15,30 @@ Run "matchbook <command> --help" for a command's options.
 Exit status: 0 done, 1 the data has problems, 2 the command was misused, 3 matchbook failed (a bug).
 `;
 
+const PRINT_OPTIONS = `
+For a print shop, these override the paper of every sheet and book (the books' own paper otherwise):
+  --bleed MM         bleed in millimetres beyond the trim, 0 to 10 (3 is usual; 0 for none)
+  --crop-marks       crop marks outside the bleed, also on sheets without bleed
+  --no-crop-marks    no crop marks, also on sheets with bleed
+Without --crop-marks or --no-crop-marks a sheet has crop marks exactly when it has bleed
+(a book file can say paper.crop_marks: true or false).
+`;
+
 const COMMANDS: Readonly<Record<CommandName, string>> = {
-  build: `Usage: matchbook build [--data DIR] [--out DIR]
+  build: `Usage: matchbook build [--data DIR] [--out DIR] [--bleed MM] [--crop-marks | --no-crop-marks]
 
 Checks the definitions in DIR (default: data), computes every match and writes the site, every
 sheet as SVG, PNG and PDF, every book as one PDF and the results as JSON into the output folder
 (default: out). The output folder is replaced only when the whole build succeeds.
 Set SOURCE_DATE_EPOCH to fix the date printed on the sheets.
-`,
-  check: `Usage: matchbook check [--data DIR]
+${PRINT_OPTIONS}`,
+  check: `Usage: matchbook check [--data DIR] [--bleed MM] [--crop-marks | --no-crop-marks]
 
 Checks the definitions in DIR (default: data) without writing anything: every field, every
 reference, the text the sheet font can print, and the layout of every sheet the build would draw.
 Lists every problem with its file, line, column and field; check OK means build OK.
 Exit status 1 when there is a problem.
-`,
+${PRINT_OPTIONS}`,
   serve: `Usage: matchbook serve [--data DIR] [--out DIR] [--port N] [--host ADDRESS]
 
 Builds the site into the output folder (default: out), serves it on http://127.0.0.1:N/ and

@@ -9,8 +9,9 @@ import {
   setStrokingGrayscaleColor, setStrokingRgbColor, showText, stroke,
 } from 'pdf-lib';
 import type { PDFFont, PDFPage } from 'pdf-lib';
+import { bleedBox } from '../scene/paper.ts';
 import { printableText } from '../scene/text.ts';
-import type { CircleNode, Colour, FontWeight, PathSegment, Scene, SceneNode, Stroke, Fill, TextNode } from '../scene/types.ts';
+import type { Box, CircleNode, Colour, FontWeight, PathSegment, Scene, SceneNode, Stroke, Fill, TextNode } from '../scene/types.ts';
 import { assertDrawable } from './errors.ts';
 
 const PT_PER_MM = 72 / 25.4;
@@ -153,17 +154,17 @@ function nodeOps(ctx: PageContext, node: SceneNode): PDFOperator[] {
 }
 
 /**
- * Sets the page boxes for the scene (TrimBox and BleedBox on every page: the trim is the media without
- * bleed) and writes its content stream, all of it one marked-content sequence (tag /Figure, MCID 0) for
+ * Sets the page boxes for the scene (TrimBox and BleedBox on every page: the bleed box is the trim grown
+ * by the bleed, the trim itself without bleed) and writes its content stream, all of it one marked-content sequence (tag /Figure, MCID 0) for
  * the page's structure element.
  */
 export function drawScene(args: { page: PDFPage; scene: Scene; fonts: PageContext['fonts'] }): void {
   const { page, scene } = args;
   const ctx: PageContext = { page, heightMm: scene.heightMm, fonts: args.fonts };
-  const { x, y, width, height } = scene.trimBox;
-  const [left, bottom] = toPt(ctx, x, y + height);
-  page.setTrimBox(left, bottom, pt(width), pt(height));
-  page.setBleedBox(0, 0, pt(scene.widthMm), pt(scene.heightMm));
+  // MediaBox (the page size) holds trim, bleed and the crop marks' slug; TrimBox and BleedBox sit inside it.
+  const inPt = (box: Box): [number, number, number, number] => [...toPt(ctx, box.x, box.y + box.height), pt(box.width), pt(box.height)];
+  page.setTrimBox(...inPt(scene.trimBox));
+  page.setBleedBox(...inPt(bleedBox(scene)));
   page.pushOperators(
     PDFOperator.of(PDFOperatorNames.BeginMarkedContentSequence, [PDFName.of('Figure'), '<</MCID 0>>']),
     ...nodeOps(ctx, scene.root),

@@ -6,6 +6,7 @@
 import { loadProject } from '../data/load.ts';
 import { printedError } from '../data/errors.ts';
 import type { DataError } from '../data/types.ts';
+import type { PrintOverride } from '../standards/paper.ts';
 import { existsSync } from 'node:fs';
 import { checkOutputFolder, createStaging, discardStaging, OutputFolderError, placeError, swapIn } from './atomicDir.ts';
 import { buildDateIso } from './dateIso.ts';
@@ -23,6 +24,8 @@ export interface BuildOptions {
   readonly outDir: string;
   /** The SOURCE_DATE_EPOCH environment value, if any. */
   readonly sourceDateEpoch?: string;
+  /** --bleed and --crop-marks: override the paper of every sheet and book. */
+  readonly print?: PrintOverride;
   readonly onProgress?: (done: number, total: number) => void;
   /** Reuse rendered sheets across builds in one process (dev server, benchmarks). */
   readonly cache?: BuildCache;
@@ -59,6 +62,7 @@ export async function buildSite(opts: BuildOptions): Promise<BuildOutcome> {
       project: loaded.project,
       dateIso,
       dir: staging,
+      print: opts.print,
       cache: opts.cache,
       renderer,
       onProgress: opts.onProgress,
@@ -79,7 +83,7 @@ export async function buildSite(opts: BuildOptions): Promise<BuildOutcome> {
     await new Promise((done) => setImmediate(done));
     if (existsSync(staging)) discardStaging(staging);
     // `check` lays out the same sheets, so this is rare; it is still said at the definition's line.
-    if (error instanceof SheetDrawError) return { ok: false, errorsText: formatDataErrors([sheetDrawProblem(loaded.project, error)], 'problem'), warningsText };
+    if (error instanceof SheetDrawError) return { ok: false, errorsText: formatDataErrors([sheetDrawProblem(loaded.project, error, { print: opts.print })], 'problem'), warningsText };
     if (error instanceof OutputFolderError) throw error;
     throw placeError(error, opts.outDir);
   } finally {

@@ -6,6 +6,7 @@
 import { bookSheetRequest, conditionsDifferences, defaultWallCharts } from '../analysis/index.ts';
 import type { Boat, Project, SheetRequest } from '../data/types.ts';
 import { sheetSlug } from '../sheets/index.ts';
+import { printedPaper, withCropMarks, type Paper, type PrintOverride } from '../standards/paper.ts';
 
 export interface PlannedSheet {
   readonly slug: string;
@@ -47,7 +48,13 @@ export function conditionsDifference(a: SheetRequest, b: SheetRequest): string[]
 }
 
 const samePaper = (a: SheetRequest, b: SheetRequest): boolean =>
-  a.paper.size === b.paper.size && a.paper.orientation === b.paper.orientation && a.paper.bleedMm === b.paper.bleedMm;
+  a.paper.size === b.paper.size && a.paper.orientation === b.paper.orientation && a.paper.bleedMm === b.paper.bleedMm && withCropMarks(a.paper) === withCropMarks(b.paper);
+
+/** "a4-portrait", "card4x6-landscape-bleed", "a5-portrait-marks": a paper in a slug (marks said only when not the default). */
+function paperWord(p: Paper): string {
+  const marks = p.cropMarks === undefined || p.cropMarks === p.bleedMm > 0 ? '' : p.cropMarks ? '-marks' : '-no-marks';
+  return `${p.size}-${p.orientation}${p.bleedMm > 0 ? '-bleed' : ''}${marks}`.toLowerCase();
+}
 
 /**
  * The same sheet kind for the same boat or pairing can be asked for on other paper (a book for an
@@ -58,8 +65,7 @@ const samePaper = (a: SheetRequest, b: SheetRequest): boolean =>
 function uniqueSlug(request: SheetRequest, first: ReadonlyMap<string, SheetRequest>, taken: ReadonlySet<string>): string {
   const base = sheetSlug(request);
   const earlier = first.get(base);
-  const p = request.paper;
-  const paper = `${p.size}-${p.orientation}${p.bleedMm > 0 ? '-bleed' : ''}`.toLowerCase();
+  const paper = paperWord(request.paper);
   const words = earlier ? conditionsDifference(request, earlier) : [];
   // A book's own cautions make its sheet its own file: named after the book when nothing else tells it apart.
   const book = request.bookCautions && earlier && JSON.stringify(request.bookCautions) !== JSON.stringify(earlier.bookCautions) ? [request.bookCautions.bookId] : [];
@@ -71,13 +77,17 @@ function uniqueSlug(request: SheetRequest, first: ReadonlyMap<string, SheetReque
   }
 }
 
-/** Plans every sheet of the project, de-duplicated by slug. */
-export function planSheets(project: Project): SheetPlan {
+/**
+ * Plans every sheet of the project, de-duplicated by slug. `print` (the command line's --bleed and
+ * --crop-marks) overrides the paper of every sheet: wall charts, boat sheets and books' sheets alike.
+ */
+export function planSheets(project: Project, print: PrintOverride = {}): SheetPlan {
   // Keyed by the request itself: equal requests are one sheet, different ones never share a file.
   const sheets = new Map<string, PlannedSheet>();
   const slugs = new Set<string>();
   const firstByBase = new Map<string, SheetRequest>();
-  const add = (request: SheetRequest): string => {
+  const add = (asked: SheetRequest): string => {
+    const request: SheetRequest = { ...asked, paper: printedPaper(asked.paper, print) };
     const key = JSON.stringify(request);
     const known = sheets.get(key);
     if (known) return known.slug;

@@ -13,6 +13,7 @@ import { parseYaml, type PathSegment, type YamlSource } from '../data/yamlSource
 import type { Scene } from '../scene/types.ts';
 import { sheetScene } from '../sheets/index.ts';
 import { bookPages } from './bookPages.ts';
+import type { PrintOverride } from '../standards/paper.ts';
 import { isUserFixable, type SheetDrawError } from './errors.ts';
 import { planSheets, type SheetPlan } from './planSheets.ts';
 
@@ -26,11 +27,13 @@ const KIND_WORDS: Readonly<Record<SheetRequest['kind'], string>> = {
 export interface SheetProblemOptions {
   /** Reads a definition file to find the line; defaults to the disk. Undefined when it cannot be read. */
   readonly readText?: (file: string) => string | undefined;
+  /** --bleed and --crop-marks of the run, as planSheets takes them. */
+  readonly print?: PrintOverride;
 }
 
 /** Every sheet of the build laid out; a located error for each one that cannot be. */
 export function layoutProblems(project: Project, opts: SheetProblemOptions & { dateIso: string; plan?: SheetPlan }): DataError[] {
-  const plan = opts.plan ?? planSheets(project);
+  const plan = opts.plan ?? planSheets(project, opts.print);
   const place = placeFinder(opts.readText);
   const problems: DataError[] = [];
   const scenes = new Map<string, Scene>();
@@ -60,7 +63,7 @@ export function layoutProblems(project: Project, opts: SheetProblemOptions & { d
 
 /** A SheetDrawError from the build, said at the definition that asked for the sheet. */
 export function sheetDrawProblem(project: Project, error: SheetDrawError, opts: SheetProblemOptions = {}): DataError {
-  const plan = planSheets(project);
+  const plan = planSheets(project, opts.print);
   const planned = plan.sheets.find((s) => s.slug === error.slug);
   const cause = error.cause instanceof Error ? error.cause : error;
   if (!planned) return dataError({ file: 'site.yaml', line: 1, column: 1 }, { field: '', expected: `must give a sheet ${error.slug} that can be drawn`, found: cause.message });

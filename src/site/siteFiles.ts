@@ -9,6 +9,7 @@ import { bookPages } from './bookPages.ts';
 import { renderPdf, type PdfOptions } from '../render/index.ts';
 import { FONT_FILES } from '../scene/fonts.ts';
 import { scenePages, type Scene } from '../scene/types.ts';
+import type { PrintOverride } from '../standards/paper.ts';
 import { PACKAGE_ROOT } from './eleventySetup.ts';
 import { GUIDE_IMAGES_DIR, readGuides } from './guides.ts';
 import { outputFiles } from './outputFiles.ts';
@@ -33,6 +34,8 @@ export interface SiteCounts {
 export interface SiteFilesArgs {
   readonly project: Project;
   readonly dateIso: string;
+  /** --bleed and --crop-marks: override the paper of every sheet (planSheets). */
+  readonly print?: PrintOverride;
   /** Output folder (the staging folder of an atomic build). */
   readonly dir: string;
   readonly cache?: BuildCache;
@@ -83,7 +86,7 @@ async function bookPdf(args: {
 export async function writeSiteFiles(args: SiteFilesArgs): Promise<{ site: SiteData; counts: SiteCounts }> {
   const { project, dateIso } = args;
   const files = outputFiles(args.dir);
-  const plan = planSheets(project);
+  const plan = planSheets(project, args.print);
   const inBooks = new Set([...plan.byBook.values()].flat());
   const drawn = await drawSheets({ project, dateIso, plan, files, keep: inBooks, cache: args.cache, renderer: args.renderer, onProgress: args.onProgress, fault: args.fault });
   const sheets = drawn.views;

@@ -10,8 +10,15 @@ export type Orientation = 'portrait' | 'landscape';
 export interface Paper {
   readonly size: PaperSize;
   readonly orientation: Orientation;
-  /** 0 or 3 (mm); with bleed the sheet gets crop marks. */
+  /** Bleed beyond the trim on every side (mm), 0 for none. */
   readonly bleedMm: number;
+  /** Crop marks outside the bleed; when absent, drawn exactly when the sheet has bleed (withCropMarks). */
+  readonly cropMarks?: boolean;
+}
+
+/** Whether a paper gets crop marks: as it says, else when it has bleed (a sheet without bleed is cut at its edge). */
+export function withCropMarks(paper: Paper): boolean {
+  return paper.cropMarks ?? paper.bleedMm > 0;
 }
 
 const MM_PER_IN = 25.4;
@@ -35,4 +42,23 @@ export const PORTRAIT_MM: Readonly<Record<PaperSize, readonly [number, number]>>
 export function paperSizeMm(size: PaperSize, orientation: Orientation): { widthMm: number; heightMm: number } {
   const [shortMm, longMm] = PORTRAIT_MM[size];
   return orientation === 'portrait' ? { widthMm: shortMm, heightMm: longMm } : { widthMm: longMm, heightMm: shortMm };
+}
+
+/**
+ * Print settings that override every sheet's paper for one run (`matchbook build --bleed 3
+ * --crop-marks`); what is not given keeps the paper's own.
+ */
+export interface PrintOverride {
+  readonly bleedMm?: number;
+  readonly cropMarks?: boolean;
+}
+
+/**
+ * The paper a sheet is printed on: the override applied, in one form for equal drawings (cropMarks
+ * only when it differs from the default for its bleed), so equal sheets are one file.
+ */
+export function printedPaper(paper: Paper, override: PrintOverride = {}): Paper {
+  const bleedMm = override.bleedMm ?? paper.bleedMm;
+  const cropMarks = override.cropMarks ?? paper.cropMarks ?? bleedMm > 0;
+  return { size: paper.size, orientation: paper.orientation, bleedMm, ...(cropMarks !== bleedMm > 0 ? { cropMarks } : {}) };
 }

@@ -42,6 +42,34 @@ describe('parseArgs()', () => {
   });
 });
 
+describe('parseArgs() print options', () => {
+  it('reads --bleed in millimetres and --crop-marks / --no-crop-marks for build and check, none by default', () => {
+    expect(parseArgs(['build']).print).toEqual({});
+    expect(parseArgs(['build', '--bleed', '3']).print).toEqual({ bleedMm: 3 });
+    expect(parseArgs(['check', '--bleed=3.18', '--crop-marks']).print).toEqual({ bleedMm: 3.18, cropMarks: true });
+    expect(parseArgs(['build', '--no-crop-marks', '--data', 'd']).print).toEqual({ cropMarks: false });
+    expect(parseArgs(['build', '--bleed', '0']).print).toEqual({ bleedMm: 0 });
+    expect(parseArgs(['check', '--bleed', '10']).print).toEqual({ bleedMm: 10 });
+  });
+
+  it('refuses a bleed that is not a number of millimetres from 0 to 10, saying what it found and what to write', () => {
+    for (const bad of ['-1', 'three', '3,5', '10.5', '11', '1e1', '3.125', '.5', 'NaN', ' 3']) {
+      expect(() => parseArgs(['build', `--bleed=${bad}`]), bad).toThrow(UsageError);
+      expect(() => parseArgs(['build', `--bleed=${bad}`]), bad).toThrow(`--bleed must be the bleed in millimetres, a number from 0 (no bleed) to 10, for example --bleed 3 (the usual print-shop bleed), found "${bad}"`);
+    }
+    expect(() => parseArgs(['build', '--bleed', '3mm'])).toThrow(/found "3mm"; leave out the unit, millimetres are understood/);
+    expect(() => parseArgs(['build', '--bleed'])).toThrow('--bleed needs a value, for example --bleed 3');
+    expect(() => parseArgs(['build', '--bleed', '--out', 'x'])).toThrow('--bleed needs a value, for example --bleed 3');
+  });
+
+  it('refuses print options where they do nothing, a value on a flag, and both flags at once', () => {
+    expect(() => parseArgs(['serve', '--bleed', '3'])).toThrow(/"serve" does not take "--bleed"/);
+    expect(() => parseArgs(['start', '--crop-marks'])).toThrow(/"start" does not take "--crop-marks"; it accepts --data, --help/);
+    expect(() => parseArgs(['build', '--crop-marks=yes'])).toThrow(/"build" does not take "--crop-marks=yes"; --crop-marks takes no value/);
+    expect(() => parseArgs(['check', '--crop-marks', '--no-crop-marks'])).toThrow('--crop-marks and --no-crop-marks contradict each other; give one of them');
+  });
+});
+
 describe('helpText()', () => {
   it('names every command and the exit statuses in the general help', () => {
     const text = helpText();
@@ -51,8 +79,12 @@ describe('helpText()', () => {
   });
 
   it('gives each command the options it accepts', () => {
-    expect(helpText('build')).toMatch(/^Usage: matchbook build \[--data DIR\] \[--out DIR\]/);
-    expect(helpText('check')).toMatch(/^Usage: matchbook check \[--data DIR\]\n/);
+    expect(helpText('build')).toMatch(/^Usage: matchbook build \[--data DIR\] \[--out DIR\] \[--bleed MM\] \[--crop-marks \| --no-crop-marks\]\n/);
+    expect(helpText('check')).toMatch(/^Usage: matchbook check \[--data DIR\] \[--bleed MM\] \[--crop-marks \| --no-crop-marks\]\n/);
+    for (const command of ['build', 'check'] as const) {
+      expect(helpText(command)).toContain('--bleed MM         bleed in millimetres beyond the trim, 0 to 10');
+      expect(helpText(command)).toContain('--no-crop-marks    no crop marks');
+    }
     expect(helpText('serve')).toMatch(/^Usage: matchbook serve \[--data DIR\] \[--out DIR\] \[--port N\] \[--host ADDRESS\]\n/);
     expect(helpText('serve')).toContain('http://127.0.0.1:N/');
     expect(helpText('start')).toMatch(/^Usage: matchbook start \[--data DIR\]\n/);

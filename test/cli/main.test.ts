@@ -34,6 +34,15 @@ describe('the matchbook command', () => {
     const out = matchbook(['build', '--out', REPO]);
     expect(out.status).toBe(2);
     expect(out.stderr).toMatch(/would replace the project, home or data folder/);
+    const bleed = matchbook(['build', '--bleed', '12', '--out', join(tmpdir(), 'matchbook-never-written')]);
+    expect(bleed.status).toBe(2);
+    expect(bleed.stderr).toBe('matchbook: --bleed must be the bleed in millimetres, a number from 0 (no bleed) to 10, for example --bleed 3 (the usual print-shop bleed), found "12"\nRun "matchbook --help" for usage.\n');
+  });
+
+  it('check lays every sheet out with the bleed and crop marks the command line asks for', () => {
+    const r = matchbook(['check', '--bleed', '5', '--crop-marks']);
+    expect(r.stderr).toBe('');
+    expect(r.status).toBe(0);
   });
 
   it('check exits 0 on the demo data and 1 on broken data, naming the file and field', () => {

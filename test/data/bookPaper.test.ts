@@ -43,4 +43,21 @@ describe('one paper per book', () => {
     const same = cards.replace('  - { kind: consoleCard, boat: greyling }', '  - kind: consoleCard\n    boat: greyling\n    paper: { size: 4x6, orientation: landscape, bleed_mm: 3 }');
     expect(loadProjectFromFiles(demoWith(CARDS, same)).ok).toBe(true);
   });
+
+  it("takes crop_marks from the book's paper, a sheet keeping the book's unless it says otherwise", () => {
+    const unmarked = withStrayA6.replace('  bleed_mm: 3        # for a print shop: crop marks and bleed', '  bleed_mm: 3\n  crop_marks: false').replace('sheets:\n', 'mixed_paper: true\nsheets:\n');
+    const r = loadProjectFromFiles(demoWith(CARDS, unmarked.replace('paper: { size: A6, orientation: landscape }', 'paper: { size: A6, orientation: landscape, crop_marks: true }')));
+    if (!r.ok) throw new Error(r.errors.map((e) => e.message).join('\n'));
+    const papers = r.project.books.find((b) => b.id === 'owner-console-cards')!.sheets.map((s) => s.paper);
+    expect(papers.map((p) => p.cropMarks)).toEqual([false, false, true]);
+  });
+
+  it('refuses a crop_marks that is not true or false, at its line, saying what it defaults to', () => {
+    const text = cards.replace('  bleed_mm: 3        # for a print shop: crop marks and bleed', '  bleed_mm: 3\n  crop_marks: yes please');
+    const r = loadProjectFromFiles(demoWith(CARDS, text));
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    const line = text.split('\n').findIndex((l) => l.startsWith('  crop_marks:')) + 1;
+    expect(r.errors.map((e) => e.message)).toEqual([`${CARDS}:${line}:15 paper.crop_marks must be true or false (without it, crop marks come with bleed), found "yes please"`]);
+  });
 });

@@ -7,6 +7,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { UnsupportedCharacterError } from '../../src/render/errors.ts';
 import { renderPdf } from '../../src/render/pdf.ts';
 import { renderPng } from '../../src/render/png.ts';
+import { bleedBox, cropMarks, pageFrame } from '../../src/scene/paper.ts';
 import { textBox, textNode } from '../../src/scene/text.ts';
 import type { Scene } from '../../src/scene/types.ts';
 import { decodePng, differingPixels } from './pngPixels.ts';
@@ -41,14 +42,21 @@ describe('renderPdf()', () => {
     const { width, height } = doc.getPage(0).getSize();
     expect(width).toBeCloseTo(A4_PT[0], 2);
     expect(height).toBeCloseTo(A4_PT[1], 2);
-    // Every-node-kind has 3 mm bleed: media 216 × 303 mm, TrimBox 3 mm (8.504 pt) in from each edge.
+    // Every-node-kind has 3 mm bleed and so crop marks: media 230 × 317 mm (trim + 3 mm bleed + a 7 mm
+    // slug for the 5 mm marks), TrimBox 10 mm in from each edge, BleedBox 3 mm outside the trim.
     const bled = doc.getPage(1);
-    expect(bled.getMediaBox().width).toBeCloseTo((216 / 25.4) * 72, 2);
+    expect(bled.getMediaBox().width).toBeCloseTo((230 / 25.4) * 72, 2);
+    expect(bled.getMediaBox().height).toBeCloseTo((317 / 25.4) * 72, 2);
     const trim = bled.getTrimBox();
-    expect(trim.x).toBeCloseTo((3 / 25.4) * 72, 2);
-    expect(trim.y).toBeCloseTo((3 / 25.4) * 72, 2);
+    expect(trim.x).toBeCloseTo((10 / 25.4) * 72, 2);
+    expect(trim.y).toBeCloseTo((10 / 25.4) * 72, 2);
     expect(trim.width).toBeCloseTo(A4_PT[0], 2);
-    expect(bled.getBleedBox().width).toBeCloseTo((216 / 25.4) * 72, 2);
+    expect(trim.height).toBeCloseTo(A4_PT[1], 2);
+    const bleed = bled.getBleedBox();
+    expect(bleed.x).toBeCloseTo((7 / 25.4) * 72, 2);
+    expect(bleed.y).toBeCloseTo((7 / 25.4) * 72, 2);
+    expect(bleed.width).toBeCloseTo((216 / 25.4) * 72, 2);
+    expect(bleed.height).toBeCloseTo((303 / 25.4) * 72, 2);
     // A page without bleed still states its trim (= media) and bleed box, as print-shop preflight expects
     // (PDF/X asks for TrimBox on every page; ISO 15930-1, from memory).
     const plain = doc.getPage(0);
@@ -58,6 +66,16 @@ describe('renderPdf()', () => {
       expect(box.width).toBeCloseTo(A4_PT[0], 2);
       expect(box.height).toBeCloseTo(A4_PT[1], 2);
     }
+  });
+
+  it('with bleed and no crop marks makes the media the bleed box, the trim 3 mm inside it', async () => {
+    const paper = { size: 'A4', orientation: 'portrait', bleedMm: 3, cropMarks: false } as const;
+    const page = (await PDFDocument.load(await renderPdf([sceneOf({ paper, children: [] })], OPTIONS))).getPage(0);
+    const mm = (valuePt: number) => (valuePt * 25.4) / 72;
+    const box = (b: { x: number; y: number; width: number; height: number }) => [b.x, b.y, b.width, b.height].map((v) => Math.round(mm(v) * 1000) / 1000);
+    expect(box(page.getMediaBox())).toEqual([0, 0, 216, 303]);
+    expect(box(page.getBleedBox())).toEqual([0, 0, 216, 303]);
+    expect(box(page.getTrimBox())).toEqual([3, 3, 210, 297]);
   });
 
   it('names each font subset by the characters it holds: another text, another tag; the same text, the same tag', async () => {
@@ -184,6 +202,36 @@ async function popplerAndResvg(scene: Scene): Promise<{ fromPdf: Pixels; fromSvg
 }
 
 describe('renderPdf() as drawn by a PDF viewer', () => {
+  it('draws crop marks where a print shop looks for them: in line with the trim, from the bleed edge outward, none inside the bleed', async () => {
+    // An A6 card with 3 mm bleed and a grey band that fills the bleed box (artwork running off the edge).
+    const paper = { size: 'A6', orientation: 'portrait', bleedMm: 3 } as const;
+    const frame = pageFrame({ paper });
+    const bleed = bleedBox(frame);
+    const band = { type: 'rect' as const, ...bleed, fill: { colour: '#808080' } };
+    const bytes = await renderPdf([sceneOf({ paper, children: [band, ...cropMarks(frame)] })], OPTIONS);
+    // The top-left 14 mm of the page at 600 dpi, as poppler draws it.
+    const pxPerMm = 600 / 25.4;
+    const side = Math.round(14 * pxPerMm);
+    poppler('pdftoppm', bytes, ['-r', '600', '-x', '0', '-y', '0', '-W', String(side), '-H', String(side), '-png', '-singlefile']);
+    const corner = decodePng(readFileSync(join(dir, 'page.png')));
+    const level = (xMm: number, yMm: number) => corner.data[(Math.round(yMm * pxPerMm) * corner.width + Math.round(xMm * pxPerMm)) * 4];
+    const { x: trimX, y: trimY } = frame.trimBox;
+    expect([trimX, trimY, bleed.x, bleed.y]).toEqual([10, 10, 7, 7]);
+    // The marks: black along the trim lines between 3 and 8 mm outside the trim (5 mm long).
+    for (const out of [3.5, 5.5, 7.5]) {
+      expect(level(trimX - out, trimY), `horizontal mark ${out} mm out`).toBeLessThan(64);
+      expect(level(trimX, trimY - out), `vertical mark ${out} mm out`).toBeLessThan(64);
+    }
+    // Inside the bleed, on the same lines: the band's grey, no mark (128 ± anti-aliasing).
+    for (const out of [0.5, 1.5, 2.5]) {
+      expect(Math.abs(level(trimX - out, trimY) - 128), `bleed ${out} mm out`).toBeLessThan(8);
+      expect(Math.abs(level(trimX, trimY - out) - 128), `bleed ${out} mm out`).toBeLessThan(8);
+    }
+    // Past the marks' ends and off the trim lines: paper white.
+    expect(level(trimX - 9, trimY)).toBe(255);
+    expect(level(trimX - 5, trimY - 5)).toBe(255);
+  });
+
   it('draws the same picture as the SVG renderer: paths, y flip, clip, dashes, circle (poppler vs resvg)', async () => {
     // Text is left out: poppler and resvg anti-alias glyphs differently (text has its own test below).
     const scene = everyNodeKindScene();

@@ -29,7 +29,8 @@ describe('renderSvg()', () => {
   it('writes a well-formed, mm-sized document with a mm viewBox, title and description', () => {
     const svg = renderSvg(everyNodeKindScene());
     expectWellFormed(svg);
-    expect(svg).toContain('width="216mm" height="303mm" viewBox="0 0 216 303"');
+    // A4 with 3 mm bleed and crop marks: 210 × 297 mm + 2 × (3 mm bleed + 5 mm marks + 2 mm clear).
+    expect(svg).toContain('width="230mm" height="317mm" viewBox="0 0 230 317"');
     expect(svg).toContain('<title>Every node kind</title>');
     expect(svg).toContain('<desc>A sheet built by a test</desc>');
   });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Paper, PaperSize } from '../../src/data/types.ts';
-import { CROP_MARK_WIDTH_MM, cropMarks, defaultMarginMm, pageFrame, paperSizeMm } from '../../src/scene/paper.ts';
+import { CROP_MARK_WIDTH_MM, bleedBox, cropMarkOffsetMm, cropMarks, defaultMarginMm, pageFrame, paperSizeMm } from '../../src/scene/paper.ts';
 import { MM_PER_PT } from '../../src/scene/text.ts';
 
 describe('paperSizeMm()', () => {
@@ -46,15 +46,40 @@ describe('pageFrame()', () => {
       trimBox: { x: 0, y: 0, width: 210, height: 297 },
       safeBox: { x: 10, y: 10, width: 190, height: 277 },
       bleedMm: 0,
+      cropMarks: false,
     });
   });
 
-  it('with 3 mm bleed the media grows by 6 mm and trim and safe boxes shift by the bleed', () => {
-    const frame = pageFrame({ paper: { size: 'A3', orientation: 'landscape', bleedMm: 3 } });
+  it('with 3 mm bleed and no crop marks the media grows by 6 mm and trim and safe boxes shift by the bleed', () => {
+    const frame = pageFrame({ paper: { size: 'A3', orientation: 'landscape', bleedMm: 3, cropMarks: false } });
     expect(frame.widthMm).toBe(426);
     expect(frame.heightMm).toBe(303);
     expect(frame.trimBox).toEqual({ x: 3, y: 3, width: 420, height: 297 });
+    expect(bleedBox(frame)).toEqual({ x: 0, y: 0, width: 426, height: 303 });
     expect(frame.safeBox).toEqual({ x: 15, y: 15, width: 396, height: 273 });
+  });
+
+  it('with bleed draws crop marks by default, and the media grows by a slug that holds them', () => {
+    // 3 mm bleed, marks 5 mm long from the bleed edge, 2 mm clear of the media edge: 10 mm each side.
+    const frame = pageFrame({ paper: { size: 'A4', orientation: 'portrait', bleedMm: 3 } });
+    expect(frame.cropMarks).toBe(true);
+    expect([frame.widthMm, frame.heightMm]).toEqual([230, 317]);
+    expect(frame.trimBox).toEqual({ x: 10, y: 10, width: 210, height: 297 });
+    expect(bleedBox(frame)).toEqual({ x: 7, y: 7, width: 216, height: 303 });
+    // The safe box keeps its margin inside the trim: the sheet's content does not move against the trim.
+    expect(frame.safeBox).toEqual({ x: 20, y: 20, width: 190, height: 277 });
+  });
+
+  it('draws crop marks without bleed only when asked, then 3 mm off the trim', () => {
+    expect(pageFrame({ paper: { size: 'A5', orientation: 'portrait', bleedMm: 0 } }).cropMarks).toBe(false);
+    const frame = pageFrame({ paper: { size: 'A5', orientation: 'portrait', bleedMm: 0, cropMarks: true } });
+    expect(frame.cropMarks).toBe(true);
+    expect(frame.trimBox).toEqual({ x: 10, y: 10, width: 148, height: 210 });
+    expect(bleedBox(frame)).toEqual(frame.trimBox);
+    expect(cropMarkOffsetMm(0)).toBe(3);
+    // A wider bleed pushes the marks out with it.
+    expect(cropMarkOffsetMm(5)).toBe(5);
+    expect(pageFrame({ paper: { size: 'A5', orientation: 'portrait', bleedMm: 5 } }).trimBox.x).toBe(12);
   });
 
   it('uses 12 mm margins on sheets larger than A4 and 10 mm on A4 and smaller', () => {
@@ -70,34 +95,54 @@ describe('pageFrame()', () => {
 });
 
 describe('cropMarks()', () => {
-  it('draws none without bleed', () => {
+  it('draws none without bleed, and none with bleed when told not to', () => {
     expect(cropMarks(pageFrame({ paper: { size: 'A4', orientation: 'portrait', bleedMm: 0 } }))).toEqual([]);
+    expect(cropMarks(pageFrame({ paper: { size: 'A4', orientation: 'portrait', bleedMm: 3, cropMarks: false } }))).toEqual([]);
   });
 
-  it('draws two marks at each of the four corners, all in the bleed zone outside the trim', () => {
-    const frame = pageFrame({ paper: { size: 'A5', orientation: 'portrait', bleedMm: 3 } });
-    const marks = cropMarks(frame);
-    expect(marks).toHaveLength(4);
-    const { x, y, width, height } = frame.trimBox;
-    const points = marks.flatMap((m) => m.segments.flatMap((s) => (s.op === 'M' || s.op === 'L' ? [s] : [])));
-    expect(points).toHaveLength(16);
-    for (const p of points) {
-      const insideTrim = p.x > x && p.x < x + width && p.y > y && p.y < y + height;
-      expect(insideTrim).toBe(false);
-      expect(p.x).toBeGreaterThanOrEqual(0);
-      expect(p.y).toBeGreaterThanOrEqual(0);
-      expect(p.x).toBeLessThanOrEqual(frame.widthMm);
-      expect(p.y).toBeLessThanOrEqual(frame.heightMm);
-      // Each mark point sits in a corner zone: outside the trim on one axis, on the trim line on the other.
-      const onVerticalTrimLine = p.x === x || p.x === x + width;
-      const onHorizontalTrimLine = p.y === y || p.y === y + height;
-      expect(onVerticalTrimLine || onHorizontalTrimLine).toBe(true);
-    }
-  });
+  for (const bleedMm of [0, 3, 5]) {
+    it(`with ${bleedMm} mm bleed draws two 5 mm marks at each corner, in line with the trim edges, all outside the bleed and inside the media`, () => {
+      const frame = pageFrame({ paper: { size: 'A5', orientation: 'portrait', bleedMm, cropMarks: true } });
+      const marks = cropMarks(frame);
+      expect(marks).toHaveLength(4);
+      const trim = frame.trimBox;
+      const bleed = bleedBox(frame);
+      const offset = Math.max(bleedMm, 3);
+      const lines = marks.flatMap((m) => {
+        const points = m.segments.flatMap((s) => (s.op === 'M' || s.op === 'L' ? [s] : []));
+        return [[points[0], points[1]], [points[2], points[3]]];
+      });
+      expect(lines).toHaveLength(8);
+      const outside = (p: { x: number; y: number }) => p.x <= bleed.x || p.x >= bleed.x + bleed.width || p.y <= bleed.y || p.y >= bleed.y + bleed.height;
+      for (const [a, b] of lines) {
+        // A hairline 5 mm long (common practice, no source), horizontal or vertical.
+        expect(Math.hypot(b.x - a.x, b.y - a.y)).toBeCloseTo(5, 9);
+        const horizontal = a.y === b.y;
+        expect(horizontal || a.x === b.x).toBe(true);
+        // In line with a trim edge: a horizontal mark continues the top or bottom edge, a vertical one a side.
+        if (horizontal) expect([trim.y, trim.y + trim.height]).toContain(a.y);
+        else expect([trim.x, trim.x + trim.width]).toContain(a.x);
+        // It starts at the bleed edge (never inside the bleed) and runs outward, and stays on the media.
+        const along = horizontal ? [a.x, b.x] : [a.y, b.y];
+        const [lo, hi] = horizontal ? [trim.x, trim.x + trim.width] : [trim.y, trim.y + trim.height];
+        const gaps = along.map((v) => (v < lo ? lo - v : v - hi));
+        expect(Math.min(...gaps)).toBeCloseTo(offset, 9);
+        expect(Math.max(...gaps)).toBeCloseTo(offset + 5, 9);
+        expect(outside(a) && outside(b)).toBe(true);
+        for (const p of [a, b]) {
+          expect(p.x).toBeGreaterThan(0);
+          expect(p.y).toBeGreaterThan(0);
+          expect(p.x).toBeLessThan(frame.widthMm);
+          expect(p.y).toBeLessThan(frame.heightMm);
+        }
+      }
+    });
+  }
 
-  it('strokes marks no thinner than 0.5 pt so they survive printing', () => {
+  it('strokes marks as black 0.25 pt hairlines', () => {
+    // About 0.25 pt is the usual crop-mark weight (common practice, no source); 1 pt = 25.4/72 mm.
+    expect(CROP_MARK_WIDTH_MM).toBeCloseTo(0.25 * MM_PER_PT, 12);
     const marks = cropMarks(pageFrame({ paper: { size: 'A4', orientation: 'portrait', bleedMm: 3 } }));
-    expect(CROP_MARK_WIDTH_MM).toBeGreaterThanOrEqual(0.5 * MM_PER_PT);
-    for (const mark of marks) expect(mark.stroke?.widthMm).toBe(CROP_MARK_WIDTH_MM);
+    for (const mark of marks) expect(mark.stroke).toEqual({ colour: '#000000', widthMm: CROP_MARK_WIDTH_MM, cap: 'butt' });
   });
 });

@@ -1,9 +1,37 @@
 /** The print rules every sheet keeps, as one list of problems (empty when the scene passes). */
 import type { Paper } from '../../src/data/types.ts';
+import { bleedBox } from '../../src/scene/paper.ts';
 import type { Box, ClipRect, Scene, SceneNode } from '../../src/scene/types.ts';
 import { boxesOverlap, boxInside } from '../../src/sheets/kit/boxes.ts';
 import { FINE_PRINT_CARD_PT, FINE_PRINT_ROLES, MIN_STROKE_MM } from '../../src/sheets/kit/style.ts';
 import { markBox, texts } from './sceneWalk.ts';
+
+const EDGE_MM = 0.01;
+
+/**
+ * Artwork at the edge of the sheet: whatever touches a trim edge must run on to the bleed edge (a cut a
+ * little off the line would otherwise leave a white sliver; common practice, no source), and nothing but
+ * crop marks reaches past the bleed edge. Returns the sides a box runs to the bleed edge on.
+ */
+export function edgeProblems(scene: Scene, box: Box, what: string): { problems: string[]; fullBleed: boolean } {
+  const trim = scene.trimBox;
+  const bleed = bleedBox(scene);
+  const sides = [
+    { side: 'left', at: box.x, trim: trim.x, bleed: bleed.x, out: -1 },
+    { side: 'top', at: box.y, trim: trim.y, bleed: bleed.y, out: -1 },
+    { side: 'right', at: box.x + box.width, trim: trim.x + trim.width, bleed: bleed.x + bleed.width, out: 1 },
+    { side: 'bottom', at: box.y + box.height, trim: trim.y + trim.height, bleed: bleed.y + bleed.height, out: 1 },
+  ];
+  const problems: string[] = [];
+  let fullBleed = false;
+  for (const s of sides) {
+    const beyond = (edge: number) => (s.at - edge) * s.out;
+    if (beyond(s.bleed) > EDGE_MM) problems.push(`past the bleed edge (${s.side}): ${what}`);
+    else if (scene.bleedMm > 0 && beyond(s.trim) > -EDGE_MM && beyond(s.bleed) < -EDGE_MM) problems.push(`stops short of the bleed edge (${s.side}): ${what}`);
+    else if (scene.bleedMm > 0 && beyond(s.bleed) > -EDGE_MM) fullBleed = true;
+  }
+  return { problems, fullBleed };
+}
 
 /** Marks outside the safe area, overlapping text boxes, type or strokes under the minimum, NaN-like text. */
 export function sceneProblems(scene: Scene, paper: Paper): string[] {
@@ -11,7 +39,12 @@ export function sceneProblems(scene: Scene, paper: Paper): string[] {
   for (const { n, clip } of clippedLeaves(scene)) {
     if (n.role === 'crop-mark') continue;
     const box = clipped(markBox(n), clip);
-    if (box && !boxInside(box, scene.safeBox, 0.01)) problems.push(`outside the safe area: ${n.role} ${n.type === 'text' ? n.text : ''}`);
+    const what = `${n.role} ${n.type === 'text' ? n.text : ''}`;
+    const edge = box ? edgeProblems(scene, box, what) : { problems: [], fullBleed: false };
+    problems.push(...edge.problems);
+    // Artwork that runs into the bleed leaves the safe area by design; text never does.
+    const bleeds = edge.fullBleed && n.type !== 'text';
+    if (box && !bleeds && !boxInside(box, scene.safeBox, 0.01)) problems.push(`outside the safe area: ${what}`);
     if (n.type !== 'text' && n.type !== 'group' && n.stroke && n.stroke.widthMm < MIN_STROKE_MM) problems.push(`stroke under 0.5 pt: ${n.role}`);
   }
   const minPt = paper.size === 'A3' || paper.size === 'Tabloid' ? 10 : 8;

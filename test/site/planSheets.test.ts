@@ -3,6 +3,8 @@ import { loadProject } from '../../src/data/load.ts';
 import { bookSheetRequest } from '../../src/analysis/index.ts';
 import { boatSheetRequests, planSheets } from '../../src/site/planSheets.ts';
 import type { Project } from '../../src/data/types.ts';
+import { sheetScene } from '../../src/sheets/index.ts';
+import { withCropMarks } from '../../src/standards/paper.ts';
 
 async function demo(): Promise<Project> {
   const loaded = await loadProject('data');
@@ -55,5 +57,27 @@ describe('planSheets()', () => {
     ]);
     expect(slugs).toContain('spec-brine-lark-letter-portrait');
     expect(slugs.filter((s) => s.includes('a3-landscape'))).toEqual([]);
+  });
+
+  it('gives every sheet, the boats\' and wall charts\' as well as the books\', the bleed and crop marks of the command line', async () => {
+    const project = await demo();
+    const asBooks = planSheets(project);
+    const bled = planSheets(project, { bleedMm: 5 });
+    expect(bled.sheets.length).toBe(asBooks.sheets.length);
+    for (const { request } of bled.sheets) {
+      expect(request.paper.bleedMm).toBe(5);
+      expect(withCropMarks(request.paper)).toBe(true);
+    }
+    // The scene grows by the bleed and the marks' slug: 5 mm bleed + 5 mm marks + 2 mm clear = 12 mm.
+    const wallChart = bled.sheets.find((s) => s.request.kind === 'wallChart')!;
+    const scene = sheetScene(wallChart.request, { project, dateIso: '2026-12-03' });
+    expect([scene.bleedMm, scene.trimBox.x, scene.trimBox.y, scene.widthMm]).toEqual([5, 12, 12, 420 + 24]);
+    // --no-crop-marks keeps each sheet's bleed (the demo's console-card book has 3 mm) and drops the marks,
+    // which the file name says; --bleed 0 leaves no sheet with bleed.
+    const unmarked = planSheets(project, { cropMarks: false });
+    const cards = unmarked.byBook.get('owner-console-cards')!.map((slug) => unmarked.sheets.find((s) => s.slug === slug)!);
+    expect(cards.map((c) => [c.request.paper.bleedMm, withCropMarks(c.request.paper)])).toEqual(cards.map(() => [3, false]));
+    expect(cards.every((c) => c.slug.endsWith('-bleed-no-marks'))).toBe(true);
+    expect(planSheets(project, { bleedMm: 0 }).sheets.filter((s) => s.request.paper.bleedMm > 0)).toEqual([]);
   });
 });

@@ -33,8 +33,9 @@ export function normaliseBook(source: YamlSource, raw: RawBookFile, reg: BookReg
       check({ path: ['sheets', i, 'boat'], id: s.boat, registry: reg.boats, what: 'boats', dir: 'boats' });
     }
   });
-  // A sheet's own paper keeps the book's bleed unless it says otherwise.
-  const paperOf = (s: RawSheet): RawPaper => (s.paper ? { ...s.paper, bleed_mm: s.paper.bleed_mm ?? raw.paper.bleed_mm } : raw.paper);
+  // A sheet's own paper keeps the book's bleed and crop marks unless it says otherwise.
+  const paperOf = (s: RawSheet): RawPaper =>
+    s.paper ? { ...s.paper, bleed_mm: s.paper.bleed_mm ?? raw.paper.bleed_mm, crop_marks: s.paper.crop_marks ?? raw.paper.crop_marks } : raw.paper;
   // One paper per book, unless the book asks for a mix: a stray paper: line is usually a leftover.
   if (!raw.mixed_paper) {
     const book = paperWords(raw.paper);
@@ -78,12 +79,13 @@ export function normaliseBook(source: YamlSource, raw: RawBookFile, reg: BookReg
 
 /** "A4 portrait", "4x6 landscape with 3 mm bleed": a paper as the file writes it, for messages. */
 function paperWords(p: RawPaper): string {
-  return `${p.size} ${p.orientation}${p.bleed_mm > 0 ? ` with ${p.bleed_mm} mm bleed` : ''}`;
+  const marks = p.crop_marks === undefined || p.crop_marks === p.bleed_mm > 0 ? '' : p.crop_marks ? ' with crop marks' : ' without crop marks';
+  return `${p.size} ${p.orientation}${p.bleed_mm > 0 ? ` with ${p.bleed_mm} mm bleed` : ''}${marks}`;
 }
 
 /** File paper → Paper; "4x6" is the 4 × 6 in card. */
 export function toPaper(p: RawPaper): Paper {
-  return { size: p.size === '4x6' ? 'Card4x6' : p.size, orientation: p.orientation, bleedMm: p.bleed_mm };
+  return { size: p.size === '4x6' ? 'Card4x6' : p.size, orientation: p.orientation, bleedMm: p.bleed_mm, ...(p.crop_marks !== undefined ? { cropMarks: p.crop_marks } : {}) };
 }
 
 function toSheet(s: RawSheet, paper: Paper): BookSheet {

@@ -11,10 +11,13 @@ const paperFields = {
 };
 const bleed = () => z.union([z.literal(0), z.literal(3)], { error: 'must be 0 or 3 (mm)' });
 
-export const paper = () => z.strictObject({ ...paperFields, bleed_mm: bleed().default(0) });
+/** Crop marks outside the bleed; without it, a sheet gets them exactly when it has bleed. */
+const cropMarks = () => z.boolean({ error: 'must be true or false (without it, crop marks come with bleed)' }).optional();
 
-/** A sheet's own paper: without bleed_mm it keeps the book's bleed (a print shop trims the whole book alike). */
-const sheetPaper = () => z.strictObject({ ...paperFields, bleed_mm: bleed().optional() });
+export const paper = () => z.strictObject({ ...paperFields, bleed_mm: bleed().default(0), crop_marks: cropMarks() });
+
+/** A sheet's own paper: without bleed_mm or crop_marks it keeps the book's (a print shop trims the whole book alike). */
+const sheetPaper = () => z.strictObject({ ...paperFields, bleed_mm: bleed().optional(), crop_marks: cropMarks() });
 
 const chartConditions = () =>
   unitChoices(
