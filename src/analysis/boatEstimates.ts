@@ -6,6 +6,7 @@
 import type { Boat, CruiseSetting } from '../data/types.ts';
 import {
   absorbedPowerKw,
+  DEFAULT_RESERVE_FRACTION,
   crouchConstantsFromTrials,
   crouchSpeedKn,
   fuelFlow,
@@ -56,7 +57,7 @@ export interface CruiseEstimate {
   readonly speedKn?: number;
   readonly fuelLPerH?: number;
   readonly fuelUsGalPerH?: number;
-  /** With a tank: hours and nautical miles keeping a third in reserve (rule of thirds). */
+  /** With a tank: hours and nautical miles keeping the boat's reserve (estimates.fuelReservePct). */
   readonly hoursWithReserve?: number;
   readonly rangeWithReserveNm?: number;
 }
@@ -104,11 +105,18 @@ export interface BoatEstimates {
   readonly bsfcGPerKwh: number;
   readonly bsfcSource: 'engine' | 'typical';
   readonly fuelKgPerL: number;
+  /** Share of the tank (%) the time and range figures keep in reserve. */
+  readonly fuelReservePct: number;
   readonly cruise: readonly CruiseEstimate[];
   readonly topSpeeds: readonly TopSpeedRow[];
   readonly upgrade: readonly UpgradeEstimate[];
   readonly speedGains: readonly SpeedGainRow[];
   readonly notes: readonly string[];
+}
+
+/** The share of the tank a boat keeps in reserve (a fraction). */
+export function reserveFraction(boat: Boat): number {
+  return boat.fuelReservePct !== undefined ? boat.fuelReservePct / 100 : DEFAULT_RESERVE_FRACTION;
 }
 
 /** Speed gains tabulated on upgrade sheets, %. */
@@ -129,7 +137,7 @@ function cruiseEstimate(boat: Boat, setting: CruiseSetting, inst: Installation, 
   const crouchKn = setting.kind === 'speed' ? setting.speedKn : crouchSpeedKn({ ...speed, shaftPowerKw: powerKw * eff });
   const planing = crouchKn >= planingFromKn;
   const fuel = fuelFlow({ powerKw, fuel: inst.engine.fuel, bsfcGPerKwh: inst.engine.bsfcGPerKwh });
-  const range = boat.fuelTankL === undefined || !planing ? undefined : fuelRange({ tankL: boat.fuelTankL, litresPerHour: fuel.litresPerHour, speedKn: crouchKn });
+  const range = boat.fuelTankL === undefined || !planing ? undefined : fuelRange({ tankL: boat.fuelTankL, litresPerHour: fuel.litresPerHour, speedKn: crouchKn, reserveFraction: reserveFraction(boat) });
   return {
     label: setting.label,
     kind: setting.kind,
@@ -206,6 +214,7 @@ export function boatEstimates(args: { boat: Boat; inst: Installation; calibratio
     bsfcGPerKwh: wotFuel.bsfcGPerKwh,
     bsfcSource: wotFuel.bsfcSource,
     fuelKgPerL: wotFuel.fuelKgPerL,
+    fuelReservePct: Math.round(reserveFraction(boat) * 1000) / 10,
     cruise: boat.cruise.map((c) => cruiseEstimate(boat, c, inst, speed, fitted.wotRpm, planingFromKn)),
     topSpeeds,
     upgrade,

@@ -31,7 +31,7 @@ export interface CruiseRow {
   /** Fuel flow, L/h (filled by the fuel model). */
   readonly fuelLPerH?: number;
   readonly fuelUsGalPerH?: number;
-  /** With a tank: hours and nautical miles keeping a third in reserve. */
+  /** With a tank: hours and nautical miles keeping the boat's reserve (estimates.fuelReservePct). */
   readonly hoursWithReserve?: number;
   readonly rangeWithReserveNm?: number;
 }

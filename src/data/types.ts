@@ -122,6 +122,8 @@ export interface Boat {
   readonly site: Site;
   readonly cruise: readonly CruiseSetting[];
   readonly fuelTankL?: number;
+  /** Share of the tank (%) kept in reserve for time and range; DEFAULT_RESERVE_FRACTION when absent. */
+  readonly fuelReservePct?: number;
   readonly trials: readonly SeaTrial[];
   readonly notes?: string;
   readonly source: SourceRef;

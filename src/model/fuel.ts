@@ -16,8 +16,11 @@ export const TYPICAL_BSFC_G_PER_KWH: Readonly<Record<Fuel, number>> = Object.fre
 /** Typical fuel densities, kg/L: petrol about 0.74, diesel about 0.84. Common practice, no source. */
 export const TYPICAL_FUEL_KG_PER_L: Readonly<Record<Fuel, number>> = Object.freeze({ petrol: 0.74, diesel: 0.84 });
 
-/** Rule of thirds (a third out, a third back, a third in reserve): common practice, no source. */
-export const DEFAULT_RESERVE_FRACTION = 1 / 3;
+/**
+ * A tenth of the tank kept in reserve for the time and range figures (common practice, no source); a boat
+ * may keep more (fuel_reserve_pct; a third is the rule of thirds: a third out, a third back, a third in reserve).
+ */
+export const DEFAULT_RESERVE_FRACTION = 0.1;
 
 export interface FuelFlow {
   readonly kgPerHour: number;

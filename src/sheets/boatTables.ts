@@ -56,6 +56,18 @@ export function speedText(speedKn: number, unit: SpeedUnit): string {
   return numberText(v, 0, 'boat speed');
 }
 
+/** Distance unit that goes with a speed unit: nautical miles with knots, statute miles with mph, km with km/h. */
+export function distanceUnit(unit: SpeedUnit): 'nm' | 'mi' | 'km' {
+  return unit === 'mph' ? 'mi' : unit === 'km/h' ? 'km' : 'nm';
+}
+
+/** A range given in nautical miles, in the distance unit of the speed unit, whole numbers. */
+export function distanceText(nm: number, unit: SpeedUnit): string {
+  // 1 nm = 1852 m exactly; per hour the same factors as the speed conversions (NIST SP 811).
+  const v = unit === 'mph' ? knToMph(nm) : unit === 'km/h' ? knToKmh(nm) : nm;
+  return numberText(v, 0, 'range');
+}
+
 /** Column header for estimated speeds: "Speed (kn, est.)". */
 export function speedHeader(unit: SpeedUnit, what = 'Speed'): string {
   return `${what} (${unit}, est.)`;
@@ -84,9 +96,21 @@ export function cruiseRows(boat: Boat, result: BoatResult, unit: PowerUnit, spee
   // alone leaves every cruise rpm where it was: the impeller's law sets rpm at a given power).
   const rpmOf = (row: CruiseRow) => (row.speedRpm !== undefined ? rpmText(row.speedRpm) : '–');
   const cal = shown !== result.cruise && shown.some((row, i) => rpmOf(row) !== rpmOf(result.cruise[i]));
+  // With a tank: time and range keeping the boat's reserve (the heading names it).
+  const range = shown.some((row) => row.rangeWithReserveNm !== undefined);
   return {
     sameRpmAsDataSheet: shown !== result.cruise && !cal,
-    columns: [{ ...words('Cruise setting'), shorten: true }, right('Asked'), right('Engine rpm'), ...(cal ? [{ ...right(DATA_SHEET_HEADER), optional: true }] : []), right(`Power (${unit})`), right(speedHeader(speedUnit)), right('Fuel (L/h, est.)'), words('Note')],
+    columns: [
+      { ...words('Cruise setting'), shorten: true },
+      right('Asked'),
+      right('Engine rpm'),
+      ...(cal ? [{ ...right(DATA_SHEET_HEADER), optional: true }] : []),
+      right(`Power (${unit})`),
+      right(speedHeader(speedUnit)),
+      right('Fuel (L/h, est.)'),
+      ...(range ? [right('Time (h, est.)'), right(`Range (${distanceUnit(speedUnit)}, est.)`)] : []),
+      words('Note'),
+    ],
     rows: shown.map((row, i) => [
       row.label,
       cruiseAsked(row, boat, unit),
@@ -95,6 +119,7 @@ export function cruiseRows(boat: Boat, result: BoatResult, unit: PowerUnit, spee
       row.powerKw !== undefined ? powerText(row.powerKw, unit).replace(` ${unit}`, '') : '–',
       row.speedKn !== undefined ? speedText(row.speedKn, speedUnit) : '–',
       row.fuelLPerH !== undefined ? numberText(row.fuelLPerH, 0, 'fuel flow') : '–',
+      ...(range ? [row.hoursWithReserve !== undefined ? numberText(row.hoursWithReserve, 1, 'running time') : '–', row.rangeWithReserveNm !== undefined ? distanceText(row.rangeWithReserveNm, speedUnit) : '–'] : []),
       cruiseNote(row),
     ]),
   };
@@ -104,7 +129,13 @@ export function cruiseRows(boat: Boat, result: BoatResult, unit: PowerUnit, spee
 export function estimatesNote(result: BoatResult): string {
   const e = result.estimates;
   const bsfc = e.bsfcSource === 'engine' ? `${e.bsfcGPerKwh} g/kWh from the engine data` : `a typical ${e.bsfcGPerKwh} g/kWh`;
-  return `Speed and fuel are estimates. Speed: Crouch’s planing formula on shaft power and ${Math.round(e.hull.displacementKg)} kg loaded. ${e.hull.note} Fuel: ${bsfc} and ${e.fuelKgPerL} kg/L (typical).`;
+  const reserve = (result.calibrated?.cruise ?? result.cruise).some((c) => c.rangeWithReserveNm !== undefined) ? ` Time and range keep ${reserveText(result)} of the tank in reserve.` : '';
+  return `Speed and fuel are estimates. Speed: Crouch’s planing formula on shaft power and ${Math.round(e.hull.displacementKg)} kg loaded. ${e.hull.note} Fuel: ${bsfc} and ${e.fuelKgPerL} kg/L (typical).${reserve}`;
+}
+
+/** The reserve the time and range figures keep: "10 %". */
+export function reserveText(result: BoatResult): string {
+  return `${numberText(result.estimates.fuelReservePct, result.estimates.fuelReservePct % 1 === 0 ? 0 : 1, 'fuel reserve')} %`;
 }
 
 /** A band whose ends share its most likely status, in words. */

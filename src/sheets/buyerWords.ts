@@ -10,7 +10,7 @@ import { numberText, rpmBandText, rpmText } from './kit/format.ts';
 import type { Cell, Column } from './kit/table.ts';
 import { INK, WARN } from './kit/style.ts';
 import { isWarning } from '../analysis/index.ts';
-import { estimatesNote, speedHeader, speedText, trialDatesText } from './boatTables.ts';
+import { distanceText, distanceUnit, estimatesNote, reserveText, speedHeader, speedText, trialDatesText } from './boatTables.ts';
 import { calibrationText } from './trialTables.ts';
 
 /** Whether an impeller suits the engine, in a buyer's words (completes "Impeller X …"). */
@@ -49,16 +49,17 @@ export function buyerAnswer(result: BoatResult, speedUnit: SpeedUnit): { headlin
   const range = `${rpmText(result.limits.windowLowRpm)}–${rpmText(result.limits.windowHighRpm)} rpm`;
   const on = result.calibrated ? ` (calibrated to ${trialDatesText(result)})` : '';
   const match = `Impeller ${result.impellerLabel} ${SUITS[n.status]}: full throttle should settle between ${rpmBandText(band.low.speedRpm, band.high.speedRpm)}${on}, ${LANDS[n.status]} (${range}; never above ${rpmText(result.limits.maxRpm)} rpm).`;
-  return { headline, match, cruise: cruiseLine(result.calibrated?.cruise ?? result.cruise, speedUnit) };
+  return { headline, match, cruise: cruiseLine(result.calibrated?.cruise ?? result.cruise, speedUnit, reserveText(result)) };
 }
 
 /** One sentence on cruising: the fastest cruise setting with an estimated speed, or why none has one. */
-function cruiseLine(rows: readonly CruiseRow[], unit: SpeedUnit): string {
+function cruiseLine(rows: readonly CruiseRow[], unit: SpeedUnit, reservePct: string): string {
   const usable = rows.filter((r) => r.status === 'ok' && r.speedKn !== undefined && r.speedRpm !== undefined);
   const best = usable.sort((a, b) => b.speedKn! - a.speedKn!)[0];
   if (best) {
     const fuel = best.fuelLPerH !== undefined ? `, about ${numberText(best.fuelLPerH, 0, 'fuel flow')} L of fuel an hour` : '';
-    return `Cruising (${best.label}): about ${speedWithUnit(best.speedKn!, unit)} at ${rpmText(best.speedRpm!)} rpm${fuel}.`;
+    const range = best.rangeWithReserveNm !== undefined && best.hoursWithReserve !== undefined ? `; a tank lasts about ${numberText(best.hoursWithReserve, 1, 'running time')} hours, about ${distanceText(best.rangeWithReserveNm, unit)} ${distanceUnit(unit)}, keeping ${reservePct} in reserve` : '';
+    return `Cruising (${best.label}): about ${speedWithUnit(best.speedKn!, unit)} at ${rpmText(best.speedRpm!)} rpm${fuel}${range}.`;
   }
   if (rows.length === 0) return '';
   return 'Cruising: every cruise setting of this boat is below planing speed, where no speed is estimated.';

@@ -13,11 +13,11 @@ import { assembleScene } from './kit/assemble.ts';
 import { ascentMm, label, linePitchMm, paragraph, type Block } from './kit/block.ts';
 import { CARD_CAUTION_LINE, cautionsFlow } from './kit/cautions.ts';
 import { flowPages, splittable, whole, type Flowable } from './kit/flow.ts';
-import { rpmBandText, rpmText } from './kit/format.ts';
+import { numberText, rpmBandText, rpmText } from './kit/format.ts';
 import { sheetFrame, type SheetFrame } from './kit/frame.ts';
 import { INK, INK_SOFT, STROKE, WARN, stroke, typeScale } from './kit/style.ts';
 import { findBoat, type SheetContext } from './context.ts';
-import { speedText, trialDatesText } from './boatTables.ts';
+import { distanceText, distanceUnit, reserveText, speedText, trialDatesText } from './boatTables.ts';
 import { exactRpmText } from './trialTables.ts';
 import { LayoutError } from './kit/errors.ts';
 
@@ -99,8 +99,11 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
           ? 'below planing: no estimate'
           : c.speedBasis === 'belowPlaning' || c.speedKn === undefined
             ? 'below planing: speed not estimated'
-            : `~${speedText(c.speedKn, speedUnit)} ${speedUnit} (est.)`,
+            : c.hoursWithReserve !== undefined && c.rangeWithReserveNm !== undefined
+              ? `~${speedText(c.speedKn, speedUnit)} ${speedUnit}, ~${numberText(c.hoursWithReserve, 1, 'running time')} h, ~${distanceText(c.rangeWithReserveNm, speedUnit)} ${distanceUnit(speedUnit)} (est.)`
+              : `~${speedText(c.speedKn, speedUnit)} ${speedUnit} (est.)`,
     }));
+  const withRange = (result.calibrated?.cruise ?? result.cruise).some((c) => c.rangeWithReserveNm !== undefined && c.status !== 'aboveWot');
   const columns = box.width > box.height ? 2 : 1;
 
   /** The range at display size, then "most likely" and "never above" as small words over large figures. */
@@ -174,6 +177,11 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
       if (from === 0) {
         nodes.push(label({ x, y: cursor + ascentMm(type.heading, 'bold'), text: 'Cruise rpm', sizePt: type.heading, weight: 'bold', role: 'heading', where }));
         cursor += linePitchMm(type.heading, 'bold');
+        if (withRange) {
+          const note = paragraph({ x, y: cursor, widthMm, text: `Time and range keep ${reserveText(result)} of the tank in reserve.`, sizePt: type.small, colour: INK_SOFT, role: 'cruise-reserve', where });
+          nodes.push(...note.nodes);
+          cursor += note.heightMm;
+        }
       }
       const rpmWidth = Math.max(...cruise.map((c) => measureFigure(c.rpm)));
       const textWidth = widthMm - rpmWidth - 3;

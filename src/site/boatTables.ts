@@ -6,7 +6,7 @@
  */
 import { isWarning, type BoatResult, type CruiseRow } from '../analysis/index.ts';
 import type { Boat, PowerUnit, SpeedUnit } from '../data/types.ts';
-import { acrossBandText, estimatesNote, speedHeader, speedText, trialDatesText } from '../sheets/boatTables.ts';
+import { acrossBandText, distanceText, distanceUnit, estimatesNote, reserveText, speedHeader, speedText, trialDatesText } from '../sheets/boatTables.ts';
 import { numberText, percentText, rpmBandText, rpmText } from '../sheets/kit/format.ts';
 import { powerCell, ratingCell } from './cells.ts';
 import type { CellView, TableView } from './siteView.ts';
@@ -106,7 +106,7 @@ export function cruiseTable(args: BoatTableArgs): TableView {
     speedHeader(speedUnit),
     'Fuel (L/h, est.)',
     'Fuel (US gal/h, est.)',
-    ...(range ? ['Range keeping a third (nm, est.)'] : []),
+    ...(range ? [`Time keeping ${reserveText(r)} (h, est.)`, `Range keeping ${reserveText(r)} (${distanceUnit(speedUnit)}, est.)`] : []),
     ...(cal ? ['Data-sheet rpm', `Data-sheet power (${unit})`] : []),
     'Note',
   ];
@@ -124,7 +124,7 @@ export function cruiseTable(args: BoatTableArgs): TableView {
         c.speedKn === undefined ? '–' : speedText(c.speedKn, speedUnit),
         optionalNumber(c.fuelLPerH, 0, 'fuel flow'),
         optionalNumber(c.fuelUsGalPerH, 1, 'fuel flow'),
-        ...(range ? [optionalNumber(c.rangeWithReserveNm, 0, 'range')] : []),
+        ...(range ? [optionalNumber(c.hoursWithReserve, 1, 'running time'), c.rangeWithReserveNm === undefined ? '–' : distanceText(c.rangeWithReserveNm, speedUnit)] : []),
         ...(cal ? [dataSheet(data?.speedRpm === undefined ? '–' : rpmText(data.speedRpm)), dataSheet(data?.powerKw === undefined ? '–' : powerCell(data.powerKw, unit))] : []),
         status(c.status === 'ok' && c.speedBasis === 'belowPlaning' ? 'Below WOT; below planing speed, so no speed estimate' : CRUISE_STATUS[c.status], c.status === 'aboveWot'),
       ];

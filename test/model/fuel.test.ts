@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { fuelFlow, fuelRange, TYPICAL_BSFC_G_PER_KWH } from '../../src/model/fuel.ts';
+import { DEFAULT_RESERVE_FRACTION, fuelFlow, fuelRange, TYPICAL_BSFC_G_PER_KWH } from '../../src/model/fuel.ts';
 import { litresToUsGal, usGalToLitres } from '../../src/units.ts';
 
 describe('fuelFlow()', () => {
@@ -41,10 +41,19 @@ describe('fuelFlow()', () => {
 describe('fuelRange()', () => {
   it('gives 4.23 h and 105.7 nm for 200 L at 47.30 L/h and 25 kn, and two thirds of that keeping a third back (hand-computed)', () => {
     // 200 / 47.2973 = 4.2286 h; × 25 kn = 105.71 nm; rule of thirds (common practice, no source) leaves 2/3.
-    const r = fuelRange({ tankL: 200, litresPerHour: 47.2973, speedKn: 25 });
+    const r = fuelRange({ tankL: 200, litresPerHour: 47.2973, speedKn: 25, reserveFraction: 1 / 3 });
     expect(r.hoursToEmpty).toBeCloseTo(4.2286, 4);
     expect(r.rangeToEmptyNm).toBeCloseTo(105.71, 2);
     expect(r.rangeWithReserveNm).toBeCloseTo(105.71 * (2 / 3), 2);
+  });
+
+  it('keeps a tenth of the tank in reserve unless told otherwise (hand-computed)', () => {
+    // 200 × 0.9 / 47.2973 = 3.8057 h; × 25 kn = 95.14 nm.
+    const r = fuelRange({ tankL: 200, litresPerHour: 47.2973, speedKn: 25 });
+    expect(DEFAULT_RESERVE_FRACTION).toBe(0.1);
+    expect(r.reserveFraction).toBe(0.1);
+    expect(r.hoursWithReserve).toBeCloseTo(3.8057, 4);
+    expect(r.rangeWithReserveNm).toBeCloseTo(95.14, 2);
   });
 
   it('has no distance without a speed and refuses a reserve of the whole tank', () => {

@@ -55,6 +55,7 @@ export function normaliseBoat(source: YamlSource, raw: RawBoatFile, reg: BoatReg
     site,
     cruise: raw.cruise.map(toCruise),
     ...(fuelTankL !== undefined ? { fuelTankL } : {}),
+    ...(raw.fuel_reserve_pct !== undefined ? { fuelReservePct: raw.fuel_reserve_pct } : {}),
     trials: raw.trials.map((t) => toTrial(t, { site, water })).sort((a, b) => (a.date < b.date ? -1 : a.date > b.date ? 1 : 0)),
     ...(raw.notes !== undefined ? { notes: raw.notes } : {}),
     source: { file: source.file },

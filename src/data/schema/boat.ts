@@ -69,6 +69,8 @@ export const boatFile = () =>
       cruise: atMost(z.array(cruise(), { error: 'must be a list of cruise settings' }), LIMITS.cruisePerBoat, 'the sheets list each cruise setting on its own row; keep the ones the owner uses').default([]),
       fuel_tank_l: between(1, 100000, 'L').optional(),
       fuel_tank_us_gal: between(0.3, 26000, 'US gal').optional(),
+      /** Share of the tank kept in reserve for the time and range figures; 10 % when absent. */
+      fuel_reserve_pct: between(0, 50, '%').optional(),
       trials: z.array(trial(), { error: 'must be a list of sea-trial records' }).default([]),
     }),
     [{ keys: ['fuel_tank_l', 'fuel_tank_us_gal'], required: false }],
