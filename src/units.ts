@@ -22,6 +22,8 @@ const M_PER_MILE = 1609.344;
 const M_PER_NMI = 1852;
 /** US liquid gallon in litres (231 in³, exact). */
 const LITRES_PER_US_GAL = 3.785411784;
+/** Imperial gallon in litres (4.546 09 L, exact by definition; NIST SP 811 appendix B). */
+const LITRES_PER_IMP_GAL = 4.54609;
 
 /** Horsepower (550 ft·lbf/s) in watts: 745.699 871 582 270 2 W. */
 export const WATTS_PER_HP = 550 * M_PER_FT * N_PER_LBF;
@@ -163,6 +165,10 @@ export function kmhToKn(x: number): number {
 /** Litres to US gallons (also L/h to US gal/h). */
 export function litresToUsGal(x: number): number {
   return x / LITRES_PER_US_GAL;
+}
+/** Litres to imperial gallons (also L/h to imp gal/h). */
+export function litresToImpGal(x: number): number {
+  return x / LITRES_PER_IMP_GAL;
 }
 /** US gallons to litres (also US gal/h to L/h). */
 export function usGalToLitres(x: number): number {

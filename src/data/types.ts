@@ -78,7 +78,7 @@ export interface SiteFields {
 export type CruiseSetting =
   | { readonly kind: 'power'; readonly label: string; readonly powerKw: number }
   | { readonly kind: 'rpm'; readonly label: string; readonly speedRpm: number }
-  | { readonly kind: 'speed'; readonly label: string; readonly speedKn: number };
+  | { readonly kind: 'speed'; readonly label: string; readonly speedKn: number; /** The speed as typed, to print unchanged in its own unit. */ readonly typed?: { readonly value: number; readonly unit: SpeedUnit } };
 
 export type HullType = 'runabout' | 'cruiser' | 'high-speed-runabout' | 'workboat' | 'race';
 
@@ -146,7 +146,7 @@ export interface BookCautions {
   readonly texts: readonly string[];
 }
 
-export type SheetRequest = { readonly bookCautions?: BookCautions } & (
+export type SheetRequest = { readonly bookCautions?: BookCautions; readonly units?: UnitsOverride } & (
   | {
       readonly kind: 'wallChart';
       readonly engineFamilyId: string;
@@ -182,6 +182,7 @@ export type BookSheet =
       readonly conditions: BookChartConditions;
       readonly paper: Paper;
       readonly bookCautions?: BookCautions;
+      readonly units?: UnitsOverride;
     };
 
 export interface Book {
@@ -196,12 +197,25 @@ export interface Book {
 
 export type PowerUnit = 'kW' | 'hp';
 export type SpeedUnit = 'kn' | 'mph' | 'km/h';
+export type FuelUnit = 'L/h' | 'US gal/h' | 'imp gal/h';
+
+/** Units a book or one of its sheets prints in instead of the site's (each field given replaces the site's). */
+export interface UnitsOverride {
+  readonly powerUnitFirst?: PowerUnit;
+  readonly speedUnit?: SpeedUnit;
+  /** A second speed unit in brackets; null: none, even where the site gives one. */
+  readonly speedAlso?: SpeedUnit | null;
+  readonly fuelUnit?: FuelUnit;
+}
 
 export interface SiteConfig {
   readonly shopName: string;
   readonly contactLine: string;
   readonly powerUnitFirst: PowerUnit;
   readonly speedUnit: SpeedUnit;
+  /** A second speed unit, printed in brackets after the first. */
+  readonly speedAlso?: SpeedUnit;
+  readonly fuelUnit: FuelUnit;
   /** The shop's own cautions (site.yaml `cautions`), printed after the built-in ones, which always print. */
   readonly extraCautions?: readonly string[];
   /** Shown on every sheet as the data revision ("2026-11 rev 3"). */

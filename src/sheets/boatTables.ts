@@ -3,9 +3,9 @@
  * usable sea trials gets its figures on the calibrated model first and the data-sheet figure beside them in
  * a narrower, softer column, so the difference is visible.
  */
-import type { Boat, PowerUnit, SpeedUnit } from '../data/types.ts';
+import type { Boat, FuelUnit, PowerUnit, SiteConfig, SpeedUnit } from '../data/types.ts';
 import { isWarning, toleranceNote, type BandResult, type BoatResult, type CruiseRow } from '../analysis/index.ts';
-import { knToKmh, knToMph } from '../units.ts';
+import { knToKmh, knToMph, litresToImpGal, litresToUsGal } from '../units.ts';
 import { numberText, powerBothText, powerText, rpmBandText, rpmText } from './kit/format.ts';
 import type { Cell, Column } from './kit/table.ts';
 import { INK, INK_SOFT, WARN } from './kit/style.ts';
@@ -29,12 +29,22 @@ export function fittedRows(boat: Boat, result: BoatResult, unit: PowerUnit): { c
   };
 }
 
-function cruiseAsked(row: CruiseRow, boat: Boat, unit: PowerUnit): string {
+function cruiseAsked(row: CruiseRow, boat: Boat, unit: PowerUnit, speedUnit: SpeedUnit): string {
   const setting = boat.cruise.find((c) => c.label === row.label);
   if (!setting) return '–';
   if (setting.kind === 'power') return powerText(setting.powerKw, unit);
   if (setting.kind === 'rpm') return `${rpmText(setting.speedRpm)} rpm`;
-  return `${numberText(setting.speedKn, 1, 'cruise speed')} kn`;
+  return `${askedSpeedText(setting, speedUnit)} ${speedUnit}`;
+}
+
+/**
+ * A cruise speed as asked, in a unit: the number as typed when the unit is the one it was typed in (28 mph
+ * stays "28"), else converted to a tenth.
+ */
+export function askedSpeedText(setting: { speedKn: number; typed?: { value: number; unit: SpeedUnit } }, unit: SpeedUnit): string {
+  if (setting.typed?.unit === unit) return String(setting.typed.value);
+  const v = unit === 'mph' ? knToMph(setting.speedKn) : unit === 'km/h' ? knToKmh(setting.speedKn) : setting.speedKn;
+  return numberText(v, 1, 'cruise speed');
 }
 
 const CRUISE_NOTES: Readonly<Record<CruiseRow['status'], string>> = {
@@ -50,10 +60,27 @@ function cruiseNote(row: CruiseRow): string {
   return CRUISE_NOTES[row.status] || '–';
 }
 
-/** Boat speed in the site's unit, whole numbers (estimates: a decimal would claim too much). */
-export function speedText(speedKn: number, unit: SpeedUnit): string {
-  const v = unit === 'mph' ? knToMph(speedKn) : unit === 'km/h' ? knToKmh(speedKn) : speedKn;
-  return numberText(v, 0, 'boat speed');
+/** Boat speed in the site's unit, whole numbers (estimates: a decimal would claim too much); with a second unit, "29 (25)". */
+export function speedText(speedKn: number, unit: SpeedUnit, also?: SpeedUnit): string {
+  const one = (u: SpeedUnit) => numberText(u === 'mph' ? knToMph(speedKn) : u === 'km/h' ? knToKmh(speedKn) : speedKn, 0, 'boat speed');
+  return also && also !== unit ? `${one(unit)} (${one(also)})` : one(unit);
+}
+
+/** A speed with its unit: "29 mph", or with a second unit in brackets "29 mph (25 kn)". */
+export function speedWithUnit(speedKn: number, unit: SpeedUnit, also?: SpeedUnit): string {
+  return also && also !== unit ? `${speedText(speedKn, unit)} ${unit} (${speedText(speedKn, also)} ${also})` : `${speedText(speedKn, unit)} ${unit}`;
+}
+
+/** Fuel flow in the sheet's unit: whole litres an hour, gallons an hour to a tenth. */
+export function fuelText(litresPerHour: number, unit: FuelUnit): string {
+  if (unit === 'L/h') return numberText(litresPerHour, 0, 'fuel flow');
+  return numberText(unit === 'US gal/h' ? litresToUsGal(litresPerHour) : litresToImpGal(litresPerHour), 1, 'fuel flow');
+}
+
+/** "about 67 L of fuel an hour", "about 17.7 US gallons of fuel an hour". */
+export function fuelWords(litresPerHour: number, unit: FuelUnit): string {
+  const words = unit === 'L/h' ? 'L' : unit === 'US gal/h' ? 'US gallons' : 'imperial gallons';
+  return `about ${fuelText(litresPerHour, unit)} ${words} of fuel an hour`;
 }
 
 /** Distance unit that goes with a speed unit: nautical miles with knots, statute miles with mph, km with km/h. */
@@ -69,8 +96,8 @@ export function distanceText(nm: number, unit: SpeedUnit): string {
 }
 
 /** Column header for estimated speeds: "Speed (kn, est.)". */
-export function speedHeader(unit: SpeedUnit, what = 'Speed'): string {
-  return `${what} (${unit}, est.)`;
+export function speedHeader(unit: SpeedUnit, what = 'Speed', also?: SpeedUnit): string {
+  return also && also !== unit ? `${what}, ${unit} (${also}), est.` : `${what} (${unit}, est.)`;
 }
 
 /** A data-sheet figure printed beside a calibrated one: softer ink, never bold. */
@@ -90,7 +117,7 @@ export function trialDatesText(result: BoatResult): string {
 }
 
 /** Cruise settings: what was asked, engine rpm (calibrated, with the data-sheet rpm where it differs) and power, estimated speed and fuel, a note. */
-export function cruiseRows(boat: Boat, result: BoatResult, unit: PowerUnit, speedUnit: SpeedUnit = 'kn'): { columns: Column[]; rows: Cell[][]; sameRpmAsDataSheet: boolean } {
+export function cruiseRows(boat: Boat, result: BoatResult, unit: PowerUnit, speedUnit: SpeedUnit = 'kn', units: Pick<SiteConfig, 'speedAlso' | 'fuelUnit'> = { fuelUnit: 'L/h' }): { columns: Column[]; rows: Cell[][]; sameRpmAsDataSheet: boolean } {
   const shown = result.calibrated?.cruise ?? result.cruise;
   // The data-sheet column earns its room only where calibration moved a printed rpm (a fitted engine factor
   // alone leaves every cruise rpm where it was: the impeller's law sets rpm at a given power).
@@ -106,19 +133,19 @@ export function cruiseRows(boat: Boat, result: BoatResult, unit: PowerUnit, spee
       right('Engine rpm'),
       ...(cal ? [{ ...right(DATA_SHEET_HEADER), optional: true }] : []),
       right(`Power (${unit})`),
-      right(speedHeader(speedUnit)),
-      right('Fuel (L/h, est.)'),
+      right(speedHeader(speedUnit, 'Speed', units.speedAlso)),
+      right(`Fuel (${units.fuelUnit}, est.)`),
       ...(range ? [right('Time (h, est.)'), right(`Range (${distanceUnit(speedUnit)}, est.)`)] : []),
       words('Note'),
     ],
     rows: shown.map((row, i) => [
       row.label,
-      cruiseAsked(row, boat, unit),
+      cruiseAsked(row, boat, unit, speedUnit),
       rpmOf(row),
       ...(cal ? [soft(rpmOf(result.cruise[i]))] : []),
       row.powerKw !== undefined ? powerText(row.powerKw, unit).replace(` ${unit}`, '') : '–',
-      row.speedKn !== undefined ? speedText(row.speedKn, speedUnit) : '–',
-      row.fuelLPerH !== undefined ? numberText(row.fuelLPerH, 0, 'fuel flow') : '–',
+      row.speedKn !== undefined ? speedText(row.speedKn, speedUnit, units.speedAlso) : '–',
+      row.fuelLPerH !== undefined ? fuelText(row.fuelLPerH, units.fuelUnit) : '–',
       ...(range ? [row.hoursWithReserve !== undefined ? numberText(row.hoursWithReserve, 1, 'running time') : '–', row.rangeWithReserveNm !== undefined ? distanceText(row.rangeWithReserveNm, speedUnit) : '–'] : []),
       cruiseNote(row),
     ]),

@@ -5,12 +5,12 @@
  * technical note. Wording of our own, for a reader with no engineering training.
  */
 import type { BandResult, BoatResult, CruiseRow, MatchStatus } from '../analysis/index.ts';
-import type { SpeedUnit } from '../data/types.ts';
+import type { SiteConfig, SpeedUnit } from '../data/types.ts';
 import { numberText, rpmBandText, rpmText } from './kit/format.ts';
 import type { Cell, Column } from './kit/table.ts';
 import { INK, WARN } from './kit/style.ts';
 import { isWarning } from '../analysis/index.ts';
-import { distanceText, distanceUnit, estimatesNote, reserveText, speedHeader, speedText, trialDatesText } from './boatTables.ts';
+import { distanceText, distanceUnit, estimatesNote, fuelWords, reserveText, speedHeader, speedText, speedWithUnit, trialDatesText } from './boatTables.ts';
 import { calibrationText } from './trialTables.ts';
 
 /** Whether an impeller suits the engine, in a buyer's words (completes "Impeller X …"). */
@@ -32,7 +32,6 @@ const LANDS: Readonly<Record<MatchStatus, string>> = {
 };
 
 /** "38 kn". */
-const speedWithUnit = (kn: number, unit: SpeedUnit) => `${speedText(kn, unit)} ${unit}`;
 
 /** The fitted impeller's figures as the sheet shows them (calibrated first). */
 function fittedFigures(result: BoatResult): { band: BandResult; topKn?: number } {
@@ -41,25 +40,25 @@ function fittedFigures(result: BoatResult): { band: BandResult; topKn?: number }
 }
 
 /** The sheet's answer: a headline (top speed and full-throttle rpm) and lines on the match and on cruising. */
-export function buyerAnswer(result: BoatResult, speedUnit: SpeedUnit): { headline: string; match: string; cruise: string } {
+export function buyerAnswer(result: BoatResult, speedUnit: SpeedUnit, units: Pick<SiteConfig, 'speedAlso' | 'fuelUnit'> = { fuelUnit: 'L/h' }): { headline: string; match: string; cruise: string } {
   const { band, topKn } = fittedFigures(result);
   const n = band.nominal;
-  const top = topKn !== undefined ? `Top speed about ${speedWithUnit(topKn, speedUnit)}` : 'Top speed not estimated';
+  const top = topKn !== undefined ? `Top speed about ${speedWithUnit(topKn, speedUnit, units.speedAlso)}` : 'Top speed not estimated';
   const headline = `${top} at full throttle, ${rpmText(n.speedRpm)} rpm`;
   const range = `${rpmText(result.limits.windowLowRpm)}–${rpmText(result.limits.windowHighRpm)} rpm`;
   const on = result.calibrated ? ` (calibrated to ${trialDatesText(result)})` : '';
   const match = `Impeller ${result.impellerLabel} ${SUITS[n.status]}: full throttle should settle between ${rpmBandText(band.low.speedRpm, band.high.speedRpm)}${on}, ${LANDS[n.status]} (${range}; never above ${rpmText(result.limits.maxRpm)} rpm).`;
-  return { headline, match, cruise: cruiseLine(result.calibrated?.cruise ?? result.cruise, speedUnit, reserveText(result)) };
+  return { headline, match, cruise: cruiseLine(result.calibrated?.cruise ?? result.cruise, speedUnit, reserveText(result), units) };
 }
 
 /** One sentence on cruising: the fastest cruise setting with an estimated speed, or why none has one. */
-function cruiseLine(rows: readonly CruiseRow[], unit: SpeedUnit, reservePct: string): string {
+function cruiseLine(rows: readonly CruiseRow[], unit: SpeedUnit, reservePct: string, units: Pick<SiteConfig, 'speedAlso' | 'fuelUnit'>): string {
   const usable = rows.filter((r) => r.status === 'ok' && r.speedKn !== undefined && r.speedRpm !== undefined);
   const best = usable.sort((a, b) => b.speedKn! - a.speedKn!)[0];
   if (best) {
-    const fuel = best.fuelLPerH !== undefined ? `, about ${numberText(best.fuelLPerH, 0, 'fuel flow')} L of fuel an hour` : '';
+    const fuel = best.fuelLPerH !== undefined ? `, ${fuelWords(best.fuelLPerH, units.fuelUnit)}` : '';
     const range = best.rangeWithReserveNm !== undefined && best.hoursWithReserve !== undefined ? `; a tank lasts about ${numberText(best.hoursWithReserve, 1, 'running time')} hours, about ${distanceText(best.rangeWithReserveNm, unit)} ${distanceUnit(unit)}, keeping ${reservePct} in reserve` : '';
-    return `Cruising (${best.label}): about ${speedWithUnit(best.speedKn!, unit)} at ${rpmText(best.speedRpm!)} rpm${fuel}${range}.`;
+    return `Cruising (${best.label}): about ${speedWithUnit(best.speedKn!, unit, units.speedAlso)} at ${rpmText(best.speedRpm!)} rpm${fuel}${range}.`;
   }
   if (rows.length === 0) return '';
   return 'Cruising: every cruise setting of this boat is below planing speed, where no speed is estimated.';
@@ -109,13 +108,13 @@ export function technicalNote(result: BoatResult, tolerances: { impellerPct: num
 }
 
 /** The other impellers as a table: each in plain words against the fitted one, its full-throttle rpm and top speed. */
-export function otherImpellerRows(result: BoatResult, speedUnit: SpeedUnit): { columns: Column[]; rows: Cell[][] } {
+export function otherImpellerRows(result: BoatResult, speedUnit: SpeedUnit, also?: SpeedUnit): { columns: Column[]; rows: Cell[][] } {
   return {
     columns: [
       { header: 'Impeller', align: 'left', wrap: true },
       { header: 'Against the fitted one', align: 'left', wrap: true },
       { header: 'Full throttle (rpm)', align: 'right' },
-      { header: speedHeader(speedUnit, 'Top'), align: 'right' },
+      { header: speedHeader(speedUnit, 'Top', also), align: 'right' },
     ],
     rows: alternativeWords(result).map((a) => {
       const weight = a.fitted ? ('bold' as const) : ('regular' as const);
@@ -124,7 +123,7 @@ export function otherImpellerRows(result: BoatResult, speedUnit: SpeedUnit): { c
         { text: a.fitted ? `${a.label} (fitted)` : a.label, weight },
         { text: a.words, weight: warn ? 'bold' : weight, colour: warn ? WARN : INK },
         { text: rpmText(a.rpm), weight },
-        { text: a.topKn !== undefined ? speedText(a.topKn, speedUnit) : '–', weight },
+        { text: a.topKn !== undefined ? speedText(a.topKn, speedUnit, also) : '–', weight },
       ];
     }),
   };

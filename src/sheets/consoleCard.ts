@@ -17,7 +17,7 @@ import { numberText, rpmBandText, rpmText } from './kit/format.ts';
 import { sheetFrame, type SheetFrame } from './kit/frame.ts';
 import { INK, INK_SOFT, STROKE, WARN, stroke, typeScale } from './kit/style.ts';
 import { findBoat, type SheetContext } from './context.ts';
-import { distanceText, distanceUnit, reserveText, speedText, trialDatesText } from './boatTables.ts';
+import { distanceText, distanceUnit, reserveText, speedWithUnit, trialDatesText } from './boatTables.ts';
 import { exactRpmText } from './trialTables.ts';
 import { LayoutError } from './kit/errors.ts';
 
@@ -100,8 +100,8 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
           : c.speedBasis === 'belowPlaning' || c.speedKn === undefined
             ? 'below planing: speed not estimated'
             : c.hoursWithReserve !== undefined && c.rangeWithReserveNm !== undefined
-              ? `~${speedText(c.speedKn, speedUnit)} ${speedUnit}, ~${numberText(c.hoursWithReserve, 1, 'running time')} h, ~${distanceText(c.rangeWithReserveNm, speedUnit)} ${distanceUnit(speedUnit)} (est.)`
-              : `~${speedText(c.speedKn, speedUnit)} ${speedUnit} (est.)`,
+              ? `~${speedWithUnit(c.speedKn, speedUnit, site.speedAlso)} · ${numberText(c.hoursWithReserve, 1, 'running time')} h · ${distanceText(c.rangeWithReserveNm, speedUnit)} ${distanceUnit(speedUnit)}`
+              : `~${speedWithUnit(c.speedKn, speedUnit, site.speedAlso)} (est.)`,
     }));
   const withRange = (result.calibrated?.cruise ?? result.cruise).some((c) => c.rangeWithReserveNm !== undefined && c.status !== 'aboveWot');
   const columns = box.width > box.height ? 2 : 1;
@@ -178,7 +178,7 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
         nodes.push(label({ x, y: cursor + ascentMm(type.heading, 'bold'), text: 'Cruise rpm', sizePt: type.heading, weight: 'bold', role: 'heading', where }));
         cursor += linePitchMm(type.heading, 'bold');
         if (withRange) {
-          const note = paragraph({ x, y: cursor, widthMm, text: `Time and range keep ${reserveText(result)} of the tank in reserve.`, sizePt: type.small, colour: INK_SOFT, role: 'cruise-reserve', where });
+          const note = paragraph({ x, y: cursor, widthMm, text: `Speed, time and range are estimates; time and range keep ${reserveText(result)} of the tank in reserve.`, sizePt: type.small, colour: INK_SOFT, role: 'cruise-reserve', where });
           nodes.push(...note.nodes);
           cursor += note.heightMm;
         }

@@ -82,10 +82,10 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
   const common = { sizePt: type.body, minSizePt: type.min, headingPt: type.heading, where };
   const fitted = fittedRows(boat, result, unit);
   const speedUnit = site.speedUnit;
-  const answer = buyerAnswer(result, speedUnit);
-  const cruise = cruiseRows(boat, result, unit, speedUnit);
+  const answer = buyerAnswer(result, speedUnit, site);
+  const cruise = cruiseRows(boat, result, unit, speedUnit, site);
   const cruiseHeading = !calibratedTo ? 'Cruising' : `Cruising, calibrated to ${calibratedTo}${cruise.sameRpmAsDataSheet ? ' (rpm as on the data sheet)' : ''}`;
-  const others = otherImpellerRows(result, speedUnit);
+  const others = otherImpellerRows(result, speedUnit, site.speedAlso);
   const trialCount = result.calibrated?.calibration.trials.length ?? 0;
   const parts = (chartMm: number, trials: ReturnType<typeof trialRows>, compact: boolean): Flowable[] => [
     whole(({ x, y, widthMm }) => {
@@ -159,7 +159,7 @@ export function specSheetScene(request: BoatRequest, ctx: SheetContext): Scene {
     content: pages[0].nodes,
     more: pages.slice(1).map((p) => ({ frame: p.frame, content: p.nodes })),
     title: `${boat.name}: spec sheet`,
-    description: `Spec sheet for ${boat.name}: ${buyerAnswer(result, site.speedUnit).headline}; ${wotHeadline(result, unit)}; cruising, every impeller of ${boat.jet.label}, and cautions.`,
+    description: `Spec sheet for ${boat.name}: ${buyerAnswer(result, site.speedUnit, site).headline}; ${wotHeadline(result, unit)}; cruising, every impeller of ${boat.jet.label}, and cautions.`,
     subject: 'Boat spec sheet',
     keywords: ['spec sheet', boat.id, boat.engineFamilyId, boat.jetId],
     dateIso: ctx.dateIso,

@@ -18,7 +18,7 @@ import { stack } from './kit/stack.ts';
 import { INK, STROKE, WARN, typeScale } from './kit/style.ts';
 import { findBoat, type SheetContext } from './context.ts';
 import { tableFlow } from './specSheet.ts';
-import { speedHeader, speedText, trialDatesText } from './boatTables.ts';
+import { speedHeader, speedText, speedWithUnit, trialDatesText } from './boatTables.ts';
 import { calibratedChartView } from './calibratedView.ts';
 
 type BoatRequest = Extract<SheetRequest, { kind: 'upgradeSheet' }>;
@@ -86,14 +86,14 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
     ...engines.flatMap((e) => [result.limits.windowLowRpm, result.limits.windowHighRpm].map((rpm) => ({ speedRpm: rpm, powerKw: e.site.powerKwUnchecked(rpm) }))),
   ];
   const upgradeRows = [
-    ['As now', rpmText(wot.nominal.speedRpm), powerText(wot.nominal.powerKw, unit), fittedTop !== undefined ? speedText(fittedTop, speedUnit) : '–', wot.nominal.statusText, '–'],
+    ['As now', rpmText(wot.nominal.speedRpm), powerText(wot.nominal.powerKw, unit), fittedTop !== undefined ? speedText(fittedTop, speedUnit, site.speedAlso) : '–', wot.nominal.statusText, '–'],
     ...upgrade.map((u) => [
       percentText(u.changePct),
       rpmText(u.wot.speedRpm),
       powerText(u.wot.powerKw, unit),
-      u.speedKn !== undefined ? speedText(u.speedKn, speedUnit) : '–',
+      u.speedKn !== undefined ? speedText(u.speedKn, speedUnit, site.speedAlso) : '–',
       { text: u.wot.statusText, weight: isWarning(u.wot.status) ? ('bold' as const) : ('regular' as const), colour: isWarning(u.wot.status) ? WARN : INK },
-      u.best ? `${label(u.best.impellerId)}: ${rpmText(u.best.wotRpm)} rpm, ${speedText(u.best.speedKn, speedUnit)} ${speedUnit}` : 'none matched',
+      u.best ? `${label(u.best.impellerId)}: ${rpmText(u.best.wotRpm)} rpm, ${speedWithUnit(u.best.speedKn, speedUnit, site.speedAlso)}` : 'none matched',
     ]),
   ];
   // One sentence per speed gain: the power change with the fitted impeller, and with the best re-match.
@@ -130,7 +130,7 @@ export function upgradeSheetScene(request: BoatRequest, ctx: SheetContext): Scen
         { header: 'Power change', align: 'left' },
         { header: 'WOT rpm', align: 'right' },
         { header: 'Power at WOT', align: 'right' },
-        { header: speedHeader(speedUnit, 'Top'), align: 'right' },
+        { header: speedHeader(speedUnit, 'Top', site.speedAlso), align: 'right' },
         { header: 'Status', align: 'left', wrap: true },
         { header: 'Best impeller for the new power', align: 'left', wrap: true },
       ],

@@ -6,7 +6,7 @@
  */
 import { isWarning, type BoatResult, type CruiseRow } from '../analysis/index.ts';
 import type { Boat, PowerUnit, SpeedUnit } from '../data/types.ts';
-import { acrossBandText, distanceText, distanceUnit, estimatesNote, reserveText, speedHeader, speedText, trialDatesText } from '../sheets/boatTables.ts';
+import { acrossBandText, askedSpeedText, distanceText, distanceUnit, estimatesNote, reserveText, speedHeader, speedText, trialDatesText } from '../sheets/boatTables.ts';
 import { numberText, percentText, rpmBandText, rpmText } from '../sheets/kit/format.ts';
 import { powerCell, ratingCell } from './cells.ts';
 import type { CellView, TableView } from './siteView.ts';
@@ -87,7 +87,7 @@ function askedText(boat: Boat, label: string, unit: PowerUnit, speedUnit: SpeedU
   if (!setting) return '–';
   if (setting.kind === 'power') return `${powerCell(setting.powerKw, unit)} ${unit}`;
   if (setting.kind === 'rpm') return `${rpmText(setting.speedRpm)} rpm`;
-  return `${speedText(setting.speedKn, speedUnit)} ${speedUnit}`;
+  return `${askedSpeedText(setting, speedUnit)} ${speedUnit}`;
 }
 
 const optionalNumber = (value: number | undefined, digits: number, what: string): string => (value === undefined ? '–' : numberText(value, digits, what));

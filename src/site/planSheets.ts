@@ -69,12 +69,26 @@ function uniqueSlug(request: SheetRequest, first: ReadonlyMap<string, SheetReque
   const words = earlier ? conditionsDifference(request, earlier) : [];
   // A book's own cautions make its sheet its own file: named after the book when nothing else tells it apart.
   const book = request.bookCautions && earlier && JSON.stringify(request.bookCautions) !== JSON.stringify(earlier.bookCautions) ? [request.bookCautions.bookId] : [];
-  const withPaper = earlier && !samePaper(request, earlier) ? [...words, paper] : words;
+  // Other units make a sheet of their own: "mph", "hp", "usgal".
+  const unitWords = earlier && JSON.stringify(request.units ?? {}) !== JSON.stringify(earlier.units ?? {}) ? unitsWords(request) : [];
+  const withPaper = [...(earlier && !samePaper(request, earlier) ? [...words, paper] : words), ...unitWords];
   const candidates = [[base, ...withPaper].join('-'), ...(book.length > 0 ? [[base, ...withPaper, ...book].join('-')] : []), [base, ...words, paper].join('-')];
   for (let n = 2; ; n += 1) {
     const slug = candidates.shift() ?? `${[base, ...withPaper].join('-')}-${n}`;
     if (!taken.has(slug)) return checkedSlug(slug);
   }
+}
+
+/** File-name words for the units a request gives: "mph-kn" (mph with knots in brackets), "hp", "usgal", "impgal". */
+function unitsWords(request: SheetRequest): string[] {
+  const u = request.units ?? {};
+  const speed = (s: string) => s.replace('/', '');
+  return [
+    ...(u.speedUnit ? [u.speedAlso ? `${speed(u.speedUnit)}-${speed(u.speedAlso)}` : speed(u.speedUnit)] : u.speedAlso ? [`also-${speed(u.speedAlso)}`] : []),
+    ...(u.powerUnitFirst ? [u.powerUnitFirst.toLowerCase()] : []),
+    ...(u.fuelUnit ? [u.fuelUnit === 'L/h' ? 'litres' : u.fuelUnit === 'US gal/h' ? 'usgal' : 'impgal'] : []),
+    ...(Object.keys(u).length === 0 ? ['site-units'] : []),
+  ];
 }
 
 /**

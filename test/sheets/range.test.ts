@@ -50,8 +50,8 @@ describe('time and range at each cruise setting', () => {
     const words = spec.map((t) => t.text).join(' ');
     expect(words).toContain('keeping 10 % in reserve');
     const card = scenePages(sheetScene({ kind: 'consoleCard', boatId: b.id, paper: CARD }, ctxOf(b))).flatMap(texts);
-    expect(card.filter((t) => t.role === 'cruise-speed').map((t) => t.text)).toContain(`~${Math.round(fast.speedKn!)} kn, ~${hours} h, ~${nm} nm (est.)`);
-    expect(card.find((t) => t.role === 'cruise-reserve')?.text).toBe('Time and range keep 10 % of the tank in reserve.');
+    expect(card.filter((t) => t.role === 'cruise-speed').map((t) => t.text)).toContain(`~${Math.round(fast.speedKn!)} kn · ${hours} h · ${nm} nm`);
+    expect(card.find((t) => t.role === 'cruise-reserve')?.text).toBe('Speed, time and range are estimates; time and range keep 10 % of the tank in reserve.');
   });
 
   it('gives a range in statute miles when the site reads speeds in mph (1 nm = 1.150779 mi, NIST SP 811)', () => {
@@ -61,6 +61,6 @@ describe('time and range at each cruise setting', () => {
     const fast = r.cruise.find((c) => c.label === 'Fast cruise')!;
     const card = scenePages(sheetScene({ kind: 'consoleCard', boatId: b.id, paper: CARD }, ctx)).flatMap(texts);
     const mi = String(Math.round(fast.rangeWithReserveNm! * 1.150779));
-    expect(card.filter((t) => t.role === 'cruise-speed').map((t) => t.text).join(' ')).toContain(`~${mi} mi (est.)`);
+    expect(card.filter((t) => t.role === 'cruise-speed').map((t) => t.text).join(' ')).toContain(`· ${mi} mi`);
   });
 });

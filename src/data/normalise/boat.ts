@@ -108,7 +108,8 @@ function toCruise(c: RawCruise): CruiseSetting {
   if (c.power_kw !== undefined) return { kind: 'power', label: c.label, powerKw: c.power_kw };
   if (c.power_hp !== undefined) return { kind: 'power', label: c.label, powerKw: hpToKw(c.power_hp) };
   if (c.rpm !== undefined) return { kind: 'rpm', label: c.label, speedRpm: c.rpm };
-  return { kind: 'speed', label: c.label, speedKn: speedKn(c) ?? Number.NaN };
+  const typed = c.speed_kn !== undefined ? { value: c.speed_kn, unit: 'kn' as const } : c.speed_mph !== undefined ? { value: c.speed_mph, unit: 'mph' as const } : c.speed_kmh !== undefined ? { value: c.speed_kmh, unit: 'km/h' as const } : undefined;
+  return { kind: 'speed', label: c.label, speedKn: speedKn(c) ?? Number.NaN, ...(typed ? { typed } : {}) };
 }
 
 function toTrial(t: RawTrial, boat: { site: Site; water: Water }): SeaTrial {

@@ -2,7 +2,7 @@
 import { hpToKw } from '../../units.ts';
 import { resolve, type Registry } from '../references.ts';
 import type { RawBookFile, RawPaper, RawSheet } from '../schema/book.ts';
-import type { Boat, Book, BookChartConditions, BookSheet, DataError, EngineFamily, JetUnit, Paper } from '../types.ts';
+import type { Boat, Book, BookChartConditions, BookSheet, DataError, EngineFamily, FuelUnit, JetUnit, Paper, PowerUnit, SpeedUnit, UnitsOverride } from '../types.ts';
 import { LIMITS } from '../schema/common.ts';
 import { at } from '../validate.ts';
 import { dataError } from '../errors.ts';
@@ -70,11 +70,25 @@ export function normaliseBook(source: YamlSource, raw: RawBookFile, reg: BookReg
     id: raw.id,
     title: raw.title,
     audience: raw.audience,
-    sheets: raw.sheets.map((s) => ({ ...toSheet(s, toPaper(paperOf(s))), ...(bookCautions ? { bookCautions } : {}) })),
+    sheets: raw.sheets.map((s) => {
+      const units = toUnits({ ...raw.units, ...s.units });
+      return { ...toSheet(s, toPaper(paperOf(s))), ...(bookCautions ? { bookCautions } : {}), ...(units ? { units } : {}) };
+    }),
     ...(raw.cautions ? { extraCautions: raw.cautions } : {}),
     source: { file: source.file },
   };
   return { ok: true, value: book, warnings: [] };
+}
+
+/** The units a book's sheet gives (its own over the book's); undefined when it gives none. */
+function toUnits(u: { power?: PowerUnit; speed?: SpeedUnit; speed_also?: SpeedUnit | 'none'; fuel?: FuelUnit }): UnitsOverride | undefined {
+  const units: UnitsOverride = {
+    ...(u.power !== undefined ? { powerUnitFirst: u.power } : {}),
+    ...(u.speed !== undefined ? { speedUnit: u.speed } : {}),
+    ...(u.speed_also !== undefined ? { speedAlso: u.speed_also === 'none' ? null : u.speed_also } : {}),
+    ...(u.fuel !== undefined ? { fuelUnit: u.fuel } : {}),
+  };
+  return Object.keys(units).length > 0 ? units : undefined;
 }
 
 /** "A4 portrait", "4x6 landscape with 3 mm bleed": a paper as the file writes it, for messages. */

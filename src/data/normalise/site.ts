@@ -9,6 +9,8 @@ export function normaliseSite(raw: RawSiteFile): SiteConfig {
     contactLine: raw.contact_line,
     powerUnitFirst: raw.units.power,
     speedUnit: raw.units.speed,
+    ...(raw.units.speed_also !== undefined && raw.units.speed_also !== 'none' && raw.units.speed_also !== raw.units.speed ? { speedAlso: raw.units.speed_also } : {}),
+    fuelUnit: raw.units.fuel,
     ...(raw.cautions !== undefined ? { extraCautions: raw.cautions } : {}),
     dataRevision: raw.data_revision,
     issueDate: raw.issue_date,

@@ -1,7 +1,7 @@
 /** Schema of data/books/<id>.yaml: a chart book for one audience, its sheets and paper. */
 import * as z from 'zod';
 import { atMost, conditions, driveLine, LIMITS, powerHp, powerKw, slug, text, unitChoices, water } from './common.ts';
-import { cautionList } from './site.ts';
+import { cautionList, unitsOverride } from './site.ts';
 
 export const PAPER_SIZES = ['A3', 'A4', 'A5', 'A6', 'Letter', 'Legal', 'Tabloid', '4x6'] as const;
 
@@ -31,7 +31,7 @@ const chartConditions = () =>
     [{ keys: ['cruise_powers_kw', 'cruise_powers_hp'], required: false }],
   );
 
-const boatSheet = <K extends string>(kind: K) => z.strictObject({ kind: z.literal(kind), boat: slug(), paper: sheetPaper().optional() });
+const boatSheet = <K extends string>(kind: K) => z.strictObject({ kind: z.literal(kind), boat: slug(), paper: sheetPaper().optional(), units: unitsOverride().optional() });
 
 export const SHEET_KINDS = ['wallChart', 'specSheet', 'consoleCard', 'upgradeSheet'] as const;
 
@@ -39,7 +39,7 @@ const sheet = () =>
   z.discriminatedUnion(
     'kind',
     [
-      z.strictObject({ kind: z.literal('wallChart'), engine: slug(), jet: slug(), conditions: chartConditions().optional(), paper: sheetPaper().optional() }),
+      z.strictObject({ kind: z.literal('wallChart'), engine: slug(), jet: slug(), conditions: chartConditions().optional(), paper: sheetPaper().optional(), units: unitsOverride().optional() }),
       boatSheet('specSheet'),
       boatSheet('consoleCard'),
       boatSheet('upgradeSheet'),
@@ -54,6 +54,8 @@ export const bookFile = () =>
       title: text(),
       audience: z.enum(['shop', 'dealer', 'owner'], { error: 'must be shop, dealer or owner' }),
       paper: paper(),
+      /** Units the book's sheets print in, each one left out the site's. */
+      units: unitsOverride().optional(),
       /** A book prints on one paper; a sheet's own paper that differs is refused unless this is true. */
       mixed_paper: z.boolean({ error: 'must be true or false' }).default(false),
       sheets: z.array(sheet(), { error: 'must be a list of sheets' }).min(1, { error: 'must list at least one sheet' }),

@@ -9,10 +9,12 @@ export const siteFile = () =>
       contact_line: text().max(LIMITS.contactLineChars, { error: `must be at most ${LIMITS.contactLineChars} characters (every sheet's header prints it)` }),
       units: z
         .strictObject({
-          power: z.enum(['kW', 'hp'], { error: 'must be kW or hp' }).default('kW'),
-          speed: z.enum(['kn', 'mph', 'km/h'], { error: 'must be kn, mph or km/h' }).default('kn'),
+          power: powerUnit().default('kW'),
+          speed: speedUnit().default('kn'),
+          speed_also: speedAlso().optional(),
+          fuel: fuelUnit().default('L/h'),
         })
-        .default({ power: 'kW', speed: 'kn' }),
+        .default({ power: 'kW', speed: 'kn', fuel: 'L/h' }),
       data_revision: text().max(LIMITS.dataRevisionChars, { error: `must be at most ${LIMITS.dataRevisionChars} characters (every sheet's footer prints it)` }),
       issue_date: isoDate(),
       cautions: cautionList()
@@ -20,6 +22,16 @@ export const siteFile = () =>
         .describe("Extra cautions, printed after the built-in ones (sea trial, maker's maximum rpm, qualified marine technician), which always print; one sentence each"),
     })
     .meta({ title: 'matchbook site settings', description: 'Shop name, units and data revision: data/site.yaml' });
+
+export const powerUnit = () => z.enum(['kW', 'hp'], { error: 'must be kW or hp' });
+export const speedUnit = () => z.enum(['kn', 'mph', 'km/h'], { error: 'must be kn, mph or km/h' });
+/** A second speed unit printed in brackets, or none. */
+export const speedAlso = () => z.enum(['kn', 'mph', 'km/h', 'none'], { error: 'must be kn, mph, km/h or none' });
+export const fuelUnit = () => z.enum(['L/h', 'US gal/h', 'imp gal/h'], { error: 'must be L/h, US gal/h or imp gal/h' });
+
+/** Units a book or one of its sheets prints in; each one left out is the site's (or the book's). */
+export const unitsOverride = () =>
+  z.strictObject({ power: powerUnit().optional(), speed: speedUnit().optional(), speed_also: speedAlso().optional(), fuel: fuelUnit().optional() });
 
 /** A shop's own cautions (site.yaml or a book): sentences of up to LIMITS.cautionChars, at most LIMITS.cautions. */
 export const cautionList = () =>
