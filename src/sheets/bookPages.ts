@@ -35,6 +35,8 @@ const CONTENTS_COLUMNS: readonly Column[] = [
 export function bookContentsScene(args: { title: string; audience: Audience; site: SiteConfig; entries: readonly BookEntry[]; paper: Paper; dateIso: string; where: string }): Scene {
   const { site, paper, where } = args;
   const type = typeScale(paper);
+  // On a card (A6, 4 × 6 in) the contents keep the cards' 5 mm margin and set the cautions as fine print.
+  const card = type.fine < type.small;
   const sheetCount = args.entries.length;
   // The contents' own page count fixes where the sheets start: lay out once to count, then number.
   const lay = (contentsPages: number) => {
@@ -45,7 +47,7 @@ export function bookContentsScene(args: { title: string; audience: Audience; sit
       return [e.title, e.pages === 1 ? `${first}` : `${first}–${first + e.pages - 1}`];
     });
     const totalPages = next - 1;
-    const frameArgs = { paper, site, kind: 'bookContents' as const, title: args.title, subtitle: `${sheetCount} ${sheetCount === 1 ? 'sheet' : 'sheets'} on ${totalPages} pages, for ${AUDIENCE_WORDS[args.audience]}`, dateIso: args.dateIso, type, where };
+    const frameArgs = { paper, site, kind: 'bookContents' as const, title: args.title, subtitle: `${sheetCount} ${sheetCount === 1 ? 'sheet' : 'sheets'} on ${totalPages} pages, for ${AUDIENCE_WORDS[args.audience]}`, dateIso: args.dateIso, type, ...(card ? { marginMm: 5 } : {}), where };
     const laid = flowPages({
       // Contents over several pages carry the built-in cautions in one line at the foot of each (the block is on the last).
       frame: (n) => sheetFrame({ ...frameArgs, ...(contentsPages > 1 ? { pageNote: `page ${n + 1}`, cautionLine: CONTINUING_CAUTION } : {}) }),
@@ -53,7 +55,7 @@ export function bookContentsScene(args: { title: string; audience: Audience; sit
       parts: [
         splittable(rows.length, (from, to, { x, y, widthMm }) => table({ x, y, maxWidthMm: widthMm, columns: CONTENTS_COLUMNS, rows: rows.slice(from, to), measureRows: rows, firstRowIndex: from, noNote: to < rows.length, sizePt: type.body, minSizePt: type.min, fullWidth: true, role: 'contents-table', where }), 0, true),
         { layout: ({ x, y, widthMm }) => paragraph({ x, y, widthMm, text: 'Page numbers are those at the foot of each page of this book.', sizePt: type.small, role: 'contents-note', where }) },
-        cautionsFlow({ site, sizePt: type.small, headingPt: type.body, where }),
+        cautionsFlow({ site, sizePt: card ? type.fine : type.small, headingPt: type.body, where }),
       ],
       where,
     });

@@ -29,7 +29,7 @@ describe("a book's own cautions", () => {
     expect(project.books.find((b) => b.id === 'owner-console-cards')?.extraCautions).toEqual([KILL_CORD]);
     const plan = planSheets(project);
     const scene = (slug: string) => sheetScene(plan.sheets.find((s) => s.slug === slug)!.request, { project, dateIso: '2026-01-01' });
-    const bookCard = cautionText(scene('card-ember-reach-card4x6-landscape-bleed'));
+    const bookCard = cautionText(scene('card-ember-reach-card4x6-landscape-bleed-mph-kn-usgal'));
     expect(bookCard).toContain(KILL_CORD);
     // After every built-in caution.
     for (const c of BUILT_IN_CAUTIONS) expect(bookCard.indexOf(KILL_CORD.slice(0, 20))).toBeGreaterThan(bookCard.indexOf(c.slice(0, 20)));
@@ -39,7 +39,7 @@ describe("a book's own cautions", () => {
   });
 
   it('give a book sheet its own file, named after the book when nothing else tells it from the default one', () => {
-    const cards = readFileSync(CARDS, 'utf8').replace('  size: 4x6          # 4 × 6 in card\n  orientation: landscape\n  bleed_mm: 3        # for a print shop: crop marks and bleed', '  size: A6\n  orientation: landscape');
+    const cards = readFileSync(CARDS, 'utf8').replace('  size: 4x6          # 4 × 6 in card\n  orientation: landscape\n  bleed_mm: 3        # for a print shop: crop marks and bleed', '  size: A6\n  orientation: landscape').replace(/^units:.*\n/m, '');
     const r = loadProjectFromFiles(demoWith(CARDS, cards));
     if (!r.ok) throw new Error(r.errors.map((e) => e.message).join('\n'));
     // The A6 landscape card is every boat's own card; with the book's caution it is a sheet of its own.

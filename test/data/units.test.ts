@@ -79,7 +79,7 @@ describe('the loader normalises every unit to kW, kg, litres, knots, kPa, °C', 
     expect(boat.fuelTankL).toBeCloseTo(40 * L_PER_US_GAL, 9);
     expect(boat.site.ambient.pressureKpa).toBeCloseTo(29.92 * KPA_PER_INHG, 4);
     expect(boat.site.ambient.airTempC).toBeCloseTo(25, 12); // (77 − 32) × 5/9
-    expect(boat.cruise[0]).toEqual({ kind: 'speed', label: 'fast', speedKn: expect.closeTo((30 * M_PER_MI) / M_PER_NMI, 9) });
+    expect(boat.cruise[0]).toEqual({ kind: 'speed', label: 'fast', speedKn: expect.closeTo((30 * M_PER_MI) / M_PER_NMI, 9), typed: { value: 30, unit: 'mph' } });
     expect(boat.cruise[1]).toEqual({ kind: 'power', label: 'eco', powerKw: expect.closeTo(100 * KW_PER_HP, 9) });
     expect(boat.trials[0].speedKn).toBeCloseTo((40 * M_PER_MI) / M_PER_NMI, 9);
     expect(boat.trials[0].loadKg).toBeCloseTo(400 * KG_PER_LB, 9);

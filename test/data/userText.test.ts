@@ -109,7 +109,7 @@ describe('invisible and control characters in text are refused at the character'
 /** Text fields (not ids, references, words from a list or dates). */
 function isText(path: readonly (string | number)[]): boolean {
   const key = [...path].reverse().find((s) => typeof s === 'string');
-  return !['id', 'engine', 'jet', 'impeller', 'engine_variant', 'boat', 'kind', 'date', 'fuel', 'aspiration', 'type', 'audience', 'size', 'orientation', 'unit', 'standard', 'water', 'reference_water', 'power', 'speed', 'issue_date'].includes(key as string);
+  return !['id', 'engine', 'jet', 'impeller', 'engine_variant', 'boat', 'kind', 'date', 'fuel', 'aspiration', 'type', 'audience', 'size', 'orientation', 'unit', 'standard', 'water', 'reference_water', 'power', 'speed', 'speed_also', 'issue_date'].includes(key as string);
 }
 
 describe('spaces, tabs and line breaks in text', () => {
