@@ -13,6 +13,7 @@ import type { PrintOverride } from '../standards/paper.ts';
 import { PACKAGE_ROOT } from './eleventySetup.ts';
 import { GUIDE_IMAGES_DIR, readGuides } from './guides.ts';
 import { outputFiles } from './outputFiles.ts';
+import { boatCruiseCsv, boatImpellersCsv, csvPaths, familyCsv } from './resultsCsv.ts';
 import { planSheets } from './planSheets.ts';
 import { jsonHash, sceneHash, type BuildCache } from './renderCache.ts';
 import type { SheetRenderer } from './renderPool.ts';
@@ -111,9 +112,14 @@ export async function writeSiteFiles(args: SiteFilesArgs): Promise<{ site: SiteD
 
   args.fault?.('files', 'results');
   const { boatResults, familyResults } = siteResults(project, plan);
-  for (const [id, result] of boatResults) files.write(`results/boats/${id}.json`, stableJson(result));
+  for (const [id, result] of boatResults) {
+    files.write(`results/boats/${id}.json`, stableJson(result));
+    files.write(csvPaths.boatImpellers(id), boatImpellersCsv(result));
+    files.write(csvPaths.boatCruise(id), boatCruiseCsv(result));
+  }
   for (const [id, charts] of familyResults) {
     files.write(`results/families/${id}.json`, stableJson({ kind: 'engineFamily', engineFamilyId: id, charts }));
+    files.write(csvPaths.family(id), familyCsv(charts));
   }
 
   const schemas = files.copyDir(join(PACKAGE_ROOT, 'schema'), 'schema', '.schema.json');

@@ -72,6 +72,8 @@ export interface FamilyView {
   readonly tables: readonly TableView[];
   readonly boats: readonly LinkView[];
   readonly resultsHref: string;
+  /** The results as CSV tables for a spreadsheet (src/site/resultsCsv.ts). */
+  readonly csvLinks: readonly LinkView[];
 }
 
 /** A boat's sea trials and what they calibrated (only for boats with usable trials). */
@@ -95,6 +97,8 @@ export interface BoatView {
   /** Present only when the boat has usable sea trials. */
   readonly calibration?: CalibrationView;
   readonly resultsHref: string;
+  /** The results as CSV tables for a spreadsheet (src/site/resultsCsv.ts). */
+  readonly csvLinks: readonly LinkView[];
 }
 
 export interface BookView {

@@ -8,6 +8,7 @@ import { boatTables, calibratedSuffix } from './boatTables.ts';
 import { ratingCell } from './cells.ts';
 import { boatSummaryTable, familySummaryTable } from './indexTables.ts';
 import type { SheetPlan } from './planSheets.ts';
+import { csvPaths } from './resultsCsv.ts';
 import type { BoatView, CellView, FamilyView, GuideView, JetView, SheetView, SiteView } from './siteView.ts';
 import { calibrationView } from './trialTable.ts';
 import { wallChartTables } from './wallChartTables.ts';
@@ -59,6 +60,7 @@ function familyView(args: SiteViewArgs, family: EngineFamily): FamilyView {
       .filter((b) => b.engineFamilyId === family.id)
       .map((b) => ({ label: b.name, href: `boats/${b.id}/index.html` })),
     resultsHref: `results/families/${family.id}.json`,
+    csvLinks: [{ label: 'wall-chart pairings as CSV', href: csvPaths.family(family.id) }],
   };
 }
 
@@ -113,6 +115,10 @@ function boatView(args: SiteViewArgs, boat: Boat): BoatView {
     tables: boatTables({ boat, result, unit, speedUnit }),
     ...(calibration ? { calibration } : {}),
     resultsHref: `results/boats/${boat.id}.json`,
+    csvLinks: [
+      { label: 'impellers as CSV', href: csvPaths.boatImpellers(boat.id) },
+      { label: 'cruise settings as CSV', href: csvPaths.boatCruise(boat.id) },
+    ],
   };
 }
 

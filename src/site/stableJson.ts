@@ -9,12 +9,15 @@ export interface StableJsonOptions {
   readonly decimals?: number;
 }
 
+/** A number as the results files write it: rounded to `decimals` places, -0 as 0, non-finite as null. */
+export function stableNumber(value: number, decimals = 4): number | null {
+  if (!Number.isFinite(value)) return null;
+  const rounded = Number(value.toFixed(decimals));
+  return Object.is(rounded, -0) ? 0 : rounded;
+}
+
 function normalise(value: unknown, decimals: number): unknown {
-  if (typeof value === 'number') {
-    if (!Number.isFinite(value)) return null;
-    const rounded = Number(value.toFixed(decimals));
-    return Object.is(rounded, -0) ? 0 : rounded;
-  }
+  if (typeof value === 'number') return stableNumber(value, decimals);
   if (Array.isArray(value)) return value.map((v) => normalise(v, decimals));
   if (value instanceof Map) return normalise(Object.fromEntries(value), decimals);
   if (value !== null && typeof value === 'object') {

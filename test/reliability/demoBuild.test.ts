@@ -46,9 +46,9 @@ const text = (path: string) => a.get(path)!.toString('utf8');
 const of = (ext: string) => [...a.keys()].filter((p) => p.endsWith(ext));
 
 describe('two builds of the same data', () => {
-  it('give byte-identical trees of SVG, PNG, PDF, HTML and JSON', () => {
+  it('give byte-identical trees of SVG, PNG, PDF, HTML, JSON and CSV', () => {
     expect([...b.keys()]).toEqual([...a.keys()]);
-    for (const ext of ['.svg', '.png', '.pdf', '.html', '.json']) expect(of(ext).length, ext).toBeGreaterThan(0);
+    for (const ext of ['.svg', '.png', '.pdf', '.html', '.json', '.csv']) expect(of(ext).length, ext).toBeGreaterThan(0);
     const differing = [...a].filter(([path, bytes]) => Buffer.compare(bytes, b.get(path)!) !== 0).map(([path]) => path);
     expect(differing).toEqual([]);
   });
@@ -96,6 +96,14 @@ describe('no nonsense on paper', () => {
       const value = JSON.parse(raw) as unknown;
       expect(numbersIn(value).filter((n) => !Number.isFinite(n.value)), path).toEqual([]);
     }
+  });
+
+  it('every results CSV file is linked from its page and holds no NaN, Infinity or null', () => {
+    const files = of('.csv').filter((p) => p.startsWith('results/'));
+    expect(files.length).toBe(15); // six boats × (impellers, cruise), three engine families
+    for (const path of files) expect(text(path), path).not.toMatch(/\bnull\b|NaN|Infinity|undefined/);
+    const page = (p: string) => (p.startsWith('results/boats/') ? `boats/${p.split('/')[2].split('.')[0]}/index.html` : `families/${p.split('/')[2].split('.')[0]}/index.html`);
+    for (const path of files) expect(text(page(path)), path).toContain(`href="../../${path}" download`);
   });
 });
 

@@ -24,6 +24,7 @@ const boat: BoatView = {
   sheets: [sheet],
   tables: [],
   resultsHref: 'results/boats/a.json',
+  csvLinks: [{ label: 'impellers as CSV', href: 'results/boats/a.impellers.csv' }],
 };
 
 const site: SiteView = {
@@ -79,6 +80,7 @@ describe('pages', () => {
     expect(out).toContain('<div class="sheet-art"><svg xmlns="http://www.w3.org/2000/svg" width="210mm"');
     for (const ext of ['pdf', 'svg', 'png']) expect(out).toContain(`href="../../sheets/spec-a.${ext}" download`);
     expect(out).toContain('href="../../results/boats/a.json" download');
+    expect(out).toContain('<a href="../../results/boats/a.impellers.csv" download>impellers as CSV</a>');
     expect(out).toContain('href="../../assets/site.css"');
     expect(out).not.toMatch(/<script/i);
   });

@@ -1,6 +1,6 @@
 /** The bodies of the site's pages; templates/ only pick the page and its data. */
 import { html, type SafeHtml } from '../html.ts';
-import type { BoatView, BookView, FamilyView, SiteView } from '../siteView.ts';
+import type { BoatView, BookView, FamilyView, LinkView, SiteView } from '../siteView.ts';
 import { pageLayout } from './layout.ts';
 import { facts, linkList, sheetFigure, table } from './parts.ts';
 
@@ -8,9 +8,10 @@ function section(id: string, title: string, body: SafeHtml): SafeHtml {
   return html`<section id="${id}" aria-labelledby="${id}-title"><h2 id="${id}-title">${title}</h2>${body}</section>`;
 }
 
-function resultsLink(site: SiteView, href: string, root: string): SafeHtml {
-  const doc = site.resultsDocHref ? html` (fields described in <a href="${root}${site.resultsDocHref}">the results guide</a>)` : '';
-  return html`<p><a href="${root}${href}" download>Results as JSON</a>${doc}.</p>`;
+function resultsLink(site: SiteView, target: { resultsHref: string; csvLinks: readonly LinkView[] }, root: string): SafeHtml {
+  const doc = site.resultsDocHref ? html` (fields and columns described in <a href="${root}${site.resultsDocHref}">the results guide</a>)` : '';
+  const csv = target.csvLinks.map((l) => html`, <a href="${root}${l.href}" download>${l.label}</a>`);
+  return html`<p class="results-downloads"><a href="${root}${target.resultsHref}" download>Results as JSON</a>${csv}${doc}.</p>`;
 }
 
 function none(list: readonly unknown[], text: string): SafeHtml | null {
@@ -43,7 +44,7 @@ export function familyPage(site: SiteView, family: FamilyView): string {
 ${facts(family.facts)}${family.notes ? html`<p>${family.notes}</p>` : ''}
 ${section('charts', 'Wall charts', html`${none(family.charts, 'No wall charts for this family.')}${family.charts.map((s) => sheetFigure(s, root))}`)}
 ${section('results', 'Predicted operating points', html`${family.tables.map((t) => table(t, root))}
-${resultsLink(site, family.resultsHref, root)}`)}
+${resultsLink(site, family, root)}`)}
 ${section('boats', 'Boats with this engine family', html`${none(family.boats, 'No boats use this family.')}${linkList(family.boats, root)}`)}`;
   return pageLayout({ site, title: family.label, root, body, sheets: family.charts });
 }
@@ -55,7 +56,7 @@ export function boatPage(site: SiteView, boat: BoatView): string {
 ${facts(boat.facts, root)}${boat.notes ? html`<p>${boat.notes}</p>` : ''}
 ${linkList(boat.links, root)}
 ${section('results', 'Predictions', html`${boat.tables.map((t) => table(t, root))}
-${resultsLink(site, boat.resultsHref, root)}`)}
+${resultsLink(site, boat, root)}`)}
 ${boat.calibration ? section('trials', boat.calibration.heading, html`${boat.calibration.trials ? table(boat.calibration.trials, root) : ''}${boat.calibration.paragraphs.map((p) => html`<p>${p}</p>`)}`) : ''}
 ${section('sheets', 'Sheets', html`${boat.sheets.map((s) => sheetFigure(s, root))}`)}`;
   return pageLayout({ site, title: boat.name, root, body, sheets: boat.sheets });
