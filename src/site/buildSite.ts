@@ -15,6 +15,7 @@ import { SheetDrawError } from './errors.ts';
 import { sheetDrawProblem } from './sheetProblems.ts';
 import type { BuildCache } from './renderCache.ts';
 import { createRenderPool, type SheetRenderer } from './renderPool.ts';
+import { readPreviousBuild } from './reprint.ts';
 import { writePages } from './runEleventy.ts';
 import { writeSiteFiles, type SiteCounts } from './siteFiles.ts';
 import { unprintableText } from './unprintable.ts';
@@ -55,6 +56,8 @@ export async function buildSite(opts: BuildOptions): Promise<BuildOutcome> {
   const unprintable = unprintableText(loaded.project, { dataDir: opts.dataDir });
   if (unprintable.length > 0) return { ok: false, errorsText: formatDataErrors(unprintable, 'problem'), warningsText };
   const dateIso = buildDateIso({ sourceDateEpoch: opts.sourceDateEpoch, issueDate: loaded.project.site.issueDate });
+  // The sheet list of the build now in the output folder, read before the new build is swapped in.
+  const previous = readPreviousBuild(opts.outDir);
   const staging = createStaging(opts.outDir);
   const renderer = opts.renderer ?? createRenderPool();
   try {
@@ -67,6 +70,7 @@ export async function buildSite(opts: BuildOptions): Promise<BuildOutcome> {
       renderer,
       onProgress: opts.onProgress,
       fault: opts.fault,
+      previous,
     });
     if (opts.fault) site.beforePage = (name) => opts.fault?.('pages', name);
     const pages = await writePages({ site, outDir: staging });

@@ -12,6 +12,7 @@ import type { OutputFiles } from './outputFiles.ts';
 import type { SheetPlan } from './planSheets.ts';
 import { sceneKey, type BuildCache } from './renderCache.ts';
 import type { SheetRenderer } from './renderPool.ts';
+import { bytesSha256, revisionNeutralHash } from './reprint.ts';
 import { renderSheetFiles } from './sheetFiles.ts';
 import type { SheetView } from './siteView.ts';
 
@@ -71,10 +72,12 @@ function cachedScene(request: SheetRequest, args: DrawArgs): Scene {
   return scene;
 }
 
-/** Draws and writes every sheet; returns each sheet's view and the scenes the books need. */
-export async function drawSheets(args: DrawArgs): Promise<{ views: Map<string, SheetView>; scenes: Map<string, Scene> }> {
+/** Draws and writes every sheet; returns each sheet's view, the scenes the books need and each PDF's SHA-256. */
+export async function drawSheets(args: DrawArgs): Promise<{ views: Map<string, SheetView>; scenes: Map<string, Scene>; pdfHashes: Map<string, string>; contentHashes: Map<string, string> }> {
   const views = new Map<string, SheetView>();
   const scenes = new Map<string, Scene>();
+  const pdfHashes = new Map<string, string>();
+  const contentHashes = new Map<string, string>();
   const total = args.plan.sheets.length;
   const limit = 4;
   const inFlight = new Set<Promise<void>>();
@@ -86,6 +89,7 @@ export async function drawSheets(args: DrawArgs): Promise<{ views: Map<string, S
         return cachedScene(request, args);
       });
       if (args.keep.has(slug)) scenes.set(slug, scene);
+      contentHashes.set(slug, revisionNeutralHash(scene, { dateIso: args.dateIso, dataRevision: args.project.site.dataRevision }));
       const task = drawingSheet(slug, async () => {
         const rendered = await renderSheetFiles(scene, { cache: args.cache, renderer: args.renderer });
         args.fault?.('render', slug);
@@ -94,6 +98,7 @@ export async function drawSheets(args: DrawArgs): Promise<{ views: Map<string, S
         (rendered) => {
           args.files.write(`sheets/${slug}.svg`, rendered.svg);
           args.files.write(`sheets/${slug}.pdf`, rendered.pdf);
+          pdfHashes.set(slug, bytesSha256(rendered.pdf));
           args.files.write(`sheets/${slug}.png`, rendered.png);
           (rendered.morePages ?? []).forEach((page, i) => {
             args.files.write(`${pageFile(slug, i + 2)}.svg`, page.svg);
@@ -118,5 +123,5 @@ export async function drawSheets(args: DrawArgs): Promise<{ views: Map<string, S
     await Promise.all(inFlight);
   }
   if (failure !== undefined) throw failure;
-  return { views, scenes };
+  return { views, scenes, pdfHashes, contentHashes };
 }

@@ -20,6 +20,7 @@ import { SheetDrawError } from './errors.ts';
 import { sheetDrawProblem } from './sheetProblems.ts';
 import { unprintableText } from './unprintable.ts';
 import { createBuildCache } from './renderCache.ts';
+import { readPreviousBuild } from './reprint.ts';
 import { writeSiteFiles } from './siteFiles.ts';
 import { SiteData, type ProblemView, type SiteView } from './siteView.ts';
 
@@ -68,7 +69,9 @@ export function liveSiteData(opts: LiveSiteOptions): () => Promise<SiteData> {
       const dateIso = buildDateIso({ sourceDateEpoch: process.env.SOURCE_DATE_EPOCH, issueDate: loaded.project.site.issueDate });
       mkdirSync(opts.outDir, { recursive: true });
       writeFileSync(join(opts.outDir, OUTPUT_MARKER), 'Written by matchbook serve.\n');
-      const { site, counts } = await writeSiteFiles({ project: loaded.project, dateIso, dir: opts.outDir, cache });
+      // Written in place: the reprint list compares with the last rebuild's sheet list, read first.
+      const previous = readPreviousBuild(opts.outDir);
+      const { site, counts } = await writeSiteFiles({ project: loaded.project, dateIso, dir: opts.outDir, cache, previous });
       lastGood = site.view;
       report(`rebuilt ${counts.sheets} sheets in ${((performance.now() - startMs) / 1000).toFixed(1)} s\n`);
       return site;

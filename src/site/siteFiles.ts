@@ -12,15 +12,17 @@ import { scenePages, type Scene } from '../scene/types.ts';
 import type { PrintOverride } from '../standards/paper.ts';
 import { PACKAGE_ROOT } from './eleventySetup.ts';
 import { GUIDE_IMAGES_DIR, readGuides } from './guides.ts';
-import { outputFiles } from './outputFiles.ts';
+import { outputFiles, type OutputFiles } from './outputFiles.ts';
+import { bytesSha256, checklistInput, checklistPaper, compareBuilds, MANIFEST_FILE, paperWords, reprintView, REPRINT_JSON, REPRINT_PDF, sheetPages, type PreviousBuild, type ReprintList, type SheetManifest } from './reprint.ts';
+import { reprintListScene } from '../sheets/reprintList.ts';
 import { boatCruiseCsv, boatImpellersCsv, csvPaths, familyCsv } from './resultsCsv.ts';
-import { planSheets } from './planSheets.ts';
+import { planSheets, type SheetPlan } from './planSheets.ts';
 import { jsonHash, sceneHash, type BuildCache } from './renderCache.ts';
 import type { SheetRenderer } from './renderPool.ts';
 import { drawSheets, type FaultHook } from './drawSheets.ts';
 import { siteResults } from './siteResults.ts';
 import { siteView } from './siteViewBuild.ts';
-import { SiteData } from './siteView.ts';
+import { SiteData, type SheetView } from './siteView.ts';
 import { stableJson } from './stableJson.ts';
 
 export interface SiteCounts {
@@ -45,6 +47,8 @@ export interface SiteFilesArgs {
   readonly onProgress?: (done: number, total: number) => void;
   /** Only tests set it, to inject a failure at a step. */
   readonly fault?: FaultHook;
+  /** What the output folder held before this build (its sheet list), for the reprint list; none by default. */
+  readonly previous?: PreviousBuild;
 }
 
 /** Every promise settled, then the first failure thrown: nothing is left running when this rejects. */
@@ -83,6 +87,28 @@ async function bookPdf(args: {
   return pdf;
 }
 
+/** Each drawn sheet as the manifest records it, in plan order. */
+function sheetManifest(plan: SheetPlan, drawn: { views: ReadonlyMap<string, SheetView>; pdfHashes: ReadonlyMap<string, string>; contentHashes: ReadonlyMap<string, string> }): SheetManifest['sheets'] {
+  const hrefs = sheetPages(plan);
+  return plan.sheets.flatMap(({ slug, request }) => {
+    const view = drawn.views.get(slug);
+    const sha256 = drawn.pdfHashes.get(slug);
+    const contentSha256 = drawn.contentHashes.get(slug);
+    if (!view || sha256 === undefined || contentSha256 === undefined) return [];
+    return [{ slug, title: view.title, kind: request.kind, paper: paperWords(request.paper), pages: 1 + (view.morePages?.length ?? 0), sha256, contentSha256, href: hrefs.get(slug) ?? 'index.html' }];
+  });
+}
+
+/** The print-run checklist PDF (src/sheets/reprintList.ts), drawn like any sheet and rendered in the pool. */
+async function writeChecklist(args: { reprint: ReprintList; previous: PreviousBuild; project: Project; plan: SheetPlan; dateIso: string; files: OutputFiles; renderer?: SheetRenderer }): Promise<void> {
+  const { project, dateIso } = args;
+  const scene = reprintListScene(checklistInput({ list: args.reprint, previous: args.previous, site: project.site, dateIso, paper: checklistPaper(args.plan) }));
+  const options: PdfOptions = { title: scene.title, subject: scene.subject, keywords: scene.keywords, author: project.site.shopName, dateIso };
+  const pages = scenePages(scene);
+  const pdf = args.renderer ? await args.renderer.renderBook(pages, options) : await renderPdf(pages, options);
+  args.files.write(REPRINT_PDF, pdf);
+}
+
 /** Writes every sheet, book, results file and schema; returns the data the pages are made from. */
 export async function writeSiteFiles(args: SiteFilesArgs): Promise<{ site: SiteData; counts: SiteCounts }> {
   const { project, dateIso } = args;
@@ -110,6 +136,21 @@ export async function writeSiteFiles(args: SiteFilesArgs): Promise<{ site: SiteD
   );
   books.forEach((b, i) => files.write(`books/${b.book.id}.pdf`, pdfs[i]));
 
+  // The sheet list of this build, compared with the one the output folder held: the reprint list.
+  const manifest: SheetManifest = {
+    kind: 'sheetManifest',
+    version: 1,
+    dataRevision: project.site.dataRevision,
+    dateIso,
+    sheets: sheetManifest(plan, drawn),
+    books: books.map((b, i) => ({ id: b.book.id, title: b.book.title, sha256: bytesSha256(pdfs[i]), sheets: plan.byBook.get(b.book.id) ?? [] })),
+  };
+  const previous = args.previous ?? { kind: 'none' };
+  const reprint = compareBuilds(previous, manifest);
+  files.write(MANIFEST_FILE, stableJson(manifest));
+  files.write(REPRINT_JSON, stableJson(reprint));
+  await writeChecklist({ reprint, previous, project, plan, dateIso, files, renderer: args.renderer });
+
   args.fault?.('files', 'results');
   const { boatResults, familyResults } = siteResults(project, plan);
   for (const [id, result] of boatResults) {
@@ -130,7 +171,7 @@ export async function writeSiteFiles(args: SiteFilesArgs): Promise<{ site: SiteD
   files.copyFile(FONT_FILES.regular, 'assets/fonts/SourceSans3-Regular.ttf');
   files.copyFile(FONT_FILES.bold, 'assets/fonts/SourceSans3-Bold.ttf');
 
-  const view = siteView({ project, dateIso, plan, sheets, boatResults, familyResults, schemas, guides });
+  const view = { ...siteView({ project, dateIso, plan, sheets, boatResults, familyResults, schemas, guides }), reprint: reprintView(reprint, previous) };
   const counts = {
     sheets: plan.sheets.length,
     books: project.books.length,

@@ -133,6 +133,20 @@ export interface GuideView {
   readonly withSchemas: boolean;
 }
 
+/** The front page's account of what this build changed against the previous build of the folder (src/site/reprint.ts). */
+export interface ReprintView {
+  readonly heading: string;
+  /** What was compared, then the counts. */
+  readonly summary: string;
+  /** Sheets changed in content, named with a link to their page (at most a few dozen), and how many more there are. */
+  readonly changed: { readonly links: readonly LinkView[]; readonly more: number };
+  /** Changed sheets not named: the only change is the issue date and data revision they print. */
+  readonly revisionAndDateOnly: number;
+  readonly added: { readonly links: readonly LinkView[]; readonly more: number };
+  readonly checklistHref: string;
+  readonly jsonHref: string;
+}
+
 export interface SiteView {
   readonly shopName: string;
   readonly contactLine: string;
@@ -150,6 +164,8 @@ export interface SiteView {
   readonly schemas: readonly LinkView[];
   /** The user guides rendered from docs/, in navigation order. */
   readonly guides: readonly GuideView[];
+  /** What changed since the previous build of the output folder; absent where nothing was compared (tests of pages). */
+  readonly reprint?: ReprintView;
   /** The guide page describing the results JSON files, if the site carries it. */
   readonly resultsDocHref?: string;
   /**

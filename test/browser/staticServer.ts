@@ -11,6 +11,7 @@ const TYPES: Readonly<Record<string, string>> = {
   '.png': 'image/png',
   '.pdf': 'application/pdf',
   '.json': 'application/json',
+  '.csv': 'text/csv; charset=utf-8',
   '.md': 'text/markdown; charset=utf-8',
 };
 

@@ -121,9 +121,10 @@ export function splittable(count: number, draw: (from: number, to: number, at: {
 
 /**
  * Flows parts over the content box of a sheet's pages, in `columns` columns per page (gap columnGapMm);
- * frame(n) is the n-th page's frame (0-based). Returns each page used with its frame and content.
+ * frame(n) is the n-th page's frame (0-based); more than maxPages pages (default: 16 slots) is a LayoutError.
+ * Returns each page used with its frame and content.
  */
-export function flowPages(args: { frame: (page: number) => SheetFrame; columns?: number; columnGapMm?: number; gapMm: number; parts: readonly Flowable[]; where: string }): { frame: SheetFrame; nodes: SceneNode[]; slots: (Box & { bottomMm: number })[] }[] {
+export function flowPages(args: { frame: (page: number) => SheetFrame; columns?: number; columnGapMm?: number; gapMm: number; parts: readonly Flowable[]; where: string; maxPages?: number }): { frame: SheetFrame; nodes: SceneNode[]; slots: (Box & { bottomMm: number })[] }[] {
   const columns = args.columns ?? 1;
   const gap = args.columnGapMm ?? 5;
   const frames: SheetFrame[] = [];
@@ -136,7 +137,7 @@ export function flowPages(args: { frame: (page: number) => SheetFrame; columns?:
     const width = (box.width - gap * (columns - 1)) / columns;
     return { x: box.x + (i % columns) * (width + gap), y: box.y, width, height: box.height };
   };
-  const slots = flow({ slot, gapMm: args.gapMm, parts: args.parts, where: args.where, columns });
+  const slots = flow({ slot, gapMm: args.gapMm, parts: args.parts, where: args.where, columns, ...(args.maxPages !== undefined ? { maxSlots: args.maxPages * columns } : {}) });
   const pages = Math.ceil(slots.length / columns);
   return Array.from({ length: pages }, (_, p) => {
     const mine = slots.slice(p * columns, (p + 1) * columns);

@@ -1,6 +1,6 @@
 /** The bodies of the site's pages; templates/ only pick the page and its data. */
 import { html, type SafeHtml } from '../html.ts';
-import type { BoatView, BookView, FamilyView, LinkView, SiteView } from '../siteView.ts';
+import type { BoatView, BookView, FamilyView, LinkView, ReprintView, SiteView } from '../siteView.ts';
 import { pageLayout } from './layout.ts';
 import { facts, linkList, sheetFigure, table } from './parts.ts';
 
@@ -18,12 +18,28 @@ function none(list: readonly unknown[], text: string): SafeHtml | null {
   return list.length === 0 ? html`<p>${text}</p>` : null;
 }
 
+/** "A, B and 3 more": linked names. */
+function namedList(named: { links: readonly LinkView[]; more: number }, root: string): SafeHtml {
+  const items = named.links.map((l, i) => html`${i === 0 ? '' : i === named.links.length - 1 && named.more === 0 ? ' and ' : ', '}<a href="${root}${l.href}">${l.label}</a>`);
+  return html`${items}${named.more > 0 ? html` and ${named.more} more` : ''}`;
+}
+
+/** What this build changed against the previous build of the folder, with the print-run checklist. */
+function reprintSection(r: ReprintView, root: string): SafeHtml {
+  const changed = r.changed.links.length > 0 ? html`<p>Changed: ${namedList(r.changed, root)}.</p>` : null;
+  const reissued = r.revisionAndDateOnly > 0 ? html`<p>${r.revisionAndDateOnly} ${r.changed.links.length > 0 ? 'other ' : ''}${r.revisionAndDateOnly === 1 ? 'sheet differs' : 'sheets differ'} only in the issue date and data revision printed on ${r.revisionAndDateOnly === 1 ? 'it' : 'them'}.</p>` : null;
+  const added = r.added.links.length > 0 ? html`<p>New: ${namedList(r.added, root)}.</p>` : null;
+  return section('changes', r.heading, html`<p>${r.summary}</p>${changed}${added}${reissued}
+<p><a href="${root}${r.checklistHref}" download>Print-run checklist (PDF)</a>, <a href="${root}${r.jsonHref}" download>the same list as JSON</a>.</p>`);
+}
+
 /** The front page: summaries of engine families and boats, the jet units' impeller tables, and books. */
 export function indexPage(site: SiteView): string {
   const root = '';
   const body = html`<h1>${site.shopName}: impeller matching charts</h1>
 <p class="lede">Predicted wide-open-throttle (WOT) operating points of waterjet impellers on marine engines,
 as wall charts for the shop, spec sheets for dealers and console cards for owners.</p>
+${site.reprint ? reprintSection(site.reprint, root) : ''}
 ${section('families', 'Engine families', html`${none(site.families, 'No engine families defined.') ?? table(site.familySummary, root)}`)}
 ${section('jets', 'Jet units', html`${none(site.jets, 'No jet units defined.')}${site.jets.map(
     (j) => html`<h3 id="jet-${j.id}">${j.label} (${j.maker})</h3>${table(j.table, root)}`,
