@@ -2,7 +2,7 @@
  * The print-run checklist: after a build into an output folder that held an earlier build, which sheets
  * to print (changed and new ones), which to take out of use (removed ones), which pages of each book to
  * reprint, and how many stay as they are. One tick box a line. A long list flows onto further pages of
- * the same paper; every page carries the cautions line, the last the full cautions block. The site layer
+ * the same paper; every page carries the built-in cautions whole at its foot, the last the full cautions block. The site layer
  * compares the builds and hands the lists in (src/site/reprint.ts); this only lays them out.
  */
 import type { Paper, SiteConfig } from '../data/types.ts';
@@ -10,7 +10,7 @@ import type { Scene, SceneNode } from '../scene/types.ts';
 import { measureTextMm } from '../scene/text.ts';
 import { assembleScene } from './kit/assemble.ts';
 import { ascentMm, label, linePitchMm, paragraph, wrapLines, type Block } from './kit/block.ts';
-import { cautionsFlow, CONTINUING_CAUTION } from './kit/cautions.ts';
+import { BUILT_IN_CAUTIONS, cautionsFlow } from './kit/cautions.ts';
 import { LayoutError } from './kit/errors.ts';
 import { flowPages, whole, type Flowable } from './kit/flow.ts';
 import { sheetFrame } from './kit/frame.ts';
@@ -134,8 +134,10 @@ export function reprintListScene(input: ReprintListInput): Scene {
     cautionsFlow({ site: input.site, sizePt: type.body, headingPt: type.heading, where }),
   ];
   const single = sheetFrame(frameArgs);
-  const firstOfMany = sheetFrame({ ...frameArgs, cautionLine: CONTINUING_CAUTION });
-  const continued = (n: number) => sheetFrame({ ...frameArgs, shop: false, cautionLine: CONTINUING_CAUTION, title: `Print-run checklist, page ${n + 1}` });
+  // A checklist page is handed round the print room on its own: each carries the built-in cautions whole.
+  const cautionLine = `Cautions: ${BUILT_IN_CAUTIONS.join(' ')}`;
+  const firstOfMany = sheetFrame({ ...frameArgs, cautionLine });
+  const continued = (n: number) => sheetFrame({ ...frameArgs, shop: false, cautionLine, title: `Print-run checklist, page ${n + 1}` });
   const pages = onePage(() => flowPages({ frame: () => single, gapMm: GAP_MM, parts, where, maxPages: 1 })) ?? flowPages({ frame: (n) => (n === 0 ? firstOfMany : continued(n)), gapMm: GAP_MM, parts, where, maxPages: MAX_PAGES });
   return assembleScene({
     frame: pages[0].frame,

@@ -1,12 +1,12 @@
 /**
  * The print-run checklist flows: a short list on one page with the full cautions, a list of a thousand
  * sheets (long titles and file names among them) over as many pages as it needs, every page keeping the
- * print rules and the cautions line, every item once and in order, nothing shortened.
+ * print rules and the built-in cautions whole at its foot, every item once and in order, nothing shortened.
  */
 import { describe, expect, it } from 'vitest';
 import type { Paper, SiteConfig } from '../../src/data/types.ts';
 import { scenePages } from '../../src/scene/types.ts';
-import { BUILT_IN_CAUTIONS, CONTINUING_CAUTION } from '../../src/sheets/kit/cautions.ts';
+import { BUILT_IN_CAUTIONS } from '../../src/sheets/kit/cautions.ts';
 import { reprintListScene, type ReprintListInput } from '../../src/sheets/reprintList.ts';
 import { sceneProblems } from './sceneChecks.ts';
 import { texts } from './sceneWalk.ts';
@@ -67,7 +67,7 @@ describe('print-run checklist', () => {
         expect(sceneProblems(page, paper), `page ${i + 1}`).toEqual([]);
         expect(page.widthMm).toBe(scene.widthMm);
         const line = texts(page).filter((t) => t.role === 'caution-line').map((t) => t.text).join(' ');
-        expect(line, `page ${i + 1}`).toBe(CONTINUING_CAUTION);
+        expect(line, `page ${i + 1}`).toBe(`Cautions: ${BUILT_IN_CAUTIONS.join(' ')}`);
         titles.push(...texts(page).filter((t) => t.role === 'reprint-title').map((t) => t.text));
       });
       // A title on two lines is two texts: joined back, the titles read as given, none shortened.
