@@ -125,7 +125,7 @@ function listFlow(args: { heading: string; items: readonly ReprintItem[]; sizePt
 export function reprintListScene(input: ReprintListInput): Scene {
   const where = 'print-run checklist';
   const type = typeScale(input.paper);
-  const frameArgs = { paper: input.paper, site: input.site, title: 'Print-run checklist', subtitle: `What to reprint for data revision ${input.site.dataRevision}`, dateIso: input.dateIso, type, where };
+  const frameArgs = { paper: input.paper, site: input.site, kind: 'reprintList' as const, title: 'What to reprint', subtitle: `Sheets and books changed, new and removed since the previous build, for data revision ${input.site.dataRevision}`, dateIso: input.dateIso, type, where };
   const para = (text: string, role: string): Flowable => whole(({ x, y, widthMm }) => paragraph({ x, y, widthMm, text, sizePt: type.body, role, where }));
   const parts: Flowable[] = [
     para(input.summary, 'reprint-summary'),
@@ -136,8 +136,8 @@ export function reprintListScene(input: ReprintListInput): Scene {
   const single = sheetFrame(frameArgs);
   // A checklist page is handed round the print room on its own: each carries the built-in cautions whole.
   const cautionLine = `Cautions: ${BUILT_IN_CAUTIONS.join(' ')}`;
-  const firstOfMany = sheetFrame({ ...frameArgs, cautionLine });
-  const continued = (n: number) => sheetFrame({ ...frameArgs, shop: false, cautionLine, title: `Print-run checklist, page ${n + 1}` });
+  const firstOfMany = sheetFrame({ ...frameArgs, pageNote: 'page 1', cautionLine });
+  const continued = (n: number) => sheetFrame({ ...frameArgs, pageNote: `page ${n + 1}`, cautionLine });
   const pages = onePage(() => flowPages({ frame: () => single, gapMm: GAP_MM, parts, where, maxPages: 1 })) ?? flowPages({ frame: (n) => (n === 0 ? firstOfMany : continued(n)), gapMm: GAP_MM, parts, where, maxPages: MAX_PAGES });
   return assembleScene({
     frame: pages[0].frame,

@@ -44,6 +44,9 @@ export interface ManifestBook {
   readonly sha256: string;
   /** Its sheets' slugs in book order. */
   readonly sheets: readonly string[];
+  /** Pages of its PDF, and how many of them come before the first sheet (the contents). */
+  readonly pages: number;
+  readonly contentsPages: number;
 }
 
 export interface SheetManifest {
@@ -158,7 +161,7 @@ export function readPreviousBuild(outDir: string): PreviousBuild {
     return { kind: 'unreadable', reason: `${MANIFEST_FILE} is not JSON (${error instanceof Error ? error.message : String(error)})` };
   }
   const sheetOk = (s: unknown) => isRecord(s) && isText(s.slug) && isText(s.title) && isText(s.sha256) && isText(s.contentSha256) && isText(s.kind) && isText(s.paper) && typeof s.pages === 'number';
-  const bookOk = (b: unknown) => isRecord(b) && isText(b.id) && isText(b.title) && isText(b.sha256) && Array.isArray(b.sheets) && b.sheets.every(isText);
+  const bookOk = (b: unknown) => isRecord(b) && isText(b.id) && isText(b.title) && isText(b.sha256) && Array.isArray(b.sheets) && b.sheets.every(isText) && typeof b.pages === 'number' && typeof b.contentsPages === 'number';
   if (!isRecord(value) || value.kind !== 'sheetManifest' || value.version !== 1 || !isText(value.dataRevision) || !isText(value.dateIso) || !Array.isArray(value.sheets) || !value.sheets.every(sheetOk) || !Array.isArray(value.books) || !value.books.every(bookOk)) {
     return { kind: 'unreadable', reason: `${MANIFEST_FILE} is not a sheet list this version of matchbook writes` };
   }
@@ -195,15 +198,19 @@ export function compareBuilds(previous: PreviousBuild, current: SheetManifest): 
   const pagesOf = new Map(current.sheets.map((s) => [s.slug, s.pages]));
   const oldBooks = new Map((before?.books ?? []).map((b) => [b.id, b]));
   const newBooks = new Set(current.books.map((b) => b.id));
+  const oldPagesOf = new Map((before?.sheets ?? []).map((s) => [s.slug, s.pages]));
   const bookEntry = (b: ManifestBook): { change: Change; item: ReprintBook } => {
     const old = oldBooks.get(b.id);
-    const pages = b.sheets.reduce((n, slug) => n + (pagesOf.get(slug) ?? 1), 0);
+    const pages = b.pages;
     if (!old) return { change: 'added', item: { id: b.id, title: b.title, pdfHref: `books/${b.id}.pdf`, pages } };
     if (old.sha256 === b.sha256) return { change: 'unchanged', item: { id: b.id, title: b.title } };
     // The sheets to print again: changed or new anywhere, or new to this book.
     const reprintSheets = b.sheets.filter((slug) => changeOf.get(slug) !== 'unchanged' || !old.sheets.includes(slug));
+    // When the book's sheets or their page counts changed, every page number after the contents moves: the whole book.
+    const sameLayout = old.sheets.length === b.sheets.length && old.sheets.every((slug, i) => slug === b.sheets[i] && oldPagesOf.get(slug) === pagesOf.get(slug)) && old.contentsPages === b.contentsPages;
+    if (!sameLayout) return { change: 'changed', item: { id: b.id, title: b.title, pdfHref: `books/${b.id}.pdf`, pages, reprintSheets, reprintPages: Array.from({ length: pages }, (_, i) => i + 1) } };
     const reprintPages: number[] = [];
-    let page = 1;
+    let page = b.contentsPages + 1;
     for (const slug of b.sheets) {
       const n = pagesOf.get(slug) ?? 1;
       if (reprintSheets.includes(slug)) for (let i = 0; i < n; i++) reprintPages.push(page + i);

@@ -68,12 +68,14 @@ async function bookPdf(args: {
   dateIso: string;
   cache?: BuildCache;
   renderer?: SheetRenderer;
-}): Promise<Uint8Array> {
+}): Promise<{ pdf: Uint8Array; pageCount: number; contentsPages: number }> {
   const { book } = args;
   const { pages: scenes, outline } = bookPages(args);
+  const sheetPagesCount = args.scenes.reduce((n, s) => n + scenePages(s).length, 0);
+  const counted = (pdf: Uint8Array) => ({ pdf, pageCount: scenes.length, contentsPages: scenes.length - sheetPagesCount });
   const key = args.cache ? jsonHash({ title: book.title, audience: book.audience, scenes: scenes.map(sceneHash) }) : '';
   const cached = args.cache?.books.get(key);
-  if (cached) return cached;
+  if (cached) return counted(cached);
   const options: PdfOptions = {
     title: book.title,
     subject: `Impeller matching chart book for the ${book.audience}`,
@@ -84,7 +86,7 @@ async function bookPdf(args: {
   };
   const pdf = args.renderer ? await args.renderer.renderBook(scenes, options) : await renderPdf(scenes, options);
   args.cache?.books.set(key, pdf);
-  return pdf;
+  return counted(pdf);
 }
 
 /** Each drawn sheet as the manifest records it, in plan order. */
@@ -134,7 +136,7 @@ export async function writeSiteFiles(args: SiteFilesArgs): Promise<{ site: SiteD
       return pdf;
     }),
   );
-  books.forEach((b, i) => files.write(`books/${b.book.id}.pdf`, pdfs[i]));
+  books.forEach((b, i) => files.write(`books/${b.book.id}.pdf`, pdfs[i].pdf));
 
   // The sheet list of this build, compared with the one the output folder held: the reprint list.
   const manifest: SheetManifest = {
@@ -143,7 +145,7 @@ export async function writeSiteFiles(args: SiteFilesArgs): Promise<{ site: SiteD
     dataRevision: project.site.dataRevision,
     dateIso,
     sheets: sheetManifest(plan, drawn),
-    books: books.map((b, i) => ({ id: b.book.id, title: b.book.title, sha256: bytesSha256(pdfs[i]), sheets: plan.byBook.get(b.book.id) ?? [] })),
+    books: books.map((b, i) => ({ id: b.book.id, title: b.book.title, sha256: bytesSha256(pdfs[i].pdf), sheets: plan.byBook.get(b.book.id) ?? [], pages: pdfs[i].pageCount, contentsPages: pdfs[i].contentsPages })),
   };
   const previous = args.previous ?? { kind: 'none' };
   const reprint = compareBuilds(previous, manifest);

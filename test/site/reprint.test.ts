@@ -59,28 +59,38 @@ describe('compareBuilds', () => {
   });
 
   it('lists everything as added when there is nothing, or nothing readable, to compare with', () => {
-    const now = manifest([sheet('a', '1'), sheet('b', '2')], [{ id: 'bk', title: 'Book', sha256: 'b1', sheets: ['a', 'b'] }]);
+    const now = manifest([sheet('a', '1'), sheet('b', '2')], [{ id: 'bk', title: 'Book', sha256: 'b1', sheets: ['a', 'b'], pages: 3, contentsPages: 1 }]);
     for (const previous of [{ kind: 'none' as const }, { kind: 'unreadable' as const, reason: 'x' }]) {
       const list = compareBuilds(previous, now);
       expect(list.basis).toBe(previous.kind === 'none' ? 'noPreviousBuild' : 'previousListUnreadable');
       expect(list.sheets.counts).toEqual({ added: 2, changed: 0, removed: 0, unchanged: 0, revisionAndDateOnly: 0 });
-      expect(list.books.added).toEqual([{ id: 'bk', title: 'Book', pdfHref: 'books/bk.pdf', pages: 2 }]);
+      expect(list.books.added).toEqual([{ id: 'bk', title: 'Book', pdfHref: 'books/bk.pdf', pages: 3 }]);
       expect(list.previous).toBeUndefined();
     }
   });
 
-  it("names a changed book's pages to reprint: its changed sheets and the sheets new to it, each sheet's pages counted", () => {
-    // Book pages: a = 1, b = 2–3 (two pages), c = 4, d = 5.
-    const before = manifest([sheet('a', '1'), sheet('b', '2', 2), sheet('c', '3'), sheet('d', '4')], [{ id: 'bk', title: 'Book', sha256: 'old', sheets: ['a', 'b', 'c'] }]);
-    const now = manifest([sheet('a', '1'), sheet('b', '2y', 2), sheet('c', '3'), sheet('d', '4')], [{ id: 'bk', title: 'Book', sha256: 'new', sheets: ['a', 'b', 'c', 'd'] }]);
-    const list = compareBuilds({ kind: 'manifest', manifest: before }, now);
-    expect(list.books.changed).toEqual([{ id: 'bk', title: 'Book', pdfHref: 'books/bk.pdf', pages: 5, reprintSheets: ['b', 'd'], reprintPages: [2, 3, 5] }]);
-    expect(pageRanges([2, 3, 5])).toBe('2\u20133, 5');
+  it("names a changed book's pages to reprint after its contents page, each sheet's pages counted; the whole book when its pages move", () => {
+    // Book pages: contents = 1, a = 2, b = 3–4 (two pages), c = 5, d = 6.
+    const sheets = [sheet('a', '1'), sheet('b', '2', 2), sheet('c', '3'), sheet('d', '4')];
+    const book = { id: 'bk', title: 'Book', sha256: 'old', sheets: ['a', 'b', 'c', 'd'], pages: 6, contentsPages: 1 };
+    const before = manifest(sheets, [book]);
+    const bChanged = manifest([sheets[0], sheet('b', '2y', 2), sheets[2], sheets[3]], [{ ...book, sha256: 'new' }]);
+    const list = compareBuilds({ kind: 'manifest', manifest: before }, bChanged);
+    expect(list.books.changed).toEqual([{ id: 'bk', title: 'Book', pdfHref: 'books/bk.pdf', pages: 6, reprintSheets: ['b'], reprintPages: [3, 4] }]);
+    // A sheet that now takes three pages moves every later page: the whole book is reprinted.
+    const longer = manifest([sheets[0], sheet('b', '2z', 3), sheets[2], sheets[3]], [{ ...book, sha256: 'new', pages: 7 }]);
+    expect(compareBuilds({ kind: 'manifest', manifest: before }, longer).books.changed[0].reprintPages).toEqual([1, 2, 3, 4, 5, 6, 7]);
+    // So does a sheet new to the book, even one unchanged elsewhere.
+    const fewer = manifest(sheets, [{ ...book, sha256: 'fewer', sheets: ['a', 'b', 'c'], pages: 5 }]);
+    const added = compareBuilds({ kind: 'manifest', manifest: fewer }, before).books.changed[0];
+    expect(added.reprintSheets).toEqual(['d']);
+    expect(added.reprintPages).toEqual([1, 2, 3, 4, 5, 6]);
+    expect(pageRanges([3, 4, 6])).toBe('3\u20134, 6');
     expect(pageRanges([1, 2, 3, 4, 7, 9, 10])).toBe('1\u20134, 7, 9\u201310');
     // A book whose PDF is the same bytes is unchanged; a book no longer built is removed.
-    const again = compareBuilds({ kind: 'manifest', manifest: now }, manifest(now.sheets, []));
+    const again = compareBuilds({ kind: 'manifest', manifest: before }, manifest(sheets, []));
     expect(again.books.removed).toEqual([{ id: 'bk', title: 'Book' }]);
-    expect(compareBuilds({ kind: 'manifest', manifest: now }, now).books.counts).toEqual({ added: 0, changed: 0, removed: 0, unchanged: 1 });
+    expect(compareBuilds({ kind: 'manifest', manifest: before }, before).books.counts).toEqual({ added: 0, changed: 0, removed: 0, unchanged: 1 });
   });
 });
 

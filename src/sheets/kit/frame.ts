@@ -40,6 +40,7 @@ export const SHEET_KIND_NAMES = {
   upgradeSheet: 'Engine upgrade',
   consoleCard: 'Console card',
   bookContents: 'Contents',
+  reprintList: 'Print-run checklist',
 } as const;
 export type SheetKindName = keyof typeof SHEET_KIND_NAMES;
 
