@@ -11,7 +11,7 @@ import { reprintListScene, type ReprintListInput } from '../../src/sheets/reprin
 import { sceneProblems } from './sceneChecks.ts';
 import { texts } from './sceneWalk.ts';
 
-const site: SiteConfig = { shopName: 'Demo shop', contactLine: 'Demo contact line', powerUnitFirst: 'kW', speedUnit: 'kn', dataRevision: 'demo rev 7', issueDate: '2026-01-01' };
+const site: SiteConfig = { shopName: 'Demo shop', contactLine: 'Demo contact line', powerUnitFirst: 'kW', speedUnit: 'kn', fuelUnit: 'L/h', dataRevision: 'demo rev 7', issueDate: '2026-01-01' };
 const A4: Paper = { size: 'A4', orientation: 'portrait', bleedMm: 0 };
 const LETTER: Paper = { size: 'Letter', orientation: 'portrait', bleedMm: 0 };
 

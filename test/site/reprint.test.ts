@@ -53,7 +53,7 @@ describe('compareBuilds', () => {
       ['b', 'content'],
     ]);
     expect(list.sheets.counts.revisionAndDateOnly).toBe(1);
-    const input = checklistInput({ list, previous: { kind: 'manifest', manifest: before }, site: { shopName: 'S', contactLine: 'C', powerUnitFirst: 'kW', speedUnit: 'kn', dataRevision: 'r2', issueDate: '2026-01-01' }, dateIso: '2026-01-01', paper: { size: 'A4', orientation: 'portrait', bleedMm: 0 } });
+    const input = checklistInput({ list, previous: { kind: 'manifest', manifest: before }, site: { shopName: 'S', contactLine: 'C', powerUnitFirst: 'kW', speedUnit: 'kn', fuelUnit: 'L/h', dataRevision: 'r2', issueDate: '2026-01-01' }, dateIso: '2026-01-01', paper: { size: 'A4', orientation: 'portrait', bleedMm: 0 } });
     expect(input.sections.find((s) => s.heading.startsWith('Changed sheets'))?.items.map((i) => i.title)).toEqual(['Title of b']);
     expect(input.sections.find((s) => s.heading.startsWith('Changed only in the printed'))?.items.map((i) => i.title)).toEqual(['Title of a']);
   });
