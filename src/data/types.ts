@@ -34,7 +34,7 @@ export interface EngineFamily {
 export interface EngineVariant extends EngineSpec {
   readonly familyId: string;
   readonly variantId: string;
-  /** The variant's own label ("380 hp tune"); EngineSpec.label is family label + variant label. */
+  /** The variant's own label ("271 kW race"); EngineSpec.label is family label + variant label. */
   readonly variantLabel: string;
   readonly notes?: string;
 }

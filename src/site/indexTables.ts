@@ -48,7 +48,7 @@ export function boatSummaryTable(project: Project, results: ReadonlyMap<string, 
 
 /**
  * A limit that may differ between a family's variants: one value when all share it, else each value with
- * the variants that have it ("4600–5000 (350 hp, 320 hp); 4800–5200 (380 hp sport)").
+ * the variants that have it ("4600–5000 (250 kW, 229 kW economy); 4800–5200 (271 kW race)").
  */
 function byVariant(family: EngineFamily, text: (v: EngineFamily['variants'][number]) => string): string {
   const groups = new Map<string, string[]>();

@@ -58,10 +58,10 @@ describe('defaultWallCharts() conditions', () => {
     expect(c.site).toEqual(toSite(undefined));
   });
 
-  it('draws the demo Corbrick four against the Tarnwell 212 through the 1.55 reduction its boat uses', async () => {
+  it('draws the demo Thimblefinch four against the Kelpspindle Riffle through the 1.55 reduction its boat uses', async () => {
     const loaded = await loadProject('data');
     if (!loaded.ok) throw new Error(loaded.errors.map((e) => e.message).join('\n'));
-    const r = defaultWallCharts(loaded.project).find((q): q is WallChartRequest => q.kind === 'wallChart' && q.engineFamilyId === 'corbrick-four' && q.jetId === 'tarnwell-212')!;
+    const r = defaultWallCharts(loaded.project).find((q): q is WallChartRequest => q.kind === 'wallChart' && q.engineFamilyId === 'thimblefinch-trotter' && q.jetId === 'kelpspindle-riffle')!;
     // data/boats/greyling.yaml: the only boat pairing them, reduction 1.55 at 0.96.
     expect(r.conditions.driveLine).toEqual({ ratio: 1.55, efficiency: 0.96 });
   });

@@ -191,7 +191,7 @@ describe('the built demo site in Chromium', { timeout: 600_000 }, () => {
     const table = page.locator('#boats table');
     expect(await table.locator('caption').textContent()).toMatch(/^Boats: /);
     const rows = table.locator('tbody tr');
-    const emberResults = JSON.parse(readFileSync(join(outDir, 'results', 'boats', 'ember-reach.json'), 'utf8'));
+    const emberResults = JSON.parse(readFileSync(join(outDir, 'results', 'boats', 'reedshank.json'), 'utf8'));
     expect(await rows.count()).toBe(6);
     for (let i = 0; i < (await rows.count()); i += 1) {
       expect(await rows.nth(i).locator('a').count()).toBe(1);
@@ -203,8 +203,8 @@ describe('the built demo site in Chromium', { timeout: 600_000 }, () => {
   });
 
   it('shows a calibrated boat’s sea trials, the data-sheet figures beside the calibrated ones, and warnings in bold', async () => {
-    const results = JSON.parse(readFileSync(join(outDir, 'results', 'boats', 'ember-reach.json'), 'utf8'));
-    const { page } = await open('boats/ember-reach/index.html');
+    const results = JSON.parse(readFileSync(join(outDir, 'results', 'boats', 'reedshank.json'), 'utf8'));
+    const { page } = await open('boats/reedshank/index.html');
     expect(await page.locator('#trials tbody tr').count()).toBe(results.calibrated.calibration.trials.length);
     const captions = await page.locator('#results caption').allTextContents();
     expect(captions.filter((c) => c.includes('calibrated to sea trials of 2026-03-14, 2026-03-21'))).toHaveLength(3);
@@ -249,7 +249,7 @@ describe('the built demo site in Chromium', { timeout: 600_000 }, () => {
     const { page: boat } = await open(boatHref);
     await boat.screenshot({ path: 'test-results/site-boat.png', fullPage: true });
     await boat.close();
-    const { page: calibrated } = await open('boats/ember-reach/index.html');
+    const { page: calibrated } = await open('boats/reedshank/index.html');
     await calibrated.locator('main').screenshot({ path: 'test-results/site-boat-calibrated.png' });
     await calibrated.close();
     expect(readFileSync('test-results/site-boat.png').length).toBeGreaterThan(10_000);

@@ -10,7 +10,7 @@ const STACK = /^\s+at .+\(?.+:\d+:\d+\)?$/m;
 function brokenData(): string {
   const dir = join(mkdtempSync(join(tmpdir(), 'matchbook-cli-')), 'data');
   cpSync(join(REPO, 'data'), dir, { recursive: true });
-  const file = join(dir, 'jets', 'tarnwell-212.yaml');
+  const file = join(dir, 'jets', 'kelpspindle-riffle.yaml');
   // A negative impeller rating: the first rating in the file becomes -3.4.
   writeFileSync(file, readFileSync(file, 'utf8').replace(/(rating_kw:\s*)[\d.]+/, '$1-3.4'));
   return dir;
@@ -49,7 +49,7 @@ describe('the matchbook command', () => {
     expect(matchbook(['check']).status).toBe(0);
     const r = matchbook(['check', '--data', brokenData()]);
     expect(r.status).toBe(1);
-    expect(`${r.stdout}${r.stderr}`).toMatch(/tarnwell-212\.yaml:\d+:\d+/);
+    expect(`${r.stdout}${r.stderr}`).toMatch(/kelpspindle-riffle\.yaml:\d+:\d+/);
     expect(`${r.stdout}${r.stderr}`).toContain('-3.4');
     expect(r.stderr).not.toMatch(STACK);
   });

@@ -20,24 +20,24 @@ describe('message paths with --data elsewhere', () => {
   const work = mkdtempSync(join(tmpdir(), 'matchbook-paths-'));
   const shop = join(work, 'shop');
   cpSync(join(REPO, 'data'), shop, { recursive: true });
-  // ember-reach.yaml line 11 is `engine: harrowgate-v8`; name an engine that does not exist.
-  const boat = join(shop, 'boats', 'ember-reach.yaml');
+  // reedshank.yaml line 11 is `engine: copperwhistle-strider`; name an engine that does not exist.
+  const boat = join(shop, 'boats', 'reedshank.yaml');
   const text = readFileSync(boat, 'utf8');
-  expect(text.split('\n')[10]).toBe('engine: harrowgate-v8');
-  writeFileSync(boat, text.replace('engine: harrowgate-v8', 'engine: harrowgate-v9'));
+  expect(text.split('\n')[10]).toBe('engine: copperwhistle-strider');
+  writeFileSync(boat, text.replace('engine: copperwhistle-strider', 'engine: copperwhistle-stridr'));
   mkdirSync(join(work, 'sub'));
 
   it('--data shop names shop/boats/… and the folder shop/engines/', () => {
     const r = check(work, 'shop');
     expect(r.status).toBe(1);
-    expect(r.stderr).toContain('shop/boats/ember-reach.yaml:11:9 engine must name one of the engine families in shop/engines/, found "harrowgate-v9"');
+    expect(r.stderr).toContain('shop/boats/reedshank.yaml:11:9 engine must name one of the engine families in shop/engines/, found "copperwhistle-stridr"');
     expect(r.stderr).not.toMatch(/(^|[\s(])data\//m);
   });
 
   it('--data ../shop from a sub-folder names ../shop/boats/… and ../shop/engines/', () => {
     const r = check(join(work, 'sub'), '../shop');
     expect(r.status).toBe(1);
-    expect(r.stderr).toContain('../shop/boats/ember-reach.yaml:11:9 engine must name one of the engine families in ../shop/engines/, found "harrowgate-v9"');
+    expect(r.stderr).toContain('../shop/boats/reedshank.yaml:11:9 engine must name one of the engine families in ../shop/engines/, found "copperwhistle-stridr"');
     expect(r.stderr).not.toMatch(/(^|[\s(])data\//m);
   });
 

@@ -127,8 +127,8 @@ describe('names that are object-prototype words', () => {
   it('a boat, engine, jet and book whose id is "constructor" build, into an --out named "constructor"', () => {
     const dir = writeSmallData(join(root, 'constructor'));
     const copy = (from: string, to: string, edit: (text: string) => string) => writeFileSync(join(dir, to), edit(readFileSync(join(dir, from), 'utf8')));
-    copy('engines/corbrick-four.yaml', 'engines/constructor.yaml', (t) => t.replace(/^id: .*$/m, 'id: constructor'));
-    copy('jets/tarnwell-212.yaml', 'jets/constructor.yaml', (t) => t.replace(/^id: .*$/m, 'id: constructor'));
+    copy('engines/thimblefinch-trotter.yaml', 'engines/constructor.yaml', (t) => t.replace(/^id: .*$/m, 'id: constructor'));
+    copy('jets/kelpspindle-riffle.yaml', 'jets/constructor.yaml', (t) => t.replace(/^id: .*$/m, 'id: constructor'));
     copy('boats/light-boat.yaml', 'boats/constructor.yaml', (t) =>
       t.replace(/^id: .*$/m, 'id: constructor').replace(/^engine: .*$/m, 'engine: constructor').replace(/^jet: .*$/m, 'jet: constructor'));
     copy('books/cards.yaml', 'books/constructor.yaml', (t) => t.replace(/^id: .*$/m, 'id: constructor').replace(/boat: greyling/, 'boat: constructor'));

@@ -29,13 +29,13 @@ describe("a book's own cautions", () => {
     expect(project.books.find((b) => b.id === 'owner-console-cards')?.extraCautions).toEqual([KILL_CORD]);
     const plan = planSheets(project);
     const scene = (slug: string) => sheetScene(plan.sheets.find((s) => s.slug === slug)!.request, { project, dateIso: '2026-01-01' });
-    const bookCard = cautionText(scene('card-ember-reach-card4x6-landscape-bleed-mph-kn-usgal'));
+    const bookCard = cautionText(scene('card-reedshank-card4x6-landscape-bleed-mph-kn-usgal'));
     expect(bookCard).toContain(KILL_CORD);
     // After every built-in caution.
     for (const c of BUILT_IN_CAUTIONS) expect(bookCard.indexOf(KILL_CORD.slice(0, 20))).toBeGreaterThan(bookCard.indexOf(c.slice(0, 20)));
     // The boat's own card and the dealer book's sheets do not carry it.
-    expect(cautionText(scene('card-ember-reach'))).not.toContain('kill-cord');
-    expect(cautionText(scene('spec-ember-reach'))).not.toContain('kill-cord');
+    expect(cautionText(scene('card-reedshank'))).not.toContain('kill-cord');
+    expect(cautionText(scene('spec-reedshank'))).not.toContain('kill-cord');
   });
 
   it('give a book sheet its own file, named after the book when nothing else tells it from the default one', () => {
@@ -43,7 +43,7 @@ describe("a book's own cautions", () => {
     const r = loadProjectFromFiles(demoWith(CARDS, cards));
     if (!r.ok) throw new Error(r.errors.map((e) => e.message).join('\n'));
     // The A6 landscape card is every boat's own card; with the book's caution it is a sheet of its own.
-    expect(planSheets(r.project).byBook.get('owner-console-cards')).toEqual(['card-ember-reach-owner-console-cards', 'card-tarn-hollow-owner-console-cards', 'card-greyling-owner-console-cards']);
+    expect(planSheets(r.project).byBook.get('owner-console-cards')).toEqual(['card-reedshank-owner-console-cards', 'card-cloudpail-express-owner-console-cards', 'card-greyling-owner-console-cards']);
   });
 
   it("refuses more than 6 together with site.yaml's, at the book's cautions: line, with the counts and the fix", () => {

@@ -18,9 +18,9 @@ const ids = (xs: readonly { id: string }[]) => xs.map((x) => x.id);
 describe('the demo data in data/ is an invented fleet that exercises every feature', () => {
   it('loads without errors or warnings, every list sorted by id', async () => {
     const p = await demo();
-    expect(ids(p.engines)).toEqual(['brindlecombe-td6', 'corbrick-four', 'harrowgate-v8']);
-    expect(ids(p.jets)).toEqual(['tarnwell-212', 'vennick-260']);
-    expect(ids(p.boats)).toEqual(['brine-lark', 'ember-reach', 'greyling', 'kauri-belle', 'swiftwater-two', 'tarn-hollow']);
+    expect(ids(p.engines)).toEqual(['anvilmoth-hauler', 'copperwhistle-strider', 'thimblefinch-trotter']);
+    expect(ids(p.jets)).toEqual(['gullbobbin-shoal', 'kelpspindle-riffle']);
+    expect(ids(p.boats)).toEqual(['brine-lark', 'cloudpail-express', 'floodmoth-two', 'greyling', 'reedshank', 'sorrel-belle']);
     expect(ids(p.books)).toEqual(['dealer-spec-sheets', 'owner-console-cards', 'shop-wall-charts']);
   });
 
@@ -30,12 +30,12 @@ describe('the demo data in data/ is an invented fleet that exercises every featu
 
   it('covers a hp table with tunes, a torque table, a single known point, 4–6 impellers per jet', async () => {
     const p = await demo();
-    const v8 = p.engines.find((e) => e.id === 'harrowgate-v8')!;
-    expect(v8.variants.map((v) => v.variantId)).toEqual(['sport-350', 'cruise-320', 'race-380']);
-    expect(p.engines.find((e) => e.id === 'corbrick-four')!.variants[0].curve.kind).toBe('knownPoint');
-    expect(p.engines.find((e) => e.id === 'corbrick-four')!.fuel).toBe('petrol'); // written "gasoline"
+    const v8 = p.engines.find((e) => e.id === 'copperwhistle-strider')!;
+    expect(v8.variants.map((v) => v.variantId)).toEqual(['sport', 'economy', 'race']);
+    expect(p.engines.find((e) => e.id === 'thimblefinch-trotter')!.variants[0].curve.kind).toBe('knownPoint');
+    expect(p.engines.find((e) => e.id === 'thimblefinch-trotter')!.fuel).toBe('petrol'); // written "gasoline"
     for (const jet of p.jets) expect(jet.impellers.length).toBeGreaterThanOrEqual(4);
-    // A 0.915 tune scales the whole published curve: 350 hp × 0.915 at 5000 rpm.
+    // A 0.915 tune scales the whole published curve: 250 kW × 0.915 at 5000 rpm.
     const at5000 = (variant: number) => {
       const c = v8.variants[variant].curve;
       return c.kind === 'table' ? c.points.find((pt) => pt.speedRpm === 5000)!.powerKw : NaN;
@@ -46,12 +46,12 @@ describe('the demo data in data/ is an invented fleet that exercises every featu
   it('has a salt-water boat, a boat at about 1800 m, and sea trials on two impellers', async () => {
     const p = await demo();
     expect(p.boats.filter((b) => b.water.kind === 'salt').map((b) => b.id)).toEqual(['brine-lark']);
-    const high = p.boats.find((b) => b.id === 'tarn-hollow')!;
+    const high = p.boats.find((b) => b.id === 'cloudpail-express')!;
     expect(high.site.altitudeM).toBe(1800);
     // Standard atmosphere at 1800 m is about 81.5 kPa (U.S. Standard Atmosphere 1976 formula).
     expect(high.site.ambient.pressureKpa).toBeGreaterThan(81);
     expect(high.site.ambient.pressureKpa).toBeLessThan(82);
-    const trials = p.boats.find((b) => b.id === 'ember-reach')!.trials;
+    const trials = p.boats.find((b) => b.id === 'reedshank')!.trials;
     expect(new Set(trials.map((t) => t.impellerId)).size).toBeGreaterThanOrEqual(2);
   });
 
@@ -94,7 +94,7 @@ describe('checkData() prints every error or a one-line summary', () => {
     const r = await checkData('test/fixtures/data/out-of-range');
     expect(r.exitCode).toBe(1);
     const lines = r.text.trimEnd().split('\n');
-    expect(lines[0]).toBe('test/fixtures/data/out-of-range/engines/harrowgate-v8.yaml:10:24 wot_window_rpm[1] must be at most max_rpm (5200 rpm): the WOT window lies inside [idle, max], found 5400');
+    expect(lines[0]).toBe('test/fixtures/data/out-of-range/engines/copperwhistle-strider.yaml:10:24 wot_window_rpm[1] must be at most max_rpm (5200 rpm): the WOT window lies inside [idle, max], found 5400');
     expect(lines.at(-1)).toBe('4 errors in 3 files; nothing was built from test/fixtures/data/out-of-range. Fix them and run check again.');
   });
 

@@ -31,12 +31,12 @@ describe('the JSON Schemas in schema/ are generated from the loader schema and a
 
   // Fixtures whose mistake a JSON Schema can express (types, ranges, required, unknown keys, unit choices).
   it.each([
-    ['wrong-type', 'jets/tarnwell-212.yaml', '/impellers/2/rating_kw'],
-    ['negative-rating', 'jets/tarnwell-212.yaml', '/impellers/2/rating_kw'],
-    ['missing-field', 'boats/ember-reach.yaml', ''],
-    ['unknown-field', 'jets/tarnwell-212.yaml', '/impellers/2'],
-    ['unit-choice', 'jets/tarnwell-212.yaml', '/impellers/2'],
-    ['out-of-range', 'jets/tarnwell-212.yaml', '/exponent'],
+    ['wrong-type', 'jets/kelpspindle-riffle.yaml', '/impellers/2/rating_kw'],
+    ['negative-rating', 'jets/kelpspindle-riffle.yaml', '/impellers/2/rating_kw'],
+    ['missing-field', 'boats/reedshank.yaml', ''],
+    ['unknown-field', 'jets/kelpspindle-riffle.yaml', '/impellers/2'],
+    ['unit-choice', 'jets/kelpspindle-riffle.yaml', '/impellers/2'],
+    ['out-of-range', 'jets/kelpspindle-riffle.yaml', '/exponent'],
   ])('ajv rejects the %s fixture at the same place the loader reports', (fixture, file, pointer) => {
     const text = readFileSync(`test/fixtures/data/${fixture}/${file}`, 'utf8');
     const validate = validators[kindOf(`data/${file}`)];

@@ -9,15 +9,15 @@ import { loadProjectFromFiles } from '../../src/data/load.ts';
 import { LIMITS } from '../../src/data/schema/common.ts';
 import { demoWith } from './helpers.ts';
 
-const JET = 'data/jets/tarnwell-212.yaml';
-const BOAT = 'data/boats/ember-reach.yaml';
-const ENGINE = 'data/engines/harrowgate-v8.yaml';
+const JET = 'data/jets/kelpspindle-riffle.yaml';
+const BOAT = 'data/boats/reedshank.yaml';
+const ENGINE = 'data/engines/copperwhistle-strider.yaml';
 const SITE = 'data/site.yaml';
 
 /** The demo jet with n impellers: the six demo ones, then invented ones with ratings rising 0.1 kW a step. */
 function jetWith(n: number, label = (i: number) => `X${i}`): string {
   const head = readFileSync(JET, 'utf8').split('impellers:')[0];
-  const demo = ['k16', 'k19', 'k21', 'k23', 'k26', 'k30'];
+  const demo = ['wisp', 'breeze', 'gust', 'squall', 'gale', 'storm'];
   const rows = Array.from({ length: n }, (_, i) => `  - id: ${demo[i] ?? `x${i}`}\n    label: ${label(i)}\n    rating_kw: ${(1.5 + i * 0.1).toFixed(2)}\n`);
   return `${head}impellers:\n${rows.join('')}`;
 }
@@ -60,8 +60,8 @@ describe('the limits the sheets are laid out for', () => {
 
   it('refuse a 61-character jet name, and load one of 60', () => {
     const jet = readFileSync(JET, 'utf8');
-    expect(errorsOf(JET, jet.replace('label: Tarnwell 212 jet unit', `label: ${'J'.repeat(60)}`))).toEqual([]);
-    expect(errorsOf(JET, jet.replace('label: Tarnwell 212 jet unit', `label: ${'J'.repeat(61)}`))).toEqual([
+    expect(errorsOf(JET, jet.replace('label: Kelpspindle Riffle jet unit', `label: ${'J'.repeat(60)}`))).toEqual([]);
+    expect(errorsOf(JET, jet.replace('label: Kelpspindle Riffle jet unit', `label: ${'J'.repeat(61)}`))).toEqual([
       `${JET}:4:8 label must be at most 60 characters (sheet titles print it), found "${'J'.repeat(46)}… (61 characters)`,
     ]);
   });

@@ -67,8 +67,8 @@ function work(fn: () => void): number {
   return count;
 }
 
-const JET = 'data/jets/tarnwell-212.yaml';
-const BOAT = 'data/boats/ember-reach.yaml';
+const JET = 'data/jets/kelpspindle-riffle.yaml';
+const BOAT = 'data/boats/reedshank.yaml';
 const jet = readFileSync(JET, 'utf8');
 const boat = readFileSync(BOAT, 'utf8');
 
@@ -82,9 +82,9 @@ const loadWork = (path: string, text: string) =>
 
 const CASES: [string, string, (n: number) => string][] = [
   ['unknown keys at the top of a jet file', JET, (n) => jet + Array.from({ length: n }, (_, i) => `extra_${i}: ${i}\n`).join('')],
-  ['unknown keys inside one impeller', JET, (n) => jet.replace('    rating_kw: 1.55\n', `    rating_kw: 1.55\n${Array.from({ length: n }, (_, i) => `    extra_${i}: ${i}\n`).join('')}`)],
+  ['unknown keys inside one impeller', JET, (n) => jet.replace('    rating_kw: 1.48\n', `    rating_kw: 1.48\n${Array.from({ length: n }, (_, i) => `    extra_${i}: ${i}\n`).join('')}`)],
   ['the same key repeated', JET, (n) => jet + Array.from({ length: n }, () => 'extra: 1\n').join('')],
-  ['sea-trial rows of a boat (a valid 10,000-row table)', BOAT, (n) => boat.replace(/^trials:\n/m, `trials:\n${Array.from({ length: n }, (_, i) => `  - { date: 2026-03-14, impeller: k23, wot_rpm: ${4600 + (i % 200)} }\n`).join('')}`)],
+  ['sea-trial rows of a boat (a valid 10,000-row table)', BOAT, (n) => boat.replace(/^trials:\n/m, `trials:\n${Array.from({ length: n }, (_, i) => `  - { date: 2026-03-14, impeller: squall, wot_rpm: ${4600 + (i % 200)} }\n`).join('')}`)],
 ];
 
 describe('the loader does work linear in the size of a definition', () => {

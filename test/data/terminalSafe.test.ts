@@ -8,7 +8,7 @@ import { dataError, terminalSafe } from '../../src/data/errors.ts';
 import { loadProjectFromFiles } from '../../src/data/load.ts';
 import { demoWith } from './helpers.ts';
 
-const JET = 'data/jets/tarnwell-212.yaml';
+const JET = 'data/jets/kelpspindle-riffle.yaml';
 const UNSAFE = /[\u0000-\u0009\u000b-\u001f\u007f-\u009f\u200b-\u200f\u202a-\u202e\u2066-\u2069]/;
 
 function messagesFor(path: string, text: string): string[] {
@@ -25,14 +25,14 @@ describe('terminalSafe()', () => {
 
 describe('located messages escape user text the same way everywhere', () => {
   it('escapes a key holding an ESC sequence (unknown field)', () => {
-    const messages = messagesFor(JET, 'id: tarnwell-212\n"\\e[2J\\e[1;1HOK": 1\n');
+    const messages = messagesFor(JET, 'id: kelpspindle-riffle\n"\\e[2J\\e[1;1HOK": 1\n');
     const m = messages.find((x) => x.includes('is not a field here'));
     expect(m).toContain('\\u001b[2J\\u001b[1;1HOK');
     expect(messages.every((x) => !UNSAFE.test(x))).toBe(true);
   });
 
   it('escapes a value holding control and bidi characters', () => {
-    const messages = messagesFor(JET, 'id: "tarnwell-212\\u202e\\e[31m"\n');
+    const messages = messagesFor(JET, 'id: "kelpspindle-riffle\\u202e\\e[31m"\n');
     expect(messages.some((x) => x.includes('\\u202e\\u001b[31m'))).toBe(true);
     expect(messages.every((x) => !UNSAFE.test(x))).toBe(true);
   });
@@ -43,7 +43,7 @@ describe('located messages escape user text the same way everywhere', () => {
   });
 
   it('escapes a duplicated key holding a control character', () => {
-    const messages = messagesFor(JET, 'id: tarnwell-212\n"k\\x07": 1\n"k\\x07": 2\n');
+    const messages = messagesFor(JET, 'id: kelpspindle-riffle\n"k\\x07": 1\n"k\\x07": 2\n');
     expect(messages.some((x) => x.includes('k\\u0007'))).toBe(true);
     expect(messages.every((x) => !UNSAFE.test(x))).toBe(true);
   });

@@ -56,8 +56,8 @@ describe('the loader normalises every unit to kW, kg, litres, knots, kPa, °C', 
 
   it('converts impeller ratings in hp with the NIST horsepower', () => {
     const p = load([]);
-    const v58 = p.jets.find((j) => j.id === 'vennick-260')!.impellers.find((i) => i.id === 'v58')!;
-    expect(v58.ratingKw).toBeCloseTo(9.0 * KW_PER_HP, 12);
+    const pebble = p.jets.find((j) => j.id === 'gullbobbin-shoal')!.impellers.find((i) => i.id === 'pebble')!;
+    expect(pebble.ratingKw).toBeCloseTo(9.0 * KW_PER_HP, 12);
   });
 
   it('loads a boat written in lb, US gal, mph, °F and inHg as kg, litres, knots, °C and kPa', () => {
@@ -65,14 +65,14 @@ describe('the loader normalises every unit to kW, kg, litres, knots, kPa, °C', 
       'id: imperial',
       'name: Imperial test boat',
       'hull: { description: test, type: runabout, displacement_lb: 3000 }',
-      'engine: corbrick-four',
-      'jet: tarnwell-212',
-      'impeller: k26',
+      'engine: thimblefinch-trotter',
+      'jet: kelpspindle-riffle',
+      'impeller: gale',
       'water: { density_kg_m3: 1010 }',
       'site: { pressure_inhg: 29.92, air_temp_f: 77, humidity_pct: 50 }',
       'cruise: [{ label: fast, speed_mph: 30 }, { label: eco, power_hp: 100 }]',
       'fuel_tank_us_gal: 40',
-      'trials: [{ date: 2026-05-01, impeller: k26, wot_rpm: 5500, speed_mph: 40, load_lb: 400 }]',
+      'trials: [{ date: 2026-05-01, impeller: gale, wot_rpm: 5500, speed_mph: 40, load_lb: 400 }]',
     ].join('\n');
     const boat = load([{ path: 'data/boats/imperial.yaml', text: `${imperial}\n` }]).boats.find((b) => b.id === 'imperial')!;
     expect(boat.hull.displacementKg).toBeCloseTo(3000 * KG_PER_LB, 9);
@@ -88,7 +88,7 @@ describe('the loader normalises every unit to kW, kg, litres, knots, kPa, °C', 
 
   it('turns an altitude into the standard-atmosphere pressure', () => {
     // U.S. Standard Atmosphere 1976 table: 2000 m → 79.501 kPa (rounded table; within a few pascals).
-    const text = 'id: high\nname: High\nhull: { description: t, type: runabout, displacement_kg: 1000 }\nengine: corbrick-four\njet: tarnwell-212\nimpeller: k26\nwater: fresh\nsite: { altitude_m: 2000 }\n';
+    const text = 'id: high\nname: High\nhull: { description: t, type: runabout, displacement_kg: 1000 }\nengine: thimblefinch-trotter\njet: kelpspindle-riffle\nimpeller: gale\nwater: fresh\nsite: { altitude_m: 2000 }\n';
     const boat = load([{ path: 'data/boats/high.yaml', text }]).boats.find((b) => b.id === 'high')!;
     expect(Math.abs(boat.site.ambient.pressureKpa - 79.501)).toBeLessThan(0.005);
     expect(boat.site.altitudeM).toBe(2000);

@@ -59,7 +59,7 @@ describe('a ModelInputError reaching the site', () => {
     expect(isUserFixable(error)).toBe(true);
     const loaded = loadProjectFromFiles(demoFiles());
     if (!loaded.ok) throw new Error('demo must load');
-    const problem = sheetDrawProblem(loaded.project, new SheetDrawError('spec-ember-reach', error));
-    expect(problem.message).toMatch(/^data\/books\/dealer-spec-sheets\.yaml:\d+:\d+ sheets\[0\] asks for a spec sheet \(boat ember-reach, .*found the operating point cannot be solved: absorption coefficient NaN — check the impeller ratings$/);
+    const problem = sheetDrawProblem(loaded.project, new SheetDrawError('spec-reedshank', error));
+    expect(problem.message).toMatch(/^data\/books\/dealer-spec-sheets\.yaml:\d+:\d+ sheets\[0\] asks for a spec sheet \(boat reedshank, .*found the operating point cannot be solved: absorption coefficient NaN — check the impeller ratings$/);
   });
 });

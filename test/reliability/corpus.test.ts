@@ -75,11 +75,11 @@ describe('the bad-input corpus', () => {
 });
 
 describe('generated large files', () => {
-  const CURVE = 'engines/harrowgate-v8.yaml';
+  const CURVE = 'engines/copperwhistle-strider.yaml';
 
   it('refuses a curve of 100 000 rows (a file of several MB) at its points list', async () => {
     const rows = Array.from({ length: 100_000 }, (_, i) => `    - [${1000 + i}, ${60 + (i % 300)}.25]`).join('\n');
-    const text = `id: harrowgate-v8\nlabel: Big\nmaker: Demo\nfuel: petrol\naspiration: natural\nidle_rpm: 650\nwot_window_rpm: [4600, 5000]\nmax_rpm: 5200\ncurve:\n  unit: hp\n  points:\n${rows}\nvariants:\n  - id: sport-350\n    label: 350 hp\n  - id: cruise-320\n    label: 320\n  - id: race-380\n    label: 380\n`;
+    const text = `id: copperwhistle-strider\nlabel: Big\nmaker: Demo\nfuel: petrol\naspiration: natural\nidle_rpm: 650\nwot_window_rpm: [4600, 5000]\nmax_rpm: 5200\ncurve:\n  unit: hp\n  points:\n${rows}\nvariants:\n  - id: sport\n    label: 350 hp\n  - id: economy\n    label: 320\n  - id: race\n    label: 380\n`;
     expect(Buffer.byteLength(text)).toBeGreaterThan(2 * 1024 * 1024);
     expect(Buffer.byteLength(text)).toBeLessThan(MAX_FILE_BYTES);
     const dataDir = materialise({ name: 'bom-at-start', about: '', remove: [], errors: [], warnings: [], files: [], accepted: true }, join(work, 'several-mb'));
@@ -109,7 +109,7 @@ describe('generated large files', () => {
   });
 
   it('refuses 10,000 unknown keys with one located error each, at its own line', async () => {
-    const JET = 'jets/tarnwell-212.yaml';
+    const JET = 'jets/kelpspindle-riffle.yaml';
     const dataDir = materialise({ name: 'bom-at-start', about: '', remove: [], errors: [], warnings: [], files: [], accepted: true }, join(work, 'many-keys'));
     const head = readFileSync(join(dataDir, JET), 'utf8');
     const lines = head.split('\n').length;

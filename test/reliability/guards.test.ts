@@ -33,7 +33,7 @@ describe('decodeUtf8()', () => {
 
 describe('deepestBlockLine()', () => {
   it('passes the demo layout and text that merely contains dashes after its content starts', () => {
-    expect(deepestBlockLine('impellers:\n  - id: k16\n    label: K16\nnotes: a - b - c - d\n')).toBeUndefined();
+    expect(deepestBlockLine('impellers:\n  - id: wisp\n    label: Wisp\nnotes: a - b - c - d\n')).toBeUndefined();
   });
 
   it(`finds the first line whose content starts past column ${MAX_CONTENT_COLUMN}, through "- " markers and indentation`, () => {

@@ -100,9 +100,9 @@ function clearChoice(node: Obj, key: string, parent: string | number | undefined
 /** Which demo file holds (or receives) a field of each kind; the first that has the field's parent wins. */
 const FILES: Record<SchemaKind, readonly string[]> = {
   site: ['data/site.yaml'],
-  engine: ['data/engines/harrowgate-v8.yaml', 'data/engines/corbrick-four.yaml', 'data/engines/brindlecombe-td6.yaml'],
-  jet: ['data/jets/tarnwell-212.yaml', 'data/jets/vennick-260.yaml'],
-  boat: ['data/boats/ember-reach.yaml', 'data/boats/brine-lark.yaml', 'data/boats/kauri-belle.yaml', 'data/boats/greyling.yaml', 'data/boats/swiftwater-two.yaml', 'data/boats/tarn-hollow.yaml'],
+  engine: ['data/engines/copperwhistle-strider.yaml', 'data/engines/thimblefinch-trotter.yaml', 'data/engines/anvilmoth-hauler.yaml'],
+  jet: ['data/jets/kelpspindle-riffle.yaml', 'data/jets/gullbobbin-shoal.yaml'],
+  boat: ['data/boats/reedshank.yaml', 'data/boats/brine-lark.yaml', 'data/boats/sorrel-belle.yaml', 'data/boats/greyling.yaml', 'data/boats/floodmoth-two.yaml', 'data/boats/cloudpail-express.yaml'],
   book: ['data/books/shop-wall-charts.yaml', 'data/books/owner-console-cards.yaml', 'data/books/dealer-spec-sheets.yaml'],
 };
 

@@ -127,9 +127,9 @@ describe('fits that over-rev or lug', () => {
   });
 
   it('never recommend an impeller whose WOT rpm lies outside the engine window (5400–5800 rpm)', () => {
-    // Upgrade sheets name the best impeller for each power change as "K26: 5680 rpm".
+    // Upgrade sheets name the best impeller for each power change as "Gale: 5680 rpm".
     for (const boat of ['greyling', 'light-boat', 'heavy-boat']) {
-      const picks = [...sheetText(`upgrade-${boat}`).matchAll(/\bK\d+: (\d{4}) rpm/g)].map((m) => Number(m[1]));
+      const picks = [...sheetText(`upgrade-${boat}`).matchAll(/\b(?:Wisp|Breeze|Gust|Squall|Gale|Storm): (\d{4}) rpm/g)].map((m) => Number(m[1]));
       expect(picks.length, boat).toBeGreaterThan(0);
       for (const rpm of picks) {
         expect(rpm, boat).toBeGreaterThanOrEqual(5400);
@@ -152,13 +152,13 @@ describe('atomic output', () => {
 
   it('leaves the previous out/ untouched, byte for byte, when a file breaks between two builds', async () => {
     const before = tree(out);
-    const jet = join(data, 'jets/tarnwell-212.yaml');
+    const jet = join(data, 'jets/kelpspindle-riffle.yaml');
     const good = readFileSync(jet, 'utf8');
-    writeFileSync(jet, good.replace('rating_kw: 2.15', 'rating_kw: [2.15'));
+    writeFileSync(jet, good.replace('rating_kw: 2.06', 'rating_kw: [2.06'));
     const run = await build();
     writeFileSync(jet, good);
     expect(run.status).toBe(1);
-    expect(run.stderr).toContain('jets/tarnwell-212.yaml:');
+    expect(run.stderr).toContain('jets/kelpspindle-riffle.yaml:');
     const after = tree(out);
     expect([...after.keys()]).toEqual([...before.keys()]);
     for (const [path, bytes] of before) expect(Buffer.compare(bytes, after.get(path)!), path).toBe(0);

@@ -20,7 +20,7 @@ describe('user text in every message of the command line is escaped', () => {
   it('check: a key and a value holding ESC sequences, in a data folder whose name holds one', { timeout: 60_000 }, async () => {
     const data = join(root, 'data\u001b[2J');
     cpSync(join(REPO_DIR, 'data'), data, { recursive: true });
-    const jet = join(data, 'jets/tarnwell-212.yaml');
+    const jet = join(data, 'jets/kelpspindle-riffle.yaml');
     writeFileSync(jet, readFileSync(jet, 'utf8').replace(/^notes: .*$/m, 'notes: "pump \\e]0;owned\\a ok"\n"\\e[2J\\e[1;1HOK": 1'));
     const run = await matchbook(['check', '--data', data]);
     expect(run.status).toBe(1);
@@ -29,7 +29,7 @@ describe('user text in every message of the command line is escaped', () => {
     // The key (an unknown field), the value (refused by the text rule) and the folder, each escaped where it stands.
     expect(run.stderr).toContain('a field named "\\u001b[2J\\u001b[1;1HOK"');
     expect(run.stderr).toContain('notes must hold only printable characters');
-    expect(run.stderr).toContain('data\\u001b[2J/jets/tarnwell-212.yaml:');
+    expect(run.stderr).toContain('data\\u001b[2J/jets/kelpspindle-riffle.yaml:');
     expect(run.stderr).toContain('nothing was built from ');
   });
 

@@ -21,13 +21,13 @@ describe('a wall chart says how its conditions differ from the default', () => {
       .filter((s) => s.request.kind === 'wallChart')
       .map((s) => `${s.slug} | ${sheetScene(s.request, { project: r.project, dateIso: '2026-01-01' }).title}`);
     expect(titles).toEqual([
-      'wall-chart-brindlecombe-td6-vennick-260 | Brindlecombe TD6 6.0 L with Vennick 260 jet unit: wall chart',
-      'wall-chart-corbrick-four-tarnwell-212 | Corbrick 2.3 four with Tarnwell 212 jet unit: wall chart',
-      'wall-chart-harrowgate-v8-tarnwell-212 | Harrowgate 5.7 V8 with Tarnwell 212 jet unit: wall chart',
-      'wall-chart-corbrick-four-tarnwell-212-salt-cruise-45-75kw | Corbrick 2.3 four with Tarnwell 212 jet unit: wall chart (salt water, cruise lines at 45, 75 kW)',
+      'wall-chart-anvilmoth-hauler-gullbobbin-shoal | Anvilmoth Hauler 6.0 L six with Gullbobbin Shoal jet unit: wall chart',
+      'wall-chart-copperwhistle-strider-kelpspindle-riffle | Copperwhistle Strider 5.1 L V6 with Kelpspindle Riffle jet unit: wall chart',
+      'wall-chart-thimblefinch-trotter-kelpspindle-riffle | Thimblefinch Trotter 2.3 L four with Kelpspindle Riffle jet unit: wall chart',
+      'wall-chart-thimblefinch-trotter-kelpspindle-riffle-salt-cruise-45-75kw | Thimblefinch Trotter 2.3 L four with Kelpspindle Riffle jet unit: wall chart (salt water, cruise lines at 45, 75 kW)',
     ]);
     // data/books/shop-wall-charts.yaml: the first two entries give no conditions and are the default charts themselves.
-    expect(plan.byBook.get('shop-wall-charts')).toEqual(['wall-chart-harrowgate-v8-tarnwell-212', 'wall-chart-brindlecombe-td6-vennick-260', 'wall-chart-corbrick-four-tarnwell-212-salt-cruise-45-75kw']);
+    expect(plan.byBook.get('shop-wall-charts')).toEqual(['wall-chart-copperwhistle-strider-kelpspindle-riffle', 'wall-chart-anvilmoth-hauler-gullbobbin-shoal', 'wall-chart-thimblefinch-trotter-kelpspindle-riffle-salt-cruise-45-75kw']);
   });
 
   it("completes a book chart's conditions field by field from the pairing's default chart", async () => {
@@ -35,8 +35,8 @@ describe('a wall chart says how its conditions differ from the default', () => {
     if (!r.ok) throw new Error('demo did not load');
     const plan = planSheets(r.project);
     const request = (slug: string) => plan.sheets.find((s) => s.slug === slug)!.request;
-    const pairing = request('wall-chart-corbrick-four-tarnwell-212');
-    const salt = request('wall-chart-corbrick-four-tarnwell-212-salt-cruise-45-75kw');
+    const pairing = request('wall-chart-thimblefinch-trotter-kelpspindle-riffle');
+    const salt = request('wall-chart-thimblefinch-trotter-kelpspindle-riffle-salt-cruise-45-75kw');
     if (pairing.kind !== 'wallChart' || salt.kind !== 'wallChart') throw new Error('expected wall charts');
     // The book gives water and cruise lines only: the drive line (the corbrick boats' 1.55:1, 96 %) and the site stay the pairing's.
     expect(salt.conditions.driveLine).toEqual({ ratio: 1.55, efficiency: 0.96 });
@@ -50,7 +50,7 @@ describe('a wall chart says how its conditions differ from the default', () => {
   it('says which asked-for cruise line the power panel leaves out (45 kW is under every WOT point of the corbrick chart)', async () => {
     const r = await loadProject('data');
     if (!r.ok) throw new Error('demo did not load');
-    const planned = planSheets(r.project).sheets.find((s) => s.slug === 'wall-chart-corbrick-four-tarnwell-212-salt-cruise-45-75kw')!;
+    const planned = planSheets(r.project).sheets.find((s) => s.slug === 'wall-chart-thimblefinch-trotter-kelpspindle-riffle-salt-cruise-45-75kw')!;
     const scene = sheetScene(planned.request, { project: r.project, dateIso: '2026-01-01' });
     const words = texts(scene).map((t) => t.text).join(' ');
     expect(words).toContain('Cruise line at 45 kW left out of the power panel');

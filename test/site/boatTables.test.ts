@@ -28,9 +28,9 @@ function pageOf(p: Project, boatId: string): string {
 
 beforeAll(async () => {
   project = await demoProject();
-  const boat = project.boats.find((b) => b.id === 'ember-reach')!;
+  const boat = project.boats.find((b) => b.id === 'reedshank')!;
   result = analyseBoat({ boat, project });
-  page = pageOf(project, 'ember-reach');
+  page = pageOf(project, 'reedshank');
   tables = pageTables(page);
   const withoutTrials: Project = { ...project, boats: project.boats.map((b) => (b.id === boat.id ? { ...b, trials: [] } : b)) };
   const barePage = pageOf(withoutTrials, boat.id);
@@ -169,8 +169,8 @@ describe('the same boat without sea trials', () => {
 
 describe('a boat fitted with an impeller that over-revs its engine', () => {
   it('marks the verdict, prints the limiter rpm once and marks every over-revving upgrade row', () => {
-    // Demo data refitted (invented what-if): the Greyling with the lightest Tarnwell impeller rides its limiter.
-    const refit: Project = { ...project, boats: project.boats.map((b) => (b.id === 'greyling' ? { ...b, impellerId: 'k16' } : b)) };
+    // Demo data refitted (invented what-if): the Greyling with the lightest Kelpspindle impeller rides its limiter.
+    const refit: Project = { ...project, boats: project.boats.map((b) => (b.id === 'greyling' ? { ...b, impellerId: 'wisp' } : b)) };
     const r = analyseBoat({ boat: refit.boats.find((b) => b.id === 'greyling')!, project: refit });
     expect(r.wot.nominal.status).toBe('revLimited');
     const html = pageOf(refit, 'greyling');
@@ -198,7 +198,7 @@ describe('every table of a boat page', () => {
 describe('a boat page whose sea trials the calibration refuses', () => {
   it('says the trials were not used and why, with no calibrated figures', () => {
     // Trials far below what the data predicts (invented): the engine would need about a third of its power.
-    const boat = project.boats.find((b) => b.id === 'ember-reach')!;
+    const boat = project.boats.find((b) => b.id === 'reedshank')!;
     const slow: Project = {
       ...project,
       boats: project.boats.map((b) => (b.id === boat.id ? { ...b, trials: b.trials.map((t) => ({ ...t, wotRpm: Math.round(t.wotRpm * 0.7) })) } : b)),

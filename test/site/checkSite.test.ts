@@ -44,19 +44,19 @@ describe('check lays out what build draws', () => {
   });
 
   it('says a wall chart that cannot be laid out at the jet file\'s impellers: line and at the book entry that asks for it', async () => {
-    const project = withImpellers(await demo(), 'tarnwell-212', 200);
+    const project = withImpellers(await demo(), 'kelpspindle-riffle', 200);
     const problems = layoutProblems(project, { dateIso: '2026-01-01' }).filter((e) => e.expected.startsWith('asks for a wall chart'));
     const places = problems.map((e) => `${e.file}:${e.line}:${e.column} ${e.field}`);
     // 200 impellers (past the limit of 24, which the loader refuses first) do not fit even four row pages.
-    // A default wall chart no book lists (corbrick-four): the jet's impellers list (line 10 of the demo file).
-    expect(places).toContain('data/jets/tarnwell-212.yaml:10:1 impellers');
-    // The book's wall charts of the pairing: sheets[0] (which is harrowgate-v8's default chart) and sheets[2].
+    // A default wall chart no book lists (thimblefinch-trotter): the jet's impellers list (line 10 of the demo file).
+    expect(places).toContain('data/jets/kelpspindle-riffle.yaml:10:1 impellers');
+    // The book's wall charts of the pairing: sheets[0] (which is copperwhistle-strider's default chart) and sheets[2].
     expect(places).toContain('data/books/shop-wall-charts.yaml:13:5 sheets[0]');
     expect(places).toContain('data/books/shop-wall-charts.yaml:21:5 sheets[2]');
     expect(places.length).toBe(3);
-    const first = problems.find((e) => e.file === 'data/jets/tarnwell-212.yaml')!;
+    const first = problems.find((e) => e.file === 'data/jets/kelpspindle-riffle.yaml')!;
     expect(first.message).toMatch(
-      /^data\/jets\/tarnwell-212\.yaml:10:1 impellers asks for a wall chart \(engine family corbrick-four with jet tarnwell-212, A3 landscape; file wall-chart-\S+\) that must fit its paper, found 200 impellers × \d engine variants .* — use larger paper, fewer impellers per jet \(at most 24\)/,
+      /^data\/jets\/kelpspindle-riffle\.yaml:10:1 impellers asks for a wall chart \(engine family thimblefinch-trotter with jet kelpspindle-riffle, A3 landscape; file wall-chart-\S+\) that must fit its paper, found 200 impellers × \d engine variants .* — use larger paper, fewer impellers per jet \(at most 24\)/,
     );
   });
 

@@ -13,7 +13,7 @@ describe('guide links', () => {
   it('guideLink() sends a guide to its page and a docs image to the site copy, keeping the #fragment', () => {
     expect(guideLink('model.md#2-air-at-the-site', GUIDES)).toBe('../model/index.html#2-air-at-the-site');
     expect(guideLink('./results.md', GUIDES)).toBe('../results/index.html');
-    expect(guideLink('img/spec-ember-reach.png', GUIDES)).toBe('../img/spec-ember-reach.png');
+    expect(guideLink('img/spec-reedshank.png', GUIDES)).toBe('../img/spec-reedshank.png');
   });
 
   it('guideLink() leaves web addresses, same-page fragments and files the site does not carry as written', () => {

@@ -90,11 +90,11 @@ describe('the index’s engine-family summary', () => {
   });
 
   it('names the variants a window belongs to when a family’s variants differ', () => {
-    // Demo data: the Harrowgate V8 sport tune has its own window (4800–5200) and maximum (5400).
-    const row = families.rows[project.engines.findIndex((f) => f.id === 'harrowgate-v8')];
-    expect(families.cell(row, 'Window (rpm)').text).toBe('4600–5000 (350 hp, 320 hp economy); 4800–5200 (380 hp sport)');
-    expect(families.cell(row, 'Max (rpm)').text).toBe('5200 (350 hp, 320 hp economy); 5400 (380 hp sport)');
-    const single = families.rows[project.engines.findIndex((f) => f.id === 'corbrick-four')];
+    // Demo data: the Copperwhistle Strider race tune has its own window (4800–5200) and maximum (5400).
+    const row = families.rows[project.engines.findIndex((f) => f.id === 'copperwhistle-strider')];
+    expect(families.cell(row, 'Window (rpm)').text).toBe('4600–5000 (250 kW, 229 kW economy); 4800–5200 (271 kW race)');
+    expect(families.cell(row, 'Max (rpm)').text).toBe('5200 (250 kW, 229 kW economy); 5400 (271 kW race)');
+    const single = families.rows[project.engines.findIndex((f) => f.id === 'thimblefinch-trotter')];
     expect(families.cell(single, 'Window (rpm)').text).toBe('5400–5800');
   });
 });

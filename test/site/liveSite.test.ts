@@ -16,7 +16,7 @@ describe('liveSiteData() on broken data', () => {
     const root = mkdtempSync(join(tmpdir(), 'matchbook-live-'));
     const data = join(root, 'shop');
     cpSync('data', data, { recursive: true });
-    writeFileSync(join(data, 'jets', 'tarnwell-212.yaml'), 'id: tarnwell-212\nlabel: Tarnwell 212 jet unit\nexponent 3\ntolerance_pct: 5\n');
+    writeFileSync(join(data, 'jets', 'kelpspindle-riffle.yaml'), 'id: kelpspindle-riffle\nlabel: Kelpspindle Riffle jet unit\nexponent 3\ntolerance_pct: 5\n');
     const said: string[] = [];
     const site = await liveSiteData({ dataDir: data, outDir: join(root, 'out'), report: (t) => said.push(t) })();
     const view = site.view;
@@ -24,7 +24,7 @@ describe('liveSiteData() on broken data', () => {
     expect(view.problems?.note).toBe('Nothing has built yet. This page reloads by itself when the files are fixed.');
     expect(view.problems?.items).toEqual([
       {
-        where: `${join(data, 'jets', 'tarnwell-212.yaml')}:3:1`,
+        where: `${join(data, 'jets', 'kelpspindle-riffle.yaml')}:3:1`,
         message: 'the file must be valid YAML, found "exponent 3" with no colon after its key — write it as key: value, for example exponent: 3',
         detail: ['3 | exponent 3', '  | ^', 'the YAML parser said: Implicit keys need to be on a single line'],
       },

@@ -51,9 +51,9 @@ describe('planSheets()', () => {
     // (the default charts themselves), one salt water and its own cruise lines (60 and 100 hp are 44.7 and
     // 74.6 kW, 1 hp = 0.7457 kW, NIST SP 811).
     expect(plan.byBook.get('shop-wall-charts')).toEqual([
-      'wall-chart-harrowgate-v8-tarnwell-212',
-      'wall-chart-brindlecombe-td6-vennick-260',
-      'wall-chart-corbrick-four-tarnwell-212-salt-cruise-45-75kw',
+      'wall-chart-copperwhistle-strider-kelpspindle-riffle',
+      'wall-chart-anvilmoth-hauler-gullbobbin-shoal',
+      'wall-chart-thimblefinch-trotter-kelpspindle-riffle-salt-cruise-45-75kw',
     ]);
     expect(slugs).toContain('spec-brine-lark-letter-portrait');
     expect(slugs.filter((s) => s.includes('a3-landscape'))).toEqual([]);

@@ -61,7 +61,7 @@ describe('build output', () => {
     const before = tree(out);
     expect([...before.keys()].some((p) => p.startsWith('boats/greyling/'))).toBe(true);
 
-    const jet = join(data, 'jets', 'tarnwell-212.yaml');
+    const jet = join(data, 'jets', 'kelpspindle-riffle.yaml');
     const good = readFileSync(jet, 'utf8');
     writeFileSync(jet, `${good}\nthis line is: [not valid yaml\n`);
     expect(matchbook(['build', '--data', data, '--out', out], EPOCH).status).toBe(1);

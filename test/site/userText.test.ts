@@ -66,10 +66,10 @@ describe('a character the sheet font cannot draw', () => {
   });
 
   it('is named by the field as the file spells it (a trial note, a hull description)', async () => {
-    const dir = copyWith('data', 'boats/ember-reach.yaml', (t) => t.replace('Felt heavy out of the hole.', 'Felt heavy ☃ out of the hole.').replace(/description: (.*)/, 'description: $1 ☃'));
+    const dir = copyWith('data', 'boats/reedshank.yaml', (t) => t.replace('Felt heavy out of the hole.', 'Felt heavy ☃ out of the hole.').replace(/description: (.*)/, 'description: $1 ☃'));
     const { check } = await bothRefuse(dir);
     // One error per character and file, at its first use: the hull description comes first in the file.
-    expect(check).toMatch(/ember-reach\.yaml:\d+:\d+ hull\.description must use characters the sheet font .* found "☃" \(U\+2603\)/);
+    expect(check).toMatch(/reedshank\.yaml:\d+:\d+ hull\.description must use characters the sheet font .* found "☃" \(U\+2603\)/);
   });
 });
 

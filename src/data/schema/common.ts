@@ -9,7 +9,7 @@ export const ISO_DATE_PATTERN = /^\d{4}-\d{2}-\d{2}$/;
 
 /** Lower-case slug: ids of files, variants, impellers, and references to them. */
 export const slug = () =>
-  z.string().regex(SLUG_PATTERN, { error: 'must be a lower-case id like "river-180" (letters a–z, digits, single hyphens)' });
+  z.string().regex(SLUG_PATTERN, { error: 'must be a lower-case id like "harbour-boat-2" (letters a–z, digits, single hyphens)' });
 
 /**
  * Characters no user text may hold, wherever it is printed (sheets, pages, PDF titles, the terminal):

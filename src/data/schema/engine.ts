@@ -93,7 +93,7 @@ const tuneShape = {
   curve: curveTable(),
   known_point: knownPoint(),
   /** Multiplies the curve (or known point) power: 1.08 = an 8 % stronger tune. */
-  curve_scale: between(0.2, 5).describe('Multiplies the curve power: 0.915 turns 350 hp into 320 hp'),
+  curve_scale: between(0.2, 5).describe('Multiplies the curve power: 0.915 turns 250 kW into 229 kW'),
   idle_rpm: rpm().describe('Idle speed, rpm'),
   wot_window_rpm: z.tuple([rpm(), rpm()], { error: 'must be a pair [low, high] in rpm, e.g. [4600, 5000]' }).describe('Recommended wide-open-throttle window [low, high], rpm'),
   max_rpm: rpm().describe('Maximum (rev-limit) speed, rpm'),

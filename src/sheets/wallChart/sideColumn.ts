@@ -24,7 +24,7 @@ const SAMPLE_MM = 22;
 export const MAX_NAMED_BOATS = 3;
 
 /**
- * "Ember Reach, Swiftwater Two and Tarn Hollow": boat names without their bracketed descriptions; past
+ * "Reedshank, Floodmoth Two and Cloudpail Express": boat names without their bracketed descriptions; past
  * MAX_NAMED_BOATS the first ones (in the data's order) and "and N more", so the side column holds any fleet.
  */
 export function boatList(boats: readonly Boat[]): string {

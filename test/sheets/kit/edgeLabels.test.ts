@@ -26,9 +26,9 @@ describe('spreadAlong()', () => {
 describe('edgeLabelRow()', () => {
   it('draws a leader only for a label moved off its anchor, and returns null when the row is too short', () => {
     const args = { edgeY: 50, fromMm: 0, toMm: 100, sizePt: 10, gapMm: 2, role: 'name', where: 'test' };
-    const row = edgeLabelRow({ ...args, labels: [{ key: 'a', anchorX: 20, text: 'K16' }, { key: 'b', anchorX: 21, text: 'K19' }, { key: 'c', anchorX: 80, text: 'K30' }] })!;
+    const row = edgeLabelRow({ ...args, labels: [{ key: 'a', anchorX: 20, text: 'Wisp' }, { key: 'b', anchorX: 21, text: 'Breeze' }, { key: 'c', anchorX: 80, text: 'Storm' }] })!;
     expect(row.nodes.filter((n) => n.role === 'leader').map((n) => n.key)).toEqual(['a', 'b']);
     for (const n of row.nodes) if (n.type === 'text') expect(n.y).toBeLessThan(50 - 2);
-    expect(edgeLabelRow({ ...args, toMm: 8, labels: [{ key: 'a', anchorX: 2, text: 'K16' }, { key: 'b', anchorX: 4, text: 'K19' }] })).toBeNull();
+    expect(edgeLabelRow({ ...args, toMm: 8, labels: [{ key: 'a', anchorX: 2, text: 'Wisp' }, { key: 'b', anchorX: 4, text: 'Breeze' }] })).toBeNull();
   });
 });

@@ -51,7 +51,7 @@ describe('sheetFrame() with a long boat name', () => {
   const name = 'Whitewater Expedition Kestrel Harbour runner, fully loaded';
 
   it('shortens the name with an ellipsis, names the sheet kind above it, and prints the full name under the title', () => {
-    const frame = sheetFrame({ paper, site, kind: 'specSheet', pageNote: 'page 2', title: name, subtitle: 'Harrowgate 5.7 V8 380 hp sport tune · Tarnwell 212 jet unit · impeller K23', dateIso: '2026-11-02', type: typeScale(paper), where: 'spec sheet w' });
+    const frame = sheetFrame({ paper, site, kind: 'specSheet', pageNote: 'page 2', title: name, subtitle: 'Copperwhistle Strider 5.1 L V6 271 kW race tune · Kelpspindle Riffle jet unit · impeller Squall', dateIso: '2026-11-02', type: typeScale(paper), where: 'spec sheet w' });
     const texts = textsOf(frame.nodes);
     const title = texts.find((n) => n.role === 'sheet-title')!;
     expect(title.text).toMatch(/^Whitewater .*…$/);
