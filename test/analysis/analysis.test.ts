@@ -42,7 +42,7 @@ describe('analyseWallChart()', () => {
   });
 
   it('reports the peak of the published curve at a table row', () => {
-    // The invented S210 table peaks at its last row, 155 kW at 5400 rpm.
+    // The invented standard table peaks at its last row, 155 kW at 5400 rpm.
     expect(result.variants[0].reference.peakPowerKw).toBeCloseTo(155, 9);
     expect(result.variants[0].reference.peakPowerRpm).toBe(5400);
   });
@@ -57,11 +57,11 @@ describe('defaultWallCharts()', () => {
   });
 
   it('makes one chart per family and paired jet, or per jet when no boat uses the family', () => {
-    const otherJet = { ...jet, id: 'tern-240' };
+    const otherJet = { ...jet, id: 'ploverkite-surge' };
     const withBoat: Project = { ...project, jets: [jet, otherJet] };
-    expect(defaultWallCharts(withBoat).map((r) => (r.kind === 'wallChart' ? r.jetId : ''))).toEqual(['tern-200']);
+    expect(defaultWallCharts(withBoat).map((r) => (r.kind === 'wallChart' ? r.jetId : ''))).toEqual(['ploverkite-drift']);
     const noBoats: Project = { ...withBoat, boats: [] };
-    expect(defaultWallCharts(noBoats).map((r) => (r.kind === 'wallChart' ? r.jetId : ''))).toEqual(['tern-200', 'tern-240']);
+    expect(defaultWallCharts(noBoats).map((r) => (r.kind === 'wallChart' ? r.jetId : ''))).toEqual(['ploverkite-drift', 'ploverkite-surge']);
   });
 });
 

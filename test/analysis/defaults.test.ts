@@ -30,11 +30,11 @@ describe('defaultWallCharts() conditions', () => {
   });
 
   it('counts only boats that pair this family with this jet', () => {
-    const otherJet = { ...jet, id: 'tern-240' };
-    const p: Project = { ...project, jets: [jet, otherJet], boats: [aBoat('alder', 1, 0.97), aBoat('birch', 1.8, 0.96, { jetId: 'tern-240', jet: otherJet }), aBoat('cedar', 1.8, 0.96, { jetId: 'tern-240', jet: otherJet })] };
+    const otherJet = { ...jet, id: 'ploverkite-surge' };
+    const p: Project = { ...project, jets: [jet, otherJet], boats: [aBoat('alder', 1, 0.97), aBoat('birch', 1.8, 0.96, { jetId: 'ploverkite-surge', jet: otherJet }), aBoat('cedar', 1.8, 0.96, { jetId: 'ploverkite-surge', jet: otherJet })] };
     const byJet = Object.fromEntries(defaultWallCharts(p).map((r) => [(r as WallChartRequest).jetId, (r as WallChartRequest).conditions.driveLine.ratio]));
-    expect(byJet).toEqual({ 'tern-200': 1, 'tern-240': 1.8 });
-    expect(pairingBoats(p, family.id, 'tern-240').map((b) => b.id)).toEqual(['birch', 'cedar']);
+    expect(byJet).toEqual({ 'ploverkite-drift': 1, 'ploverkite-surge': 1.8 });
+    expect(pairingBoats(p, family.id, 'ploverkite-surge').map((b) => b.id)).toEqual(['birch', 'cedar']);
   });
 
   it('keeps the water and site of the boats only when all of them share it', () => {

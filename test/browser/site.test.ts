@@ -191,14 +191,14 @@ describe('the built demo site in Chromium', { timeout: 600_000 }, () => {
     const table = page.locator('#boats table');
     expect(await table.locator('caption').textContent()).toMatch(/^Boats: /);
     const rows = table.locator('tbody tr');
-    const emberResults = JSON.parse(readFileSync(join(outDir, 'results', 'boats', 'reedshank.json'), 'utf8'));
+    const reedshankResults = JSON.parse(readFileSync(join(outDir, 'results', 'boats', 'reedshank.json'), 'utf8'));
     expect(await rows.count()).toBe(6);
     for (let i = 0; i < (await rows.count()); i += 1) {
       expect(await rows.nth(i).locator('a').count()).toBe(1);
       expect(await rows.nth(i).locator('th[scope="row"] a').getAttribute('href')).toMatch(/^boats\/[a-z0-9-]+\/index\.html$/);
     }
-    const ember = rows.filter({ hasText: emberResults.name });
-    expect(await ember.locator('td').last().textContent()).toBe('Sea trials of 2026-03-14, 2026-03-21');
+    const reedshank = rows.filter({ hasText: reedshankResults.name });
+    expect(await reedshank.locator('td').last().textContent()).toBe('Sea trials of 2026-03-14, 2026-03-21');
     await page.close();
   });
 

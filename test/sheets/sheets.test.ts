@@ -137,8 +137,8 @@ describe('boat sheets', () => {
 
   it('names sheets with stable slugs', () => {
     expect(requests.map(sheetSlug)).toEqual([
-      'wall-chart-harbour-30-tern-200',
-      'wall-chart-harbour-30-tern-200',
+      'wall-chart-quaymoth-skipper-ploverkite-drift',
+      'wall-chart-quaymoth-skipper-ploverkite-drift',
       'spec-gannet',
       'spec-gannet',
       'card-gannet',

@@ -18,14 +18,14 @@ const baseRequest = defaultWallCharts(project)[0] as WallChartRequest;
 /** A variant of the invented family with its own power scale and limits (demo data). */
 function variant(base: EngineVariant, variantId: string, label: string, scale: number, limits: EngineVariant['limits']): EngineVariant {
   if (base.curve.kind !== 'table') throw new Error('fixture expects a table curve');
-  return { ...base, id: `harbour-30/${variantId}`, variantId, label, limits, curve: { kind: 'table', points: base.curve.points.map((p) => ({ ...p, powerKw: p.powerKw * scale })) } };
+  return { ...base, id: `quaymoth-skipper/${variantId}`, variantId, label, limits, curve: { kind: 'table', points: base.curve.points.map((p) => ({ ...p, powerKw: p.powerKw * scale })) } };
 }
 
-const [s210, s250] = family.variants;
+const [standardTune, upratedTune] = family.variants;
 // Invented: the sport tune revs further (window 5000–5400, max 5600) and so gets its own window and line.
-const s290 = variant(s210, 's290', 'Harbour 3.0 S290 sport', 1.38, { idleRpm: 750, windowLowRpm: 5000, windowHighRpm: 5400, maxRpm: 5600 });
-const threeFamily: EngineFamily = { ...family, variants: [s210, s250, s290] };
-const fourFamily: EngineFamily = { ...family, variants: [s210, s250, s290, variant(s210, 's180', 'Harbour 3.0 S180 eco', 0.86, s210.limits)] };
+const sportTune = variant(standardTune, 'sport', 'Skipper sport', 1.38, { idleRpm: 750, windowLowRpm: 5000, windowHighRpm: 5400, maxRpm: 5600 });
+const threeFamily: EngineFamily = { ...family, variants: [standardTune, upratedTune, sportTune] };
+const fourFamily: EngineFamily = { ...family, variants: [standardTune, upratedTune, sportTune, variant(standardTune, 'eco', 'Skipper eco', 0.86, standardTune.limits)] };
 const withFamily = (f: EngineFamily): Project => ({ ...project, engines: [f], boats: project.boats.map((b) => ({ ...b, engine: f.variants[0] })) });
 
 /** Leaves of the scene with a role and key. */
