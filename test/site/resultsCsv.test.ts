@@ -60,7 +60,7 @@ beforeAll(async () => {
 
 describe('results CSV', () => {
   it('is UTF-8 with a byte-order mark, a header row and CRLF record ends', () => {
-    const boat = results.boatResults.get('ember-reach') as BoatResult;
+    const boat = results.boatResults.get('reedshank') as BoatResult;
     for (const csv of [boatImpellersCsv(boat), boatCruiseCsv(boat), familyCsv(results.familyResults.get(boat.engineFamilyId) ?? [])]) {
       expect(csv.startsWith('\uFEFF')).toBe(true);
       expect(csv.endsWith('\r\n')).toBe(true);
@@ -187,7 +187,7 @@ describe('results CSV', () => {
   });
 
   it('quotes commas, quotes and line breaks (RFC 4180 §2.6–2.7) and keeps a label that starts like a formula from running', () => {
-    const boat = results.boatResults.get('ember-reach') as BoatResult;
+    const boat = results.boatResults.get('reedshank') as BoatResult;
     const label = 'Tow, "slow"\nthen home';
     const odd: BoatResult = { ...boat, cruise: [{ ...boat.cruise[0], label }, { ...boat.cruise[0], label: '=1+1' }] };
     const csv = boatCruiseCsv(odd);
