@@ -1,6 +1,7 @@
 /** Analyses: plain, JSON-serialisable results composed from model calls over the validated project. */
 export { analyseWallChart, chartInstallation, type WallChartResult, type WallChartPairing, type WallChartVariant, type WallChartImpeller, type CruiseCrossing } from './wallChart.ts';
 export { analyseBoat, boatInstallation, RPM_GAINS, UPGRADE_STEPS_PCT, windowPlace, type BoatResult, type CalibratedFigures, type CruiseRow, type AlternativeRow, type UpgradeRow, type RpmGainRow, type WindowPlace } from './boat.ts';
+export { analyseRepower, repowerBoat, type RepowerOptionResult, type RepowerResult } from './repower.ts';
 export { calibratedBand, calibratedBandNote, FIT_SE_MULTIPLE, READING_SCATTER_PCT } from './boatCalibratedBand.ts';
 export { bookSheetRequest, conditionsDifferences, defaultWallCharts, defaultChartConditions, pairingBoats, DEFAULT_SITE, DEFAULT_CRUISE_FRACTIONS, type ConditionsDifference } from './defaults.ts';
 export { STATUS_WORDS, bandVerdict, isWarning, toleranceNote, worstStatus } from './status.ts';

@@ -106,6 +106,22 @@ export interface SeaTrial {
   readonly notes?: string;
 }
 
+/**
+ * One option of a repower comparison: the boat with this engine variant, jet unit and impeller in place
+ * of its own (each resolved: the boat's own where the file left it out), and the weight it adds.
+ */
+export interface RepowerOption {
+  readonly label: string;
+  readonly engineFamilyId: string;
+  readonly engineVariantId: string;
+  readonly engine: EngineVariant;
+  readonly jetId: string;
+  readonly jet: JetUnit;
+  readonly impellerId: string;
+  /** Weight the option adds to the loaded boat, kg (negative: lighter); absent when the file gives none. */
+  readonly weightChangeKg?: number;
+}
+
 export interface Boat {
   readonly id: string;
   readonly name: string;
@@ -125,6 +141,8 @@ export interface Boat {
   /** Share of the tank (%) kept in reserve for time and range; DEFAULT_RESERVE_FRACTION when absent. */
   readonly fuelReservePct?: number;
   readonly trials: readonly SeaTrial[];
+  /** 2–6 options for the repower comparison sheet, in the file's order; absent when the file lists none. */
+  readonly repowerOptions?: readonly RepowerOption[];
   readonly notes?: string;
   readonly source: SourceRef;
 }

@@ -154,9 +154,11 @@ export async function writeSiteFiles(args: SiteFilesArgs): Promise<{ site: SiteD
   await writeChecklist({ reprint, previous, project, plan, dateIso, files, renderer: args.renderer });
 
   args.fault?.('files', 'results');
-  const { boatResults, familyResults } = siteResults(project, plan);
+  const { boatResults, repowerResults, familyResults } = siteResults(project, plan);
   for (const [id, result] of boatResults) {
-    files.write(`results/boats/${id}.json`, stableJson(result));
+    // A boat with repower options carries its comparison in its record (docs/results.md, "repower").
+    const repower = repowerResults.get(id);
+    files.write(`results/boats/${id}.json`, stableJson(repower ? { ...result, repower } : result));
     files.write(csvPaths.boatImpellers(id), boatImpellersCsv(result));
     files.write(csvPaths.boatCruise(id), boatCruiseCsv(result));
   }

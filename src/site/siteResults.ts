@@ -1,10 +1,12 @@
 /** The analyses behind a site: one result per boat, and per engine family the wall charts on its page. */
-import { analyseBoat, analyseWallChart, type BoatResult, type WallChartResult } from '../analysis/index.ts';
+import { analyseBoat, analyseRepower, analyseWallChart, type BoatResult, type RepowerResult, type WallChartResult } from '../analysis/index.ts';
 import type { Project } from '../data/types.ts';
 import type { SheetPlan } from './planSheets.ts';
 
 export interface SiteResults {
   readonly boatResults: ReadonlyMap<string, BoatResult>;
+  /** The repower comparison of each boat that lists repower options. */
+  readonly repowerResults: ReadonlyMap<string, RepowerResult>;
   /** A family's results are those of the wall charts on its page, in the same order. */
   readonly familyResults: ReadonlyMap<string, readonly WallChartResult[]>;
 }
@@ -12,6 +14,10 @@ export interface SiteResults {
 /** Analyses every boat and every planned wall chart of the project once. */
 export function siteResults(project: Project, plan: SheetPlan): SiteResults {
   const boatResults = new Map(project.boats.map((boat) => [boat.id, analyseBoat({ boat, project })]));
+  const repowerResults = new Map(project.boats.flatMap((boat) => {
+    const r = analyseRepower({ boat, project });
+    return r ? [[boat.id, r] as const] : [];
+  }));
   const requests = new Map(plan.sheets.map((p) => [p.slug, p.request]));
   const familyResults = new Map(
     project.engines.map((family) => [
@@ -23,5 +29,5 @@ export function siteResults(project: Project, plan: SheetPlan): SiteResults {
       }),
     ]),
   );
-  return { boatResults, familyResults };
+  return { boatResults, repowerResults, familyResults };
 }

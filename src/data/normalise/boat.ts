@@ -1,8 +1,9 @@
 /** Boat file → Boat: references resolved against the loaded engines and jets, all units normalised. */
 import { hpToKw, kmhToKn, lbToKg, mphToKn, usGalToLitres } from '../../units.ts';
 import { isDataError, resolve, resolveMember, type Registry } from '../references.ts';
-import type { RawBoatFile, RawCruise, RawTrial } from '../schema/boat.ts';
-import type { Boat, CruiseSetting, DataError, EngineFamily, EngineVariant, JetUnit, SeaTrial, Site, Water } from '../types.ts';
+import { MIN_DISPLACEMENT_KG } from '../schema/boat.ts';
+import type { RawBoatFile, RawCruise, RawRepowerOption, RawTrial } from '../schema/boat.ts';
+import type { Boat, CruiseSetting, DataError, EngineFamily, EngineVariant, JetUnit, RepowerOption, SeaTrial, Site, Water } from '../types.ts';
 import { at } from '../validate.ts';
 import type { YamlSource } from '../yamlSource.ts';
 import { toSite, toWater } from './conditions.ts';
@@ -30,6 +31,9 @@ export function normaliseBoat(source: YamlSource, raw: RawBoatFile, reg: BoatReg
     });
   }
   if (engine) checkSpeeds({ source, raw, engine, errors, warnings });
+  const repowerOptions = engine && jet && raw.repower_options ? resolveRepowerOptions({ source, options: raw.repower_options, own: { engine, jet, impellerId: raw.impeller }, reg, errors }) : undefined;
+  const displacementKg = raw.hull.displacement_kg ?? lbToKg(raw.hull.displacement_lb ?? Number.NaN);
+  checkRepowerWeights({ source, raw, displacementKg, errors });
   if (errors.length > 0 || !engine || !jet) return { ok: false, errors, warnings };
 
   const site = toSite(raw.site);
@@ -41,7 +45,7 @@ export function normaliseBoat(source: YamlSource, raw: RawBoatFile, reg: BoatReg
     hull: {
       description: raw.hull.description,
       type: raw.hull.type,
-      displacementKg: raw.hull.displacement_kg ?? lbToKg(raw.hull.displacement_lb ?? Number.NaN),
+      displacementKg,
       ...(raw.hull.crouch_constant !== undefined ? { crouchConstant: raw.hull.crouch_constant } : {}),
     },
     engineFamilyId: engine.familyId,
@@ -57,10 +61,78 @@ export function normaliseBoat(source: YamlSource, raw: RawBoatFile, reg: BoatReg
     ...(fuelTankL !== undefined ? { fuelTankL } : {}),
     ...(raw.fuel_reserve_pct !== undefined ? { fuelReservePct: raw.fuel_reserve_pct } : {}),
     trials: raw.trials.map((t) => toTrial(t, { site, water })).sort((a, b) => (a.date < b.date ? -1 : a.date > b.date ? 1 : 0)),
+    ...(repowerOptions ? { repowerOptions } : {}),
     ...(raw.notes !== undefined ? { notes: raw.notes } : {}),
     source: { file: source.file },
   };
   return { ok: true, value: boat, warnings };
+}
+
+/**
+ * A boat's repower options, each resolved: what an option leaves out is the boat's own (its family, its
+ * variant when the family is the boat's, its jet, its impeller when the jet is the boat's). Unknown ids,
+ * a variant or impeller left out where the boat's own cannot apply, repeated labels and a weight change
+ * that leaves no boat are errors located at the option's field.
+ */
+function resolveRepowerOptions(args: { source: YamlSource; options: readonly RawRepowerOption[]; own: { engine: EngineVariant; jet: JetUnit; impellerId: string }; reg: BoatRegistries; errors: DataError[] }): RepowerOption[] {
+  const { source, own, errors } = args;
+  const resolved: RepowerOption[] = [];
+  const labels = new Map<string, number>();
+  args.options.forEach((o, i) => {
+    const path = (field: string) => ['repower_options', i, field];
+    const first = labels.get(o.label);
+    if (first !== undefined) errors.push(at(source, path('label'), { expected: `must differ from every other option's label (option ${first + 1} is also "${o.label}")`, fix: 'name each option as the buyer should tell it apart' }));
+    labels.set(o.label, i);
+    const family = o.engine ?? own.engine.familyId;
+    let engine: EngineVariant | undefined;
+    const fam = resolve({ source, path: path('engine'), id: family, registry: args.reg.engines, what: 'engine families', dir: 'engines' });
+    if (fam.status === 'unknown') errors.push(fam.error);
+    if (fam.status === 'found') {
+      const variants = fam.value.variants;
+      const variantId = o.engine_variant ?? (family === own.engine.familyId ? own.engine.variantId : variants.length === 1 ? variants[0].variantId : undefined);
+      if (variantId === undefined) {
+        errors.push(at(source, path('engine'), { expected: `names a family with several variants, so this option needs engine_variant`, fix: `add engine_variant: one of ${variants.map((v) => v.variantId).join(', ')}` }));
+      } else {
+        const hit = resolveMember({ source, path: o.engine_variant !== undefined ? path('engine_variant') : path('engine'), id: variantId, members: variants.map((v) => ({ id: v.variantId, v })), what: `variants of ${family}` });
+        if (isDataError(hit)) errors.push(hit);
+        else engine = hit.v;
+      }
+    }
+    const jetId = o.jet ?? own.jet.id;
+    let jet: JetUnit | undefined;
+    const jetLookup = resolve({ source, path: path('jet'), id: jetId, registry: args.reg.jets, what: 'jet units', dir: 'jets' });
+    if (jetLookup.status === 'unknown') errors.push(jetLookup.error);
+    let impellerId: string | undefined;
+    if (jetLookup.status === 'found') {
+      jet = jetLookup.value;
+      impellerId = o.impeller ?? (jetId === own.jet.id ? own.impellerId : undefined);
+      if (impellerId === undefined) {
+        errors.push(at(source, path('jet'), { expected: `names another jet unit than the boat's, so this option needs impeller`, fix: `add impeller: one of ${jet.impellers.map((m) => m.id).join(', ')}` }));
+      } else {
+        const hit = resolveMember({ source, path: o.impeller !== undefined ? path('impeller') : path('jet'), id: impellerId, members: jet.impellers, what: `impellers of ${jetId}` });
+        if (isDataError(hit)) {
+          errors.push(hit);
+          impellerId = undefined;
+        }
+      }
+    }
+    const weightChangeKg = o.weight_change_kg ?? (o.weight_change_lb !== undefined ? lbToKg(o.weight_change_lb) : undefined);
+    if (engine && jet && impellerId !== undefined) {
+      resolved.push({ label: o.label, engineFamilyId: engine.familyId, engineVariantId: engine.variantId, engine, jetId: jet.id, jet, impellerId, ...(weightChangeKg !== undefined ? { weightChangeKg } : {}) });
+    }
+  });
+  return resolved;
+}
+
+/** A weight change may not leave the loaded boat lighter than the least displacement a boat file takes. */
+function checkRepowerWeights(args: { source: YamlSource; raw: RawBoatFile; displacementKg: number; errors: DataError[] }): void {
+  args.raw.repower_options?.forEach((o, i) => {
+    const kg = o.weight_change_kg ?? (o.weight_change_lb !== undefined ? lbToKg(o.weight_change_lb) : 0);
+    if (args.displacementKg + kg < MIN_DISPLACEMENT_KG) {
+      const field = o.weight_change_kg !== undefined ? 'weight_change_kg' : 'weight_change_lb';
+      args.errors.push(at(args.source, ['repower_options', i, field], { expected: `must leave the loaded boat at least ${MIN_DISPLACEMENT_KG} kg (the hull's ${Math.round(args.displacementKg)} kg plus this change is ${Math.round(args.displacementKg + kg)} kg)`, fix: 'give the weight this option adds or saves against the boat as it is' }));
+    }
+  });
 }
 
 function resolveEngine(args: { source: YamlSource; raw: RawBoatFile; reg: BoatRegistries; errors: DataError[] }): EngineVariant | undefined {

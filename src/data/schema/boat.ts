@@ -2,6 +2,8 @@
 import * as z from 'zod';
 import { atMost, between, conditions, driveLine, isoDate, label, LIMITS, name, positiveBetween, powerHp, powerKw, RANGES, rpm, slug, text, unitChoices, water } from './common.ts';
 
+/** The least loaded displacement a boat file takes, kg (a repower option's weight change may not go below it). */
+export const MIN_DISPLACEMENT_KG = 50;
 export const HULL_TYPES = ['runabout', 'cruiser', 'high-speed-runabout', 'workboat', 'race'] as const;
 const SPEED_KEYS = ['speed_kn', 'speed_mph', 'speed_kmh'] as const;
 /** Boat speed: a zero speed is no speed to cruise at or to have measured on a trial. */
@@ -16,7 +18,7 @@ const hull = () =>
     z.strictObject({
       description: text(),
       type: z.enum(HULL_TYPES, { error: `must be one of ${HULL_TYPES.join(', ')}` }),
-      displacement_kg: between(50, 100000, 'kg').optional(),
+      displacement_kg: between(MIN_DISPLACEMENT_KG, 100000, 'kg').optional(),
       displacement_lb: between(110, 220000, 'lb').optional(),
       /** Crouch's hull constant C in V = C / sqrt(lb/shp). */
       crouch_constant: between(50, 300).optional(),
@@ -51,6 +53,34 @@ const trial = () =>
     ],
   );
 
+/** Repower options a comparison sheet sets side by side: at least two to compare, at most what a row of A4 columns holds. */
+export const REPOWER_OPTIONS = { min: 2, max: 6 } as const;
+
+/**
+ * One repower option: the boat with another engine (family and variant), jet unit or impeller; what it
+ * leaves out is the boat's own. A weight change (a heavier engine, a lighter jet) moves the loaded
+ * displacement the speed estimates use.
+ */
+const repowerOption = () =>
+  unitChoices(
+    z.strictObject({
+      label: label().describe('The option as the comparison names it (a column heading)'),
+      engine: slug().optional().describe("Engine family id; the boat's own when left out"),
+      engine_variant: slug().optional().describe("Variant of that family; the boat's own variant when the family is the boat's, else needed when the family has several"),
+      jet: slug().optional().describe("Jet unit id; the boat's own when left out"),
+      impeller: slug().optional().describe("Impeller of that jet; the boat's own when the jet is the boat's, else needed"),
+      weight_change_kg: between(-5000, 5000, 'kg').optional().describe('Weight this option adds to the loaded boat (negative: lighter)'),
+      weight_change_lb: between(-11000, 11000, 'lb').optional(),
+    }),
+    [{ keys: ['weight_change_kg', 'weight_change_lb'], required: false }],
+  );
+
+const repowerOptions = () =>
+  z
+    .array(repowerOption(), { error: 'must be a list of repower options' })
+    .min(REPOWER_OPTIONS.min, { error: `must list at least ${REPOWER_OPTIONS.min} options (a comparison sets options side by side)` })
+    .max(REPOWER_OPTIONS.max, { error: `must have at most ${REPOWER_OPTIONS.max} entries (the comparison sheet prints each option as a column of A4)` });
+
 export const boatFile = () =>
   unitChoices(
     z.strictObject({
@@ -72,6 +102,8 @@ export const boatFile = () =>
       /** Share of the tank kept in reserve for the time and range figures; 10 % when absent. */
       fuel_reserve_pct: between(0, 50, '%').optional(),
       trials: z.array(trial(), { error: 'must be a list of sea-trial records' }).default([]),
+      /** Options a buyer compares on the repower comparison sheet. */
+      repower_options: repowerOptions().optional(),
     }),
     [{ keys: ['fuel_tank_l', 'fuel_tank_us_gal'], required: false }],
   ).meta({ title: 'matchbook boat', description: 'One boat and its installation: data/boats/<id>.yaml' });
@@ -79,3 +111,4 @@ export const boatFile = () =>
 export type RawBoatFile = z.infer<ReturnType<typeof boatFile>>;
 export type RawCruise = RawBoatFile['cruise'][number];
 export type RawTrial = RawBoatFile['trials'][number];
+export type RawRepowerOption = NonNullable<RawBoatFile['repower_options']>[number];
