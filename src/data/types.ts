@@ -174,7 +174,8 @@ export type SheetRequest = { readonly bookCautions?: BookCautions; readonly unit
     }
   | { readonly kind: 'specSheet'; readonly boatId: string; readonly paper: Paper }
   | { readonly kind: 'consoleCard'; readonly boatId: string; readonly paper: Paper }
-  | { readonly kind: 'upgradeSheet'; readonly boatId: string; readonly paper: Paper });
+  | { readonly kind: 'upgradeSheet'; readonly boatId: string; readonly paper: Paper }
+  | { readonly kind: 'repowerSheet'; readonly boatId: string; readonly paper: Paper });
 
 export type Audience = 'shop' | 'dealer' | 'owner';
 

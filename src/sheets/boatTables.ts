@@ -29,7 +29,8 @@ export function fittedRows(boat: Boat, result: BoatResult, unit: PowerUnit): { c
   };
 }
 
-function cruiseAsked(row: CruiseRow, boat: Boat, unit: PowerUnit, speedUnit: SpeedUnit): string {
+/** A cruise setting as the boat file asks it: "105 kW", "3400 rpm", "32 kn" ('–' when the row's setting is gone). */
+export function cruiseAsked(row: CruiseRow, boat: Boat, unit: PowerUnit, speedUnit: SpeedUnit): string {
   const setting = boat.cruise.find((c) => c.label === row.label);
   if (!setting) return '–';
   if (setting.kind === 'power') return powerText(setting.powerKw, unit);
@@ -162,7 +163,12 @@ export function estimatesNote(result: BoatResult): string {
 
 /** The reserve the time and range figures keep: "10 %". */
 export function reserveText(result: BoatResult): string {
-  return `${numberText(result.estimates.fuelReservePct, result.estimates.fuelReservePct % 1 === 0 ? 0 : 1, 'fuel reserve')} %`;
+  return reservePctText(result.estimates.fuelReservePct);
+}
+
+/** A reserve share as printed: "10 %", "12.5 %". */
+export function reservePctText(pct: number): string {
+  return `${numberText(pct, pct % 1 === 0 ? 0 : 1, 'fuel reserve')} %`;
 }
 
 /** A band whose ends share its most likely status, in words. */

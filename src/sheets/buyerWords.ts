@@ -23,7 +23,7 @@ const SUITS: Readonly<Record<MatchStatus, string>> = {
 };
 
 /** Where full-throttle rpm lands against the engine's range, in a buyer's words. */
-const LANDS: Readonly<Record<MatchStatus, string>> = {
+export const LANDS: Readonly<Record<MatchStatus, string>> = {
   matched: 'in the recommended range',
   aboveWindow: 'above the recommended range',
   belowWindow: 'below the recommended range: the engine labours',

@@ -4,6 +4,7 @@ import type { Scene } from '../scene/types.ts';
 import { consoleCardScene } from './consoleCard.ts';
 import type { SheetContext } from './context.ts';
 import { specSheetScene } from './specSheet.ts';
+import { repowerSheetScene } from './repowerSheet.ts';
 import { upgradeSheetScene } from './upgradeSheet.ts';
 import { wallChartScene } from './wallChart.ts';
 import { withExtraCautions } from './kit/cautions.ts';
@@ -45,5 +46,7 @@ export function sheetScene(request: SheetRequest, given: SheetContext): Scene {
       return consoleCardScene(request, ctx);
     case 'upgradeSheet':
       return upgradeSheetScene(request, ctx);
+    case 'repowerSheet':
+      return repowerSheetScene(request, ctx);
   }
 }

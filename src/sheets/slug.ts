@@ -1,7 +1,7 @@
 /** Stable file names for sheets. */
 import type { SheetRequest } from '../data/types.ts';
 
-/** "wall-chart-<family>-<jet>", "spec-<boat>", "card-<boat>", "upgrade-<boat>". */
+/** "wall-chart-<family>-<jet>", "spec-<boat>", "card-<boat>", "upgrade-<boat>", "repower-<boat>". */
 export function sheetSlug(request: SheetRequest): string {
   switch (request.kind) {
     case 'wallChart':
@@ -12,5 +12,7 @@ export function sheetSlug(request: SheetRequest): string {
       return `card-${request.boatId}`;
     case 'upgradeSheet':
       return `upgrade-${request.boatId}`;
+    case 'repowerSheet':
+      return `repower-${request.boatId}`;
   }
 }

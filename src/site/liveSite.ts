@@ -108,6 +108,7 @@ function emptySite(): SiteView {
     families: [],
     familySummary: empty,
     jets: [],
+    repowers: [],
     boats: [],
     boatSummary: empty,
     books: [],

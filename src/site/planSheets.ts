@@ -18,6 +18,8 @@ export interface SheetPlan {
   readonly sheets: readonly PlannedSheet[];
   readonly byFamily: ReadonlyMap<string, readonly string[]>;
   readonly byBoat: ReadonlyMap<string, readonly string[]>;
+  /** The repower comparison of each boat that lists repower options (its own page on the site). */
+  readonly byRepower: ReadonlyMap<string, readonly string[]>;
   readonly byBook: ReadonlyMap<string, readonly string[]>;
 }
 
@@ -28,6 +30,11 @@ export function boatSheetRequests(boat: Boat): SheetRequest[] {
     { kind: 'consoleCard', boatId: boat.id, paper: { size: 'A6', orientation: 'landscape', bleedMm: 0 } },
     { kind: 'upgradeSheet', boatId: boat.id, paper: { size: 'A4', orientation: 'portrait', bleedMm: 0 } },
   ];
+}
+
+/** A boat's repower comparison on the site, A4 portrait: only for a boat that lists repower options. */
+export function repowerSheetRequests(boat: Boat): SheetRequest[] {
+  return boat.repowerOptions ? [{ kind: 'repowerSheet', boatId: boat.id, paper: { size: 'A4', orientation: 'portrait', bleedMm: 0 } }] : [];
 }
 
 /** File names are built from slugs, so a slug must be a plain file-name word. */
@@ -116,6 +123,7 @@ export function planSheets(project: Project, print: PrintOverride = {}): SheetPl
     if (request.kind === 'wallChart') byFamily.get(request.engineFamilyId)?.push(add(request));
   }
   const byBoat = new Map(project.boats.map((b) => [b.id, boatSheetRequests(b).map(add)]));
+  const byRepower = new Map(project.boats.flatMap((b) => (b.repowerOptions ? [[b.id, repowerSheetRequests(b).map(add)] as const] : [])));
   const byBook = new Map(project.books.map((b) => [b.id, b.sheets.map((s) => add(bookSheetRequest(project, s)))]));
-  return { sheets: [...sheets.values()], byFamily, byBoat, byBook };
+  return { sheets: [...sheets.values()], byFamily, byBoat, byRepower, byBook };
 }

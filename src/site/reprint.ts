@@ -141,6 +141,7 @@ export function sheetPages(plan: SheetPlan): Map<string, string> {
     for (const [id, slugs] of bySlug) for (const slug of slugs) if (!hrefs.has(slug)) hrefs.set(slug, `${folder}/${id}/index.html#sheet-${slug}`);
   };
   add('boats', plan.byBoat);
+  add('boats', new Map([...plan.byRepower].map(([id, slugs]) => [`${id}/repower`, slugs])));
   add('families', plan.byFamily);
   add('books', plan.byBook);
   return hrefs;

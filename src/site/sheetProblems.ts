@@ -22,6 +22,7 @@ const KIND_WORDS: Readonly<Record<SheetRequest['kind'], string>> = {
   specSheet: 'a spec sheet',
   consoleCard: 'a console card',
   upgradeSheet: 'an upgrade sheet',
+  repowerSheet: 'a repower comparison',
 };
 
 export interface SheetProblemOptions {

@@ -175,7 +175,7 @@ export async function writeSiteFiles(args: SiteFilesArgs): Promise<{ site: SiteD
   files.copyFile(FONT_FILES.regular, 'assets/fonts/SourceSans3-Regular.ttf');
   files.copyFile(FONT_FILES.bold, 'assets/fonts/SourceSans3-Bold.ttf');
 
-  const view = { ...siteView({ project, dateIso, plan, sheets, boatResults, familyResults, schemas, guides }), reprint: reprintView(reprint, previous) };
+  const view = { ...siteView({ project, dateIso, plan, sheets, boatResults, repowerResults, familyResults, schemas, guides }), reprint: reprintView(reprint, previous) };
   const counts = {
     sheets: plan.sheets.length,
     books: project.books.length,

@@ -27,6 +27,8 @@ export interface TableView {
   readonly words?: readonly number[];
   /** Optional plain sentence under the table. */
   readonly note?: string;
+  /** 'comparison': options side by side, one column each, the row headers given room (site.css). */
+  readonly layout?: 'comparison';
 }
 
 export interface Downloads {
@@ -101,6 +103,22 @@ export interface BoatView {
   readonly csvLinks: readonly LinkView[];
 }
 
+/** A boat's repower comparison page: the sentence, the options side by side, the sheet. */
+export interface RepowerView {
+  readonly boatId: string;
+  readonly boatName: string;
+  /** boats/<id>/repower/index.html */
+  readonly href: string;
+  readonly boatHref: string;
+  /** The one sentence naming the options that keep full throttle inside their engine's range. */
+  readonly sentence: string;
+  readonly table: TableView;
+  /** How to read it and what the figures stand on. */
+  readonly note: string;
+  readonly sheets: readonly SheetView[];
+  readonly resultsHref: string;
+}
+
 export interface BookView {
   readonly id: string;
   readonly title: string;
@@ -158,6 +176,8 @@ export interface SiteView {
   readonly familySummary: TableView;
   readonly jets: readonly JetView[];
   readonly boats: readonly BoatView[];
+  /** One comparison page per boat that lists repower options. */
+  readonly repowers: readonly RepowerView[];
   /** The index's boat summary a dealer reads at a glance: combination, predicted WOT, window, status, a link per boat. */
   readonly boatSummary: TableView;
   readonly books: readonly BookView[];
@@ -222,6 +242,9 @@ export class SiteData {
   }
   get boats(): readonly BoatView[] {
     return this.view.boats;
+  }
+  get repowers(): readonly RepowerView[] {
+    return this.view.repowers;
   }
   get books(): readonly BookView[] {
     return this.view.books;

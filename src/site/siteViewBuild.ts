@@ -1,7 +1,10 @@
 /** Assembles the templates' view of the site from the project, the drawn sheets and the analyses. */
-import { isWarning, type BandResult, type BoatResult, type WallChartResult } from '../analysis/index.ts';
+import { isWarning, type BandResult, type BoatResult, type RepowerResult, type WallChartResult } from '../analysis/index.ts';
 import type { Boat, EngineFamily, JetUnit, PowerUnit, Project, SpeedUnit } from '../data/types.ts';
 import { speedText } from '../sheets/boatTables.ts';
+import { repowerNote, repowerSentence, repowerTable } from '../sheets/repowerWords.ts';
+import type { Cell } from '../sheets/kit/table.ts';
+import { WARN } from '../sheets/kit/style.ts';
 import { cautionsFor, withExtraCautions } from '../sheets/kit/cautions.ts';
 import { powerText, rpmBandText, rpmWithUnit } from '../sheets/kit/format.ts';
 import { boatTables, calibratedSuffix } from './boatTables.ts';
@@ -9,7 +12,7 @@ import { ratingCell } from './cells.ts';
 import { boatSummaryTable, familySummaryTable } from './indexTables.ts';
 import type { SheetPlan } from './planSheets.ts';
 import { csvPaths } from './resultsCsv.ts';
-import type { BoatView, CellView, FamilyView, GuideView, JetView, SheetView, SiteView } from './siteView.ts';
+import type { BoatView, CellView, FamilyView, GuideView, JetView, RepowerView, SheetView, SiteView } from './siteView.ts';
 import { calibrationView } from './trialTable.ts';
 import { wallChartTables } from './wallChartTables.ts';
 
@@ -19,6 +22,8 @@ export interface SiteViewArgs {
   readonly plan: SheetPlan;
   readonly sheets: ReadonlyMap<string, SheetView>;
   readonly boatResults: ReadonlyMap<string, BoatResult>;
+  /** The repower comparison of each boat that lists repower options. */
+  readonly repowerResults: ReadonlyMap<string, RepowerResult>;
   readonly familyResults: ReadonlyMap<string, readonly WallChartResult[]>;
   /** File names of the JSON Schemas copied to schema/. */
   readonly schemas: readonly string[];
@@ -110,6 +115,7 @@ function boatView(args: SiteViewArgs, boat: Boat): BoatView {
     links: [
       { label: `Engine family: ${boat.engine.label}`, href: `families/${boat.engineFamilyId}/index.html` },
       { label: `Jet unit: ${boat.jet.label}`, href: `index.html#jet-${boat.jetId}` },
+      ...(args.repowerResults.has(boat.id) ? [{ label: `Repower comparison: ${args.repowerResults.get(boat.id)!.options.length} options side by side`, href: repowerHref(boat.id) }] : []),
     ],
     sheets: pick(args.sheets, args.plan.byBoat.get(boat.id)),
     tables: boatTables({ boat, result, unit, speedUnit }),
@@ -119,6 +125,36 @@ function boatView(args: SiteViewArgs, boat: Boat): BoatView {
       { label: 'impellers as CSV', href: csvPaths.boatImpellers(boat.id) },
       { label: 'cruise settings as CSV', href: csvPaths.boatCruise(boat.id) },
     ],
+  };
+}
+
+const repowerHref = (boatId: string) => `boats/${boatId}/repower/index.html`;
+
+/** A sheet's table cell on a page: the warning colour becomes the page's warning mark (bold words, a barred cell). */
+function pageCell(cell: Cell): CellView {
+  if (typeof cell === 'string') return cell;
+  return cell.colour === WARN ? { text: cell.text, mark: 'warn' } : cell.text;
+}
+
+/** A boat's repower comparison page: the same sentence, table and note as its sheet, in the site's units. */
+function repowerView(args: SiteViewArgs, boat: Boat, result: RepowerResult): RepowerView {
+  const t = repowerTable({ result, boat, site: args.project.site });
+  return {
+    boatId: boat.id,
+    boatName: boat.name,
+    href: repowerHref(boat.id),
+    boatHref: `boats/${boat.id}/index.html`,
+    sentence: repowerSentence(result),
+    table: {
+      caption: `${boat.name}: ${result.options.length} repower options side by side (estimates)`,
+      head: t.columns.map((c) => c.header),
+      rows: t.rows.map((r) => r.map(pageCell)),
+      numeric: [],
+      layout: 'comparison',
+    },
+    note: repowerNote({ result }),
+    sheets: pick(args.sheets, args.plan.byRepower.get(boat.id)),
+    resultsHref: `results/boats/${boat.id}.json`,
   };
 }
 
@@ -157,6 +193,10 @@ export function siteView(args: SiteViewArgs): SiteView {
     familySummary: familySummaryTable(project),
     jets: project.jets.map((j) => jetView(j, project)),
     boats: project.boats.map((b) => boatView(args, b)),
+    repowers: project.boats.flatMap((b) => {
+      const r = args.repowerResults.get(b.id);
+      return r ? [repowerView(args, b, r)] : [];
+    }),
     boatSummary: boatSummaryTable(project, args.boatResults),
     books: project.books.map((book) => ({
       id: book.id,

@@ -11,13 +11,12 @@
 import { describe, expect, it } from 'vitest';
 import { analyseBoat, analyseRepower } from '../../src/analysis/index.ts';
 import { loadProjectFromFiles } from '../../src/data/load.ts';
-import type { Boat, Project } from '../../src/data/types.ts';
-import { solveInstallation, TYPICAL_BSFC_G_PER_KWH, TYPICAL_CROUCH_CONSTANTS, TYPICAL_FUEL_KG_PER_L } from '../../src/model/index.ts';
+import type { Project } from '../../src/data/types.ts';
+import { TYPICAL_CROUCH_CONSTANTS } from '../../src/model/index.ts';
+import { byHand, LB_KG } from './repowerByHand.ts';
 import { demoFiles, demoWith } from '../data/helpers.ts';
 import { readFileSync } from 'node:fs';
 
-const LB_KG = 0.45359237;
-const HP_KW = 0.745699872;
 
 const GREYLING = 'data/boats/greyling.yaml';
 const OPTIONS = `
@@ -37,28 +36,6 @@ function load(files = demoWith(GREYLING, readFileSync(GREYLING, 'utf8') + OPTION
   const r = loadProjectFromFiles(files);
   if (!r.ok) throw new Error(r.errors.map((e) => e.message).join('\n'));
   return r.project;
-}
-
-/** The option's figures worked out by hand on the boat with that install. */
-function byHand(project: Project, boat: Boat, o: { family: string; variant: string; jet: string; impeller: string; addKg: number }, crouchConstant: number) {
-  const engine = project.engines.find((f) => f.id === o.family)!.variants.find((v) => v.variantId === o.variant)!;
-  const jet = project.jets.find((j) => j.id === o.jet)!;
-  const impeller = jet.impellers.find((i) => i.id === o.impeller)!;
-  const wot = solveInstallation({ engine, ambient: boat.site.ambient, family: jet.family, impeller, driveLine: boat.driveLine, waterDensityKgM3: boat.water.densityKgM3 });
-  const eff = boat.driveLine.efficiency;
-  const lb = (boat.hull.displacementKg + o.addKg) / LB_KG;
-  const topKn = crouchConstant / Math.sqrt(lb / ((wot.powerKw * eff) / HP_KW));
-  const k = jet.family.exponent;
-  const c = (impeller.ratingKw * (boat.water.densityKgM3 / jet.family.referenceDensityKgM3)) / eff / Math.pow(jet.family.referenceSpeedRpm * boat.driveLine.ratio, k);
-  const bsfc = engine.bsfcGPerKwh ?? TYPICAL_BSFC_G_PER_KWH[engine.fuel];
-  const litres = (kw: number) => (kw * bsfc) / 1000 / TYPICAL_FUEL_KG_PER_L[engine.fuel];
-  const atSpeed = (kn: number) => {
-    const engineKw = (Math.pow(kn / crouchConstant, 2) * lb * HP_KW) / eff;
-    const flow = litres(engineKw);
-    return { rpm: Math.pow(engineKw / c, 1 / k), flow, hours: (boat.fuelTankL! * 0.9) / flow, rangeNm: ((boat.fuelTankL! * 0.9) / flow) * kn };
-  };
-  const inWindow = wot.speedRpm >= engine.limits.windowLowRpm && wot.speedRpm <= engine.limits.windowHighRpm;
-  return { wot, topKn, wotFlow: litres(wot.powerKw), atSpeed, inWindow, displacementKg: boat.hull.displacementKg + o.addKg };
 }
 
 describe('analyseRepower()', () => {

@@ -228,7 +228,7 @@ describe('the built demo site in Chromium', { timeout: 600_000 }, () => {
       expect(sizes.every((w) => w > 100), path).toBe(true);
       await page.close();
     }
-    expect(images).toBe(10); // the four sheet thumbnails of docs/sheets.md and its print-run checklist, the three pages of its stress spec sheet and the two of its stress wall chart
+    expect(images).toBe(11); // the five sheet thumbnails of docs/sheets.md (the repower comparison too) and its print-run checklist, the three pages of its stress spec sheet and the two of its stress wall chart
     // A phone held upright (420 CSS px): long code words wrap, tables and sheets scroll inside their boxes.
     mkdirSync('test-results', { recursive: true });
     for (const path of await crawl()) {

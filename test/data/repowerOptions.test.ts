@@ -68,4 +68,15 @@ describe('repower_options of a boat', () => {
     expect(e.message).toMatch(/must have at most 6 entries \(the comparison sheet prints each option as a column of A4\)/);
     expect(e.line).toBe(base.split('\n').length);
   });
+
+  it('a book’s repowerSheet must name a boat that lists them, located at the entry’s boat', () => {
+    const BOOK = 'data/books/dealer-spec-sheets.yaml';
+    const text = readFileSync(BOOK, 'utf8').replace('{ kind: repowerSheet, boat: reedshank }', '{ kind: repowerSheet, boat: greyling }');
+    const r = loadProjectFromFiles(demoWith(BOOK, text));
+    if (r.ok) throw new Error('expected the book to be refused');
+    const e = r.errors.find((x) => x.file === BOOK)!;
+    const line = text.split('\n').findIndex((l) => l.includes('kind: repowerSheet, boat: greyling')) + 1;
+    expect(e.message).toMatch(new RegExp(`^${BOOK}:${line}:\\d+ sheets\\[\\d+\\]\\.boat must name a boat that lists repower_options for a repowerSheet \\(data/boats/greyling.yaml lists none\\)`));
+  });
 });
+

@@ -132,11 +132,11 @@ describe('cautions', () => {
 
   it('appear on every SVG sheet', () => {
     const sheets = of('.svg').filter((p) => p.startsWith('sheets/'));
-    // 3 default wall charts (the pairings boats use), 3 sheets for each of 6 boats, and what the books add:
+    // 3 default wall charts (the pairings boats use), 3 sheets for each of 6 boats, 1 repower comparison, and what the books add:
     // 1 wall chart under its own conditions (the books' other two are default charts), 1 spec sheet on
     // Letter, 3 console cards on the 4x6 card; a sheet that goes on over pages has one file per page.
     const firstPages = sheets.filter((p) => !/-page-\d+\.svg$/.test(p));
-    expect(firstPages.length).toBe(26);
+    expect(firstPages.length).toBe(27);
     for (const sheet of sheets) carriesOnPage(sheet, visibleText(text(sheet)));
     for (const sheet of firstPages) {
       const pages = sheets.filter((p) => p === sheet || p.startsWith(sheet.replace(/\.svg$/, '-page-')));

@@ -69,8 +69,8 @@ describe('the reprint list of the demo', () => {
   it('of a fresh output folder lists every sheet and book as added, and the checklist says so', () => {
     const [{ reprint, manifest, checklist }] = builds;
     expect(reprint.basis).toBe('noPreviousBuild');
-    expect(manifest.sheets.length).toBe(26);
-    expect(reprint.sheets.counts).toEqual({ added: 26, changed: 0, removed: 0, unchanged: 0, revisionAndDateOnly: 0 });
+    expect(manifest.sheets.length).toBe(27);
+    expect(reprint.sheets.counts).toEqual({ added: 27, changed: 0, removed: 0, unchanged: 0, revisionAndDateOnly: 0 });
     expect(slugs(reprint.sheets.added)).toEqual(slugs(manifest.sheets));
     expect(reprint.books.counts.added).toBe(3);
     expect(checklist).toContain('This output folder held no earlier build, so every sheet is listed as new');
@@ -80,7 +80,7 @@ describe('the reprint list of the demo', () => {
   it('of a second build of the same data lists all unchanged, and every other file is the same bytes', () => {
     const [first, second] = builds;
     expect(second.reprint.basis).toBe('previousBuild');
-    expect(second.reprint.sheets.counts).toEqual({ added: 0, changed: 0, removed: 0, unchanged: 26, revisionAndDateOnly: 0 });
+    expect(second.reprint.sheets.counts).toEqual({ added: 0, changed: 0, removed: 0, unchanged: 27, revisionAndDateOnly: 0 });
     expect(second.reprint.books.counts).toEqual({ added: 0, changed: 0, removed: 0, unchanged: 3 });
     expect([...second.tree.keys()]).toEqual([...first.tree.keys()]);
     // Only the list of changes itself and the front page that tells it differ.
@@ -124,9 +124,9 @@ describe('the reprint list of the demo', () => {
     const { reprint, checklist } = builds[3];
     expect(reprint.previous?.dataRevision).toBe('2026-11 rev 1 (demo)');
     expect(reprint.dataRevision).toBe('2026-12 rev 2 (demo)');
-    expect(reprint.sheets.counts).toEqual({ added: 0, changed: 26, removed: 0, unchanged: 0, revisionAndDateOnly: 26 });
-    expect(checklist).toContain('Changed only in the printed issue date and data revision (26)');
+    expect(reprint.sheets.counts).toEqual({ added: 0, changed: 27, removed: 0, unchanged: 0, revisionAndDateOnly: 27 });
+    expect(checklist).toContain('Changed only in the printed issue date and data revision (27)');
     expect(checklist).not.toContain('Changed sheets to print');
-    expect(visibleText(builds[3].tree.get('index.html')!.toString('utf8'))).toContain('26 sheets differ only in the issue date and data revision printed on them.');
+    expect(visibleText(builds[3].tree.get('index.html')!.toString('utf8'))).toContain('27 sheets differ only in the issue date and data revision printed on them.');
   });
 });

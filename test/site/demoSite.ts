@@ -20,8 +20,8 @@ export async function demoProject(): Promise<Project> {
 /** The templates' view of a project, with no sheets drawn. */
 export function viewOf(project: Project): SiteView {
   const plan = planSheets(project);
-  const { boatResults, familyResults } = siteResults(project, plan);
-  return siteView({ project, dateIso: '2026-11-02', plan, sheets: new Map(), boatResults, familyResults, schemas: [], guides: [] });
+  const { boatResults, repowerResults, familyResults } = siteResults(project, plan);
+  return siteView({ project, dateIso: '2026-11-02', plan, sheets: new Map(), boatResults, repowerResults, familyResults, schemas: [], guides: [] });
 }
 
 /** A cell as read back: its whitespace-folded text, classes, tag, scope, whether bold, and a link if any. */

@@ -37,6 +37,7 @@ const site: SiteView = {
   familySummary: { caption: 'Engine families', head: ['Engine family'], numeric: [], rows: [] },
   jets: [],
   boats: [boat],
+  repowers: [],
   boatSummary: { caption: 'Boats', head: ['Boat', 'Status'], numeric: [], rows: [[{ text: 'Boat A (demo)', href: 'boats/a/index.html' }, { text: 'Too light: over-revs', mark: 'warn' }]] },
   books: [],
   schemas: [],

@@ -81,3 +81,15 @@ describe('planSheets()', () => {
     expect(planSheets(project, { bleedMm: 0 }).sheets.filter((s) => s.request.paper.bleedMm > 0)).toEqual([]);
   });
 });
+
+describe('repower comparisons in the plan', () => {
+  it('plan one A4 comparison per boat that lists repower options, shared with the book that asks for it', async () => {
+    const project = await demo();
+    const plan = planSheets(project);
+    const withOptions = project.boats.filter((b) => b.repowerOptions).map((b) => b.id);
+    expect(withOptions).toEqual(['reedshank']);
+    expect([...plan.byRepower]).toEqual([['reedshank', ['repower-reedshank']]]);
+    expect(plan.byBook.get('dealer-spec-sheets')).toContain('repower-reedshank');
+    expect(plan.sheets.filter((s) => s.request.kind === 'repowerSheet')).toHaveLength(1);
+  });
+});

@@ -31,6 +31,11 @@ export function normaliseBook(source: YamlSource, raw: RawBookFile, reg: BookReg
       check({ path: ['sheets', i, 'jet'], id: s.jet, registry: reg.jets, what: 'jet units', dir: 'jets' });
     } else {
       check({ path: ['sheets', i, 'boat'], id: s.boat, registry: reg.boats, what: 'boats', dir: 'boats' });
+      // A comparison needs options to compare: a boat without repower_options cannot have one.
+      const boat = reg.boats.get(s.boat);
+      if (s.kind === 'repowerSheet' && boat && !boat.repowerOptions) {
+        errors.push(at(source, ['sheets', i, 'boat'], { expected: `must name a boat that lists repower_options for a repowerSheet (${boat.source.file} lists none)`, fix: `add 2 to 6 repower_options to ${boat.source.file}, or name another boat` }));
+      }
     }
   });
   // A sheet's own paper keeps the book's bleed and crop marks unless it says otherwise.

@@ -33,7 +33,7 @@ const chartConditions = () =>
 
 const boatSheet = <K extends string>(kind: K) => z.strictObject({ kind: z.literal(kind), boat: slug(), paper: sheetPaper().optional(), units: unitsOverride().optional() });
 
-export const SHEET_KINDS = ['wallChart', 'specSheet', 'consoleCard', 'upgradeSheet'] as const;
+export const SHEET_KINDS = ['wallChart', 'specSheet', 'consoleCard', 'upgradeSheet', 'repowerSheet'] as const;
 
 const sheet = () =>
   z.discriminatedUnion(
@@ -43,6 +43,7 @@ const sheet = () =>
       boatSheet('specSheet'),
       boatSheet('consoleCard'),
       boatSheet('upgradeSheet'),
+      boatSheet('repowerSheet'),
     ],
     { error: `must be a sheet whose kind is one of ${SHEET_KINDS.join(', ')}` },
   );

@@ -38,6 +38,7 @@ export const SHEET_KIND_NAMES = {
   wallChart: 'Wall chart',
   specSheet: 'Spec sheet',
   upgradeSheet: 'Engine upgrade',
+  repowerSheet: 'Repower comparison',
   consoleCard: 'Console card',
   bookContents: 'Contents',
   reprintList: 'Print-run checklist',

@@ -1,6 +1,6 @@
 /** The bodies of the site's pages; templates/ only pick the page and its data. */
 import { html, type SafeHtml } from '../html.ts';
-import type { BoatView, BookView, FamilyView, LinkView, ReprintView, SiteView } from '../siteView.ts';
+import type { BoatView, BookView, FamilyView, LinkView, RepowerView, ReprintView, SiteView } from '../siteView.ts';
 import { pageLayout } from './layout.ts';
 import { facts, linkList, sheetFigure, table } from './parts.ts';
 
@@ -76,6 +76,18 @@ ${resultsLink(site, boat, root)}`)}
 ${boat.calibration ? section('trials', boat.calibration.heading, html`${boat.calibration.trials ? table(boat.calibration.trials, root) : ''}${boat.calibration.paragraphs.map((p) => html`<p>${p}</p>`)}`) : ''}
 ${section('sheets', 'Sheets', html`${boat.sheets.map((s) => sheetFigure(s, root))}`)}`;
   return pageLayout({ site, title: boat.name, root, body, sheets: boat.sheets });
+}
+
+/** A boat's repower comparison: the sentence, the options side by side, the sheet to print. */
+export function repowerPage(site: SiteView, r: RepowerView): string {
+  const root = '../../../';
+  const body = html`<h1>${r.boatName}: repower comparison</h1>
+<p class="lede"><strong>${r.sentence}</strong></p>
+<p>Back to <a href="${root}${r.boatHref}">${r.boatName}</a>.</p>
+${section('options', 'The options side by side', html`${table(r.table, root)}<p>${r.note}</p>
+<p class="results-downloads"><a href="${root}${r.resultsHref}" download>Results as JSON</a> (the comparison is its <code>repower</code> field).</p>`)}
+${section('sheets', 'Sheet', html`${r.sheets.map((s) => sheetFigure(s, root))}`)}`;
+  return pageLayout({ site, title: `${r.boatName}: repower comparison`, root, body, sheets: r.sheets });
 }
 
 /** One chart book: its PDF and every sheet in order. */

@@ -23,7 +23,7 @@ function cellClass(cell: CellView, column: { numeric: boolean; nowrap?: boolean;
 export function table(t: TableView, root = ''): SafeHtml {
   const num = (i: number) => t.numeric.includes(i);
   const column = (i: number) => ({ numeric: num(i), nowrap: t.nowrap?.includes(i), words: t.words?.includes(i) });
-  return html`<div class="table-wrap"><table>
+  return html`<div class="table-wrap"><table${t.layout ? html` class="${t.layout}"` : ''}>
 <caption>${t.caption}</caption>
 <thead><tr>${t.head.map((h, i) => html`<th scope="col"${num(i) ? html` class="num"` : ''}>${h}</th>`)}</tr></thead>
 <tbody>
