@@ -24,6 +24,17 @@ describe('sceneKey()', () => {
     }
   });
 
+  it('changes for a repower comparison when the engine of one of its options is edited, not only the boat’s own', async () => {
+    const project = await demo();
+    const boat = project.boats.find((b) => b.repowerOptions?.some((o) => o.engineFamilyId !== b.engineFamilyId))!;
+    const i = boat.repowerOptions!.findIndex((o) => o.engineFamilyId !== boat.engineFamilyId);
+    const other = boat.repowerOptions![i];
+    // A reload resolves the option to the edited variant (a new object), as the loader does after an edit.
+    const edited: Project = { ...project, boats: project.boats.map((b) => (b === boat ? { ...b, repowerOptions: b.repowerOptions!.map((o, j) => (j === i ? { ...o, engine: { ...other.engine, conditionFactor: 0.9 } } : o)) } : b)) };
+    const request = { kind: 'repowerSheet' as const, boatId: boat.id, paper: { size: 'A4' as const, orientation: 'portrait' as const, bleedMm: 0 } };
+    expect(sceneKey({ request, project: edited, dateIso: '2026-01-01' })).not.toBe(sceneKey({ request, project, dateIso: '2026-01-01' }));
+  });
+
   it('changes for every sheet when the site settings or the printed date change', async () => {
     const project = await demo();
     const renamedShop: Project = { ...project, site: { ...project.site, shopName: 'Another shop (demo)' } };
