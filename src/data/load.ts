@@ -13,6 +13,8 @@ import { normaliseEngine } from './normalise/engine.ts';
 import { normaliseJet } from './normalise/jet.ts';
 import type { Normalised } from './normalise/shared.ts';
 import { normaliseSite } from './normalise/site.ts';
+import { isTrialLog, strayLogs } from './normalise/boatLog.ts';
+import { trialLogPath } from './trialLog.ts';
 import { boatFile, bookFile, engineFile, jetFile, siteFile } from './schema/index.ts';
 import { SLUG_PATTERN } from './schema/common.ts';
 import type { Boat, Book, DataError, EngineFamily, JetUnit, LoadResult, SiteConfig } from './types.ts';
@@ -112,12 +114,15 @@ function loadFiles(files: readonly SourceFile[], opts: { dataDir?: string }): Lo
   const warnings: DataError[] = [];
   const checked: Checked[] = [];
   const seen = new Map<string, string>();
+  const logs = new Map<string, SourceFile>();
   let root = opts.dataDir;
   for (const f of [...files].sort((a, b) => compareText(a.path, b.path))) {
     const c = classify(f.path);
     const place = { file: f.path, line: 1, column: 1 };
     if (c.kind === 'ignored') {
       if (c.reason) warnings.push(dataError(place, { field: '', ...c.reason }));
+      // A sea-trial log is read with the boat file beside it (boats/<id>.trials.csv), not on its own.
+      if (isTrialLog(f.path)) logs.set(f.path.replace(/\\/g, '/'), f);
       continue;
     }
     root ??= c.root;
@@ -137,7 +142,7 @@ function loadFiles(files: readonly SourceFile[], opts: { dataDir?: string }): Lo
     errors.push(...one.errors);
     checked.push({ kind: c.kind, stem: c.stem, source: one.source, raw: one.raw });
   }
-  const built = buildProject(checked);
+  const built = buildProject(checked, logs);
   errors.push(...built.errors);
   warnings.push(...built.warnings);
   if (!checked.some((c) => c.kind === 'site')) {
@@ -179,7 +184,7 @@ interface Built {
 }
 
 /** Normalise in dependency order: engines and jets, then boats, then books. */
-function buildProject(checked: readonly Checked[]): Built {
+function buildProject(checked: readonly Checked[], logs: ReadonlyMap<string, SourceFile>): Built {
   const errors: DataError[] = [];
   const warnings: DataError[] = [];
   const of = (kind: FileKind) => checked.filter((c) => c.kind === kind);
@@ -196,7 +201,8 @@ function buildProject(checked: readonly Checked[]): Built {
     );
   const engines = registry('engine', (c) => normaliseEngine(c.source, c.raw as never));
   const jets = registry('jet', (c) => normaliseJet(c.source, c.raw as never));
-  const boats = registry('boat', (c) => normaliseBoat(c.source, c.raw as never, { engines, jets }));
+  const boats = registry('boat', (c) => normaliseBoat(c.source, c.raw as never, { engines, jets }, logs.get(trialLogPath(c.source.file.replace(/\\/g, '/')))));
+  warnings.push(...strayLogs({ logs: [...logs.keys()], boatIds: of('boat').map((c) => c.stem) }));
   const siteFileChecked = of('site')[0];
   const site = siteFileChecked?.raw !== undefined ? normaliseSite(siteFileChecked.raw as never) : undefined;
   const books = registry('book', (c) => normaliseBook(c.source, c.raw as never, { engines, jets, boats, siteCautions: site?.extraCautions?.length ?? 0 }));

@@ -104,6 +104,10 @@ export interface SeaTrial {
   readonly ambient: Ambient;
   readonly water: Water;
   readonly notes?: string;
+  /** Who ran the trial (a trial log's recorded_by column). */
+  readonly recordedBy?: string;
+  /** Where the trial is written: the boat file's line, or the trial log's row. */
+  readonly origin?: { readonly file: string; readonly line: number };
 }
 
 /**

@@ -8,6 +8,8 @@ import { at } from '../validate.ts';
 import type { YamlSource } from '../yamlSource.ts';
 import { toSite, toWater } from './conditions.ts';
 import type { Normalised } from './shared.ts';
+import { boatLogTrials } from './boatLog.ts';
+import type { SourceFile } from '../files.ts';
 
 export interface BoatRegistries {
   readonly engines: Registry<EngineFamily>;
@@ -15,7 +17,7 @@ export interface BoatRegistries {
 }
 
 /** Normalise a validated boat file; unknown references name what exists and the closest match. */
-export function normaliseBoat(source: YamlSource, raw: RawBoatFile, reg: BoatRegistries): Normalised<Boat> {
+export function normaliseBoat(source: YamlSource, raw: RawBoatFile, reg: BoatRegistries, log?: SourceFile): Normalised<Boat> {
   const errors: DataError[] = [];
   const warnings: DataError[] = [];
   const engine = resolveEngine({ source, raw, reg, errors });
@@ -34,6 +36,9 @@ export function normaliseBoat(source: YamlSource, raw: RawBoatFile, reg: BoatReg
   const repowerOptions = engine && jet && raw.repower_options ? resolveRepowerOptions({ source, options: raw.repower_options, own: { engine, jet, impellerId: raw.impeller }, reg, errors }) : undefined;
   const displacementKg = raw.hull.displacement_kg ?? lbToKg(raw.hull.displacement_lb ?? Number.NaN);
   checkRepowerWeights({ source, raw, displacementKg, errors });
+  const logged = jet ? boatLogTrials({ boatSource: source, yamlTrials: raw.trials, log, jet, engine }) : { trials: [], errors: [], warnings: [] };
+  errors.push(...logged.errors);
+  warnings.push(...logged.warnings);
   if (errors.length > 0 || !engine || !jet) return { ok: false, errors, warnings };
 
   const site = toSite(raw.site);
@@ -60,8 +65,12 @@ export function normaliseBoat(source: YamlSource, raw: RawBoatFile, reg: BoatReg
     cruise: raw.cruise.map(toCruise),
     ...(fuelTankL !== undefined ? { fuelTankL } : {}),
     ...(raw.fuel_reserve_pct !== undefined ? { fuelReservePct: raw.fuel_reserve_pct } : {}),
-    trials: raw.trials.map((t) => toTrial(t, { site, water })).sort((a, b) => (a.date < b.date ? -1 : a.date > b.date ? 1 : 0)),
     ...(repowerOptions ? { repowerOptions } : {}),
+    // The boat file's trials and the log's, in date order (a stable sort: on one day, the boat file's first, then the log's rows in order).
+    trials: [
+      ...raw.trials.map((t, i) => ({ ...toTrial(t, { site, water }), origin: { file: source.file, line: source.locate(['trials', i]).line } })),
+      ...logged.trials.map((t) => ({ ...toTrial(t.raw, { site, water }), origin: t.origin, ...(t.recordedBy !== undefined ? { recordedBy: t.recordedBy } : {}) })),
+    ].sort((a, b) => (a.date < b.date ? -1 : a.date > b.date ? 1 : 0)),
     ...(raw.notes !== undefined ? { notes: raw.notes } : {}),
     source: { file: source.file },
   };
