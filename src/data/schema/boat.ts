@@ -102,9 +102,9 @@ export const boatFile = () =>
       fuel_tank_us_gal: between(0.3, 26000, 'US gal').optional(),
       /** Share of the tank kept in reserve for the time and range figures; 10 % when absent. */
       fuel_reserve_pct: between(0, 50, '%').optional(),
+      trials: z.array(trialRecord(), { error: 'must be a list of sea-trial records' }).default([]),
       /** Options a buyer compares on the repower comparison sheet. */
       repower_options: repowerOptions().optional(),
-      trials: z.array(trialRecord(), { error: 'must be a list of sea-trial records' }).default([]),
     }),
     [{ keys: ['fuel_tank_l', 'fuel_tank_us_gal'], required: false }],
   ).meta({ title: 'matchbook boat', description: 'One boat and its installation: data/boats/<id>.yaml' });
