@@ -43,7 +43,7 @@ export function repowerSheetScene(request: RepowerRequest, ctx: SheetContext): S
   const comparison = repowerTable({ result, boat, site });
   const parts: Flowable[] = [
     whole(({ x, y, widthMm }) => paragraph({ x, y, widthMm, text: sentence, sizePt: type.heading, weight: 'bold', role: 'repower-answer', where })),
-    tableFlow({ heading: 'The options side by side', columns: comparison.columns, rows: comparison.rows, sizePt: type.body, minSizePt: type.min, headingPt: type.heading, role: 'repower-table', where }),
+    tableFlow({ heading: 'The options side by side', columns: comparison.columns, rows: comparison.rows, sizePt: type.body, minSizePt: type.min, headingPt: type.heading, role: 'repower-table', where, breakBefore: (row) => !comparison.keepWithPrevious.includes(row) }),
     whole(({ x, y, widthMm }) => paragraph({ x, y, widthMm, text: repowerNote({ result }), sizePt: type.small, role: 'repower-note', where })),
     cautionsFlow({ site, sizePt: type.body, headingPt: type.heading, where }),
   ];

@@ -58,8 +58,11 @@ function cruiseMissing(row: RepowerOptionResult['cruise'][number]): string {
   return '–';
 }
 
-/** The comparison as a table: a first column naming each figure, then one column per option in the file's order. */
-export function repowerTable(args: { result: RepowerResult; boat: Boat; site: Pick<SiteConfig, 'powerUnitFirst' | 'speedUnit' | 'speedAlso' | 'fuelUnit'> }): { columns: Column[]; rows: Cell[][] } {
+/**
+ * The comparison as a table: a first column naming each figure, then one column per option in the file's
+ * order. keepWithPrevious: the rows that must not start a page (a cruise setting's fuel row stays with its rpm row).
+ */
+export function repowerTable(args: { result: RepowerResult; boat: Boat; site: Pick<SiteConfig, 'powerUnitFirst' | 'speedUnit' | 'speedAlso' | 'fuelUnit'> }): { columns: Column[]; rows: Cell[][]; keepWithPrevious: readonly number[] } {
   const { result, boat, site } = args;
   const opts = result.options;
   const each = (f: (o: RepowerOptionResult) => Cell): Cell[] => opts.map(f);
@@ -94,11 +97,13 @@ export function repowerTable(args: { result: RepowerResult; boat: Boat; site: Pi
       ];
     }),
   ];
+  // Each cruise setting is its last two rows' pair, from the end of the table.
+  const keepWithPrevious = boat.cruise.map((_, i) => rows.length - 2 * (boat.cruise.length - i) + 1);
   const columns: Column[] = [
     { header: '', align: 'left', wrap: true },
     ...opts.map((o): Column => ({ header: o.fitted === 'yes' ? `${o.label} ${FITTED_NOW}` : o.label, align: 'left', wrap: true })),
   ];
-  return { columns, rows };
+  return { columns, rows, keepWithPrevious };
 }
 
 /** The small print under the table: what the columns share, what the figures stand on. */

@@ -48,6 +48,8 @@ interface TableFlowArgs {
   headingPt: number;
   role: string;
   where: string;
+  /** Whether the table may break before row i (over columns or pages); between any rows when absent. */
+  breakBefore?: (row: number) => boolean;
 }
 
 /** A heading and a table that splits between rows over columns and pages (the heading says "continued", widths stay). */
@@ -57,7 +59,7 @@ export function tableFlow(args: TableFlowArgs): Flowable {
     const h = paragraph({ x, y, widthMm, text: heading, sizePt: args.headingPt, weight: 'bold', role: 'heading', where: args.where });
     const t = table({ x, y: y + h.heightMm + 0.5, maxWidthMm: widthMm, columns: args.columns, rows: args.rows.slice(from, to), measureRows: args.rows, firstRowIndex: from, noNote: to < args.rows.length, sizePt: args.sizePt, minSizePt: args.minSizePt, fullWidth: true, header: args.header, role: args.role, where: `${args.where}: ${args.heading}` });
     return { nodes: [...h.nodes, ...t.nodes], heightMm: h.heightMm + 0.5 + t.heightMm };
-  }, 0, true);
+  }, 0, true, args.breakBefore);
 }
 
 /** Builds the spec-sheet scene. */

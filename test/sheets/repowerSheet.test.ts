@@ -144,6 +144,24 @@ describe('repower comparison sheet', () => {
       const full = BUILT_IN_CAUTIONS.every((c) => words.includes(c.split(' ').slice(0, 5).join(' ')));
       expect(full || words.includes(CONTINUING_CAUTION.split(' ').slice(0, 6).join(' '))).toBe(true);
     }
+    // A setting's fuel row never starts a page away from its rpm row, wherever the break falls (4 to 8 settings of every kind).
+    const mixed: Boat['cruise'] = [
+      { kind: 'rpm', label: 'Harbour idle', speedRpm: 1200 },
+      { kind: 'speed', label: 'Slow', speedKn: 12 },
+      { kind: 'speed', label: 'Towing a skier', speedKn: 22 },
+      { kind: 'rpm', label: 'Long run upriver', speedRpm: 3000 },
+      ...boat.cruise,
+      { kind: 'power', label: 'Half power', powerKw: 120 },
+    ];
+    for (let n = 4; n <= mixed.length; n++) {
+      const b: Boat = { ...many, cruise: mixed.slice(0, n) };
+      const split = scenePages(draw({ ...project, boats: project.boats.map((x) => (x.id === 'reedshank' ? b : x)) }, 'reedshank'));
+      for (const page of split) {
+        const words = texts(page).map((t) => t.text).join(' ');
+        for (const c of b.cruise) if (words.includes(`${c.label}: fuel`)) expect(words, `${n} settings: ${c.label}`).toContain(`${c.label} (`);
+      }
+    }
+    expect(pages.some((page) => texts(page).some((t) => t.text.includes('(continued)')))).toBe(true);
     // Every option has its column and every setting its rows, over the pages.
     const all = pages.flatMap((pg) => texts(pg)).map((t) => t.text).join(' ');
     for (const o of many.repowerOptions!) expect(all).toContain(o.label);

@@ -100,9 +100,10 @@ export function flow(args: { slot: (index: number) => Box; gapMm: number; parts:
 
 /**
  * A list of pieces (table rows, paragraphs) as a part that splits between pieces: draw(from, to, at)
- * lays pieces [from, to) out (to = count: the last part, which carries any note under it).
+ * lays pieces [from, to) out (to = count: the last part, which carries any note under it). breakBefore(i)
+ * says whether a break may come before piece i (rows that belong together stay together); any when absent.
  */
-export function splittable(count: number, draw: (from: number, to: number, at: { x: number; y: number; widthMm: number }) => Block, from = 0, keepTogether = false): Flowable {
+export function splittable(count: number, draw: (from: number, to: number, at: { x: number; y: number; widthMm: number }) => Block, from = 0, keepTogether = false, breakBefore?: (piece: number) => boolean): Flowable {
   return {
     keepTogether,
     layout: (at) => draw(from, count, at),
@@ -110,11 +111,11 @@ export function splittable(count: number, draw: (from: number, to: number, at: {
       // The most pieces that fit, at least one, and never all (then the part would fit whole).
       let best = 0;
       for (let to = from + 1; to < count; to++) {
-        if (draw(from, to, at).heightMm <= maxHeightMm + 1e-6) best = to;
-        else break;
+        if (draw(from, to, at).heightMm > maxHeightMm + 1e-6) break;
+        if (!breakBefore || breakBefore(to)) best = to;
       }
       if (best === 0) return undefined;
-      return { head: draw(from, best, at), rest: splittable(count, draw, best, keepTogether) };
+      return { head: draw(from, best, at), rest: splittable(count, draw, best, keepTogether, breakBefore) };
     },
   };
 }
