@@ -5,7 +5,7 @@
 import { isIP } from 'node:net';
 import type { PrintOverride } from '../standards/paper.ts';
 
-export type CommandName = 'build' | 'check' | 'serve' | 'start';
+export type CommandName = 'build' | 'check' | 'serve' | 'start' | 'add-trial';
 
 export interface ParsedArgs {
   readonly command: CommandName | 'help';
@@ -21,11 +21,30 @@ export interface ParsedArgs {
   readonly host: string;
   /** --bleed and --crop-marks / --no-crop-marks of build and check: they override every sheet's paper. */
   readonly print: PrintOverride;
+  /** add-trial's options as typed (--boat, --date, --rpm, …), checked by the command itself. */
+  readonly trial: Readonly<Record<string, string>>;
 }
+
+/** add-trial's options, each filling a column of the trial log (--boat names the boat). */
+export const TRIAL_OPTIONS: Readonly<Record<string, string>> = {
+  '--boat': '',
+  '--date': 'date',
+  '--impeller': 'impeller',
+  '--rpm': 'wot_rpm',
+  '--speed-kn': 'speed_kn',
+  '--load-kg': 'load_kg',
+  '--air-temp-c': 'air_temp_c',
+  '--humidity-pct': 'humidity_pct',
+  '--pressure-hpa': 'pressure_hpa',
+  '--altitude-m': 'altitude_m',
+  '--water': 'water',
+  '--by': 'recorded_by',
+  '--notes': 'notes',
+};
 
 export class UsageError extends Error {}
 
-const COMMANDS: readonly CommandName[] = ['build', 'check', 'serve', 'start'];
+const COMMANDS: readonly CommandName[] = ['build', 'check', 'serve', 'start', 'add-trial'];
 
 /** Options each command accepts that take a value (--help is always accepted). */
 const OPTIONS: Readonly<Record<CommandName, readonly string[]>> = {
@@ -33,6 +52,7 @@ const OPTIONS: Readonly<Record<CommandName, readonly string[]>> = {
   check: ['--data', '--bleed'],
   serve: ['--data', '--out', '--port', '--host'],
   start: ['--data'],
+  'add-trial': ['--data', ...Object.keys(TRIAL_OPTIONS)],
 };
 
 /** Options each command accepts that take no value. */
@@ -41,9 +61,10 @@ const FLAGS: Readonly<Record<CommandName, readonly string[]>> = {
   check: ['--crop-marks', '--no-crop-marks'],
   serve: [],
   start: [],
+  'add-trial': [],
 };
 
-const EXAMPLES: Readonly<Record<string, string>> = { '--port': '8080', '--host': '127.0.0.1', '--bleed': '3' };
+const EXAMPLES: Readonly<Record<string, string>> = { '--port': '8080', '--host': '127.0.0.1', '--bleed': '3', '--boat': 'reedshank', '--date': '2026-09-14', '--impeller': 'gust', '--rpm': '4900', '--notes': '"Two aboard"', '--by': '"Shop"', '--water': 'salt' };
 
 // Print shops commonly ask for 3 mm of bleed, some for 5 or 1/8 in (3.175 mm); 10 mm is far beyond any
 // of them (common practice, no source), so a larger figure is taken for a typing slip.
@@ -84,7 +105,7 @@ function parseHost(text: string): string {
 
 /** Parses argv (without node and script) into a command and its options. */
 export function parseArgs(argv: readonly string[]): ParsedArgs {
-  const defaults = { dataDir: 'data', outDir: 'out', port: 8080, portGiven: false, host: '127.0.0.1', print: {} };
+  const defaults = { dataDir: 'data', outDir: 'out', port: 8080, portGiven: false, host: '127.0.0.1', print: {}, trial: {} };
   const [first, ...rest] = argv;
   if (first === undefined || first === '--help' || first === '-h' || first === 'help') {
     const topic = first === 'help' ? rest[0] : undefined;
@@ -133,5 +154,6 @@ export function parseArgs(argv: readonly string[]): ParsedArgs {
     portGiven: values.has('--port'),
     host: values.has('--host') ? parseHost(values.get('--host') ?? '') : defaults.host,
     print,
+    trial: Object.fromEntries([...values].filter(([k]) => Object.hasOwn(TRIAL_OPTIONS, k))),
   };
 }

@@ -10,6 +10,7 @@ Commands:
   check   check the data only and list every problem found
   serve   build, serve the site locally and rebuild when a file changes
   start   write a starter data folder of example files to replace with your own
+  add-trial  add one sea trial to a boat's trial log (boats/<id>.trials.csv)
 
 Run "matchbook <command> --help" for a command's options.
 Exit status: 0 done, 1 the data has problems, 2 the command was misused, 3 matchbook failed (a bug).
@@ -54,6 +55,17 @@ Writes a starter data folder into DIR (default: data): site.yaml and one example
 with its impellers, boat and chart book, each commented and marked as example data, each naming its
 JSON Schema on its first line for your editor. "matchbook build" then works at once; replace the
 examples with your own definitions. DIR must be new or empty: start never overwrites a file.
+`,
+  'add-trial': `Usage: matchbook add-trial [--data DIR] --boat ID --date YYYY-MM-DD --impeller ID --rpm N [more]
+
+Adds one sea trial at the end of the boat's trial log, boats/ID.trials.csv in DIR (default: data),
+making the log with its header row when there is none. More columns:
+  --speed-kn N  --load-kg N  --air-temp-c N  --humidity-pct N  --pressure-hpa N (or --altitude-m N)
+  --water fresh|salt|DENSITY  --by NAME  --notes TEXT
+The data folder is checked first (the boat and the impeller must exist), then the new row by the
+same rules as every row of the log. Every byte already in the log stays; the file is written to a
+temporary file beside it and renamed into place, so a failed write leaves it as it was.
+Exit status 1 when the data or the new trial has a problem (nothing is written then).
 `,
 };
 

@@ -32,6 +32,8 @@ export async function runCli(argv: readonly string[], io: CliIo): Promise<number
         return await (await import('./serve.ts')).runServe(args, io);
       case 'start':
         return await (await import('./start.ts')).runStart(args, io);
+      case 'add-trial':
+        return await (await import('./addTrial.ts')).runAddTrial(args, io);
     }
   } catch (error) {
     return reportFailure(error, io);

@@ -35,8 +35,11 @@ interface Checked {
   readonly raw: unknown;
 }
 
-/** Load every definition under dataDir (engines/, jets/, boats/, books/, site.yaml). Never throws. */
-export async function loadProject(dataDir: string): Promise<LoadResult> {
+/**
+ * Load every definition under dataDir (engines/, jets/, boats/, books/, site.yaml). Never throws.
+ * opts.replace gives one file's text as it would be (add-trial checks a log before writing it).
+ */
+export async function loadProject(dataDir: string, opts: { replace?: SourceFile } = {}): Promise<LoadResult> {
   const root = dataDir.replace(/\\/g, '/').replace(/\/+$/, '') || '.';
   try {
     if (!(await stat(root)).isDirectory()) return folderError(root, 'a file');
@@ -51,7 +54,8 @@ export async function loadProject(dataDir: string): Promise<LoadResult> {
   const rootNames = await readdir(root).catch(() => [] as string[]);
   paths.push(...rootNames.filter((n) => /\.ya?ml$/.test(n) && n !== 'site.yaml').sort().map((n) => posix.join(root, n)));
   const realRoot = await realpath(root).catch(() => resolve(root));
-  const files = (await Promise.all(paths.map((path) => readSource(path, realRoot)))).filter((f): f is SourceFile => f !== null);
+  const read = (await Promise.all(paths.map((path) => readSource(path, realRoot)))).filter((f): f is SourceFile => f !== null);
+  const files = opts.replace ? [...read.filter((f) => f.path !== opts.replace!.path), opts.replace] : read;
   return loadProjectFromFiles(files, { dataDir: root });
 }
 
