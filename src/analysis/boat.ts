@@ -9,6 +9,7 @@ import type { Boat, Project } from '../data/types.ts';
 import { operatingBand, type ImpellerSpec, type Installation } from '../model/index.ts';
 import { calibratedBand, calibratedBandNote } from './boatCalibratedBand.ts';
 import { boatCalibration, calibratedBoatInstallation, calibrationResult, type CalibrationResult } from './boatCalibration.ts';
+import { boatTrend, type TrendResult } from './boatTrend.ts';
 import { boatEstimates, type BoatEstimates, type SpeedGainRow, type TopSpeedRow } from './boatEstimates.ts';
 import { boatFigures, type BoatFigures, type CruiseRow, type RpmGainRow, type UpgradeRow } from './boatFigures.ts';
 import { bandResult, conditionsResult, limitsResult, type BandResult, type ConditionsResult, type LimitsResult } from './results.ts';
@@ -69,6 +70,10 @@ export interface BoatResult {
   readonly calibrated?: CalibratedFigures;
   /** Present when the boat has sea trials the calibration refused (implausible factors): why, in words. */
   readonly trialsNotUsed?: string;
+  /** Present when the boat has sea trials: each tried impeller's effective rating over time, and the wear flag. */
+  readonly trend?: TrendResult;
+  /** The latest sea trial of the fitted impeller, wherever it is written (whether or not the fit used it). */
+  readonly lastTrial?: { readonly date: string; readonly wotRpm: number };
 }
 
 /** The boat's installation with a given impeller (its fitted one by default). */
@@ -83,6 +88,13 @@ function fittedMeasured(boat: Boat, c: CalibrationResult): CalibratedFigures['fi
   const runs = c.trials.filter((t) => t.impellerId === boat.impellerId && t.usedInFit === 'yes');
   const latest = runs.reduce<(typeof runs)[number] | undefined>((a, t) => (a === undefined || t.date >= a.date ? t : a), undefined);
   return latest ? { date: latest.date, wotRpm: latest.wotRpm } : undefined;
+}
+
+/** The latest trial of the fitted impeller (boat.trials is in date order). */
+function lastTrialOf(boat: Boat): { lastTrial?: BoatResult['lastTrial'] } {
+  const runs = boat.trials.filter((t) => t.impellerId === boat.impellerId);
+  const last = runs[runs.length - 1];
+  return last ? { lastTrial: { date: last.date, wotRpm: last.wotRpm } } : {};
 }
 
 /**
@@ -170,5 +182,7 @@ function computeBoat(args: { boat: Boat; project: Project }): BoatResult {
     speedGains: estimates.speedGains,
     ...(calibrated ? { calibrated } : {}),
     ...(!usable && boat.trials.length > 0 ? { trialsNotUsed: calibration.notes.join(' ') } : {}),
+    ...(boat.trials.length > 0 ? { trend: boatTrend(boat, calibration) } : {}),
+    ...lastTrialOf(boat),
   };
 }

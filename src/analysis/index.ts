@@ -6,6 +6,7 @@ export { calibratedBand, calibratedBandNote, FIT_SE_MULTIPLE, READING_SCATTER_PC
 export { bookSheetRequest, conditionsDifferences, defaultWallCharts, defaultChartConditions, pairingBoats, DEFAULT_SITE, DEFAULT_CRUISE_FRACTIONS, type ConditionsDifference } from './defaults.ts';
 export { STATUS_WORDS, bandVerdict, isWarning, toleranceNote, worstStatus } from './status.ts';
 export type { PointResult, BandResult, ConditionsResult, CurveKeyNumbers, LimitsResult } from './results.ts';
+export { boatTrend, TREND_RULE, WEAR_ACTION, type ImpellerTrend, type TrendPointResult, type TrendResult, type WearFlag } from './boatTrend.ts';
 export { boatCalibration, boatTrials, calibratedBoatInstallation, calibrationResult, type CalibrationResult, type TrialRow } from './boatCalibration.ts';
 export {
   boatEstimates,

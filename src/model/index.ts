@@ -52,3 +52,4 @@ export {
   type UpgradeStep,
   type WhatIfPoint,
 } from './upgradeWhatIf.ts';
+export { BASELINE_TRIALS, DRIFT_K, READING_FLOOR, ratingTrend, type Baseline, type RatingTrend, type TrendInput, type TrendPoint, type TrendVerdict } from './ratingTrend.ts';

@@ -8,7 +8,7 @@ import type { SheetRequest } from '../data/types.ts';
 import type { Scene, SceneNode } from '../scene/types.ts';
 import { measureTextMm } from '../scene/text.ts';
 import { analyseBoat, type BandResult, type LimitsResult } from '../analysis/index.ts';
-import type { MatchStatus } from '../analysis/index.ts';
+import type { MatchStatus, WearFlag } from '../analysis/index.ts';
 import { assembleScene } from './kit/assemble.ts';
 import { ascentMm, label, linePitchMm, paragraph, type Block } from './kit/block.ts';
 import { CARD_CAUTION_LINE, cautionsFlow } from './kit/cautions.ts';
@@ -72,6 +72,15 @@ export function cardWarning(band: BandResult, limits: LimitsResult): string {
   return '';
 }
 
+/** The wear flag as the card says it (short: the boat page and the results say more); '' when not raised. */
+export function wearText(flag: WearFlag | undefined): string {
+  if (!flag) return '';
+  const pct = `${numberText(Math.abs(flag.driftPct), 0, 'wear drift')} %`;
+  return flag.direction === 'absorbsLess'
+    ? `Wear check: rpm up since first trials (absorbs ${pct} less). Inspect impeller, intake, wear ring; check engine.`
+    : `Wear check: rpm down since first trials (${pct} more load). Check engine and weight; inspect impeller, intake.`;
+}
+
 /** Builds the console-card scene. */
 export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene {
   const where = `console card ${request.boatId}`;
@@ -83,7 +92,8 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
   const frame = sheetFrame(frameArgs);
   const box = frame.contentBox;
   const b = result.calibrated?.wot ?? result.wot;
-  const measured = result.calibrated?.fittedMeasured;
+  const measured = result.lastTrial ?? result.calibrated?.fittedMeasured;
+  const wear = wearText(result.trend?.flag);
   const calibratedTo = trialDatesText(result);
   const rangeText = rpmBandText(b.low.speedRpm, b.high.speedRpm);
   const warning = cardWarning(b, result.limits);
@@ -145,7 +155,7 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
   /** The measured rpm, the warning beside its bar and where the range comes from; absent when there is none of them. */
   const notesBlock = (level: 0 | 1 | 2): Flowable | undefined => {
     const calibration = calibratedTo && !(level > 0 && measured) ? `Range calibrated to ${calibratedTo}.` : '';
-    if (!measured && !warning && !calibration) return undefined;
+    if (!measured && !warning && !calibration && !wear) return undefined;
     return whole(({ x, y, widthMm }): Block => {
       const nodes: SceneNode[] = [];
       let cursor = y;
@@ -154,8 +164,9 @@ export function consoleCardScene(request: BoatRequest, ctx: SheetContext): Scene
         nodes.push(...p.nodes);
         cursor += p.heightMm + 0.5;
       }
-      if (warning) {
-        const w = warningBlock({ x, y: cursor, widthMm, text: warning, sizePt: type.body + 1, where });
+      for (const text of [wear, warning]) {
+        if (!text) continue;
+        const w = warningBlock({ x, y: cursor, widthMm, text, sizePt: type.body + 1, where });
         nodes.push(...w.nodes);
         cursor += w.heightMm + 0.5;
       }

@@ -78,6 +78,8 @@ export interface FamilyView {
   readonly csvLinks: readonly LinkView[];
 }
 
+import type { TrendView } from './trendPlot.ts';
+
 /** A boat's sea trials and what they calibrated (only for boats with usable trials). */
 export interface CalibrationView {
   readonly heading: string;
@@ -98,6 +100,8 @@ export interface BoatView {
   readonly tables: readonly TableView[];
   /** Present only when the boat has usable sea trials. */
   readonly calibration?: CalibrationView;
+  /** Present when an impeller has enough trials for a trend (trendPlot.ts). */
+  readonly trend?: TrendView;
   readonly resultsHref: string;
   /** The results as CSV tables for a spreadsheet (src/site/resultsCsv.ts). */
   readonly csvLinks: readonly LinkView[];

@@ -14,6 +14,7 @@ import type { SheetPlan } from './planSheets.ts';
 import { csvPaths } from './resultsCsv.ts';
 import type { BoatView, CellView, FamilyView, GuideView, JetView, RepowerView, SheetView, SiteView } from './siteView.ts';
 import { calibrationView } from './trialTable.ts';
+import { trendView } from './trendPlot.ts';
 import { wallChartTables } from './wallChartTables.ts';
 
 export interface SiteViewArgs {
@@ -96,6 +97,7 @@ function boatView(args: SiteViewArgs, boat: Boat): BoatView {
   const result = args.boatResults.get(boat.id) as BoatResult;
   const { powerUnitFirst: unit, speedUnit } = args.project.site;
   const calibration = calibrationView(result, { impellerPct: boat.jet.family.tolerancePct, enginePct: boat.engine.powerTolerancePct });
+  const trend = trendView(result);
   return {
     id: boat.id,
     name: boat.name,
@@ -120,6 +122,7 @@ function boatView(args: SiteViewArgs, boat: Boat): BoatView {
     sheets: pick(args.sheets, args.plan.byBoat.get(boat.id)),
     tables: boatTables({ boat, result, unit, speedUnit }),
     ...(calibration ? { calibration } : {}),
+    ...(trend ? { trend } : {}),
     resultsHref: `results/boats/${boat.id}.json`,
     csvLinks: [
       { label: 'impellers as CSV', href: csvPaths.boatImpellers(boat.id) },

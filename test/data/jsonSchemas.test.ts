@@ -17,13 +17,13 @@ describe('the JSON Schemas in schema/ are generated from the loader schema and a
     expect(readFileSync(`schema/${kind}.schema.json`, 'utf8')).toBe(jsonSchemaText(kind));
   });
 
-  it.each(demoFiles().map((f) => [f.path, f.text]))('ajv accepts the demo file %s', (path, text) => {
+  it.each(demoFiles().filter((f) => f.path.endsWith('.yaml')).map((f) => [f.path, f.text]))('ajv accepts the demo file %s', (path, text) => {
     const validate = validators[kindOf(path)];
     expect(validate(parse(text)), JSON.stringify(validate.errors)).toBe(true);
   });
 
   it('each demo file names its schema by a relative path for the YAML language server', () => {
-    for (const f of demoFiles()) {
+    for (const f of demoFiles().filter((x) => x.path.endsWith('.yaml'))) {
       const rel = f.path === 'data/site.yaml' ? '../schema/site.schema.json' : `../../schema/${kindOf(f.path)}.schema.json`;
       expect(f.text.split('\n')[0]).toBe(`# yaml-language-server: $schema=${rel}`);
     }

@@ -42,7 +42,9 @@ describe('the index’s boat summary', () => {
       expect(boats.cell(row, 'Window (rpm)').text).toBe(`${boat.engine.limits.windowLowRpm}–${boat.engine.limits.windowHighRpm}`);
       expect(boats.cell(row, 'Max (rpm)').text).toBe(String(boat.engine.limits.maxRpm));
       expect(boats.cell(row, 'Status').text).toBe(band.verdict);
-      expect(boats.cell(row, 'Based on').text).toBe(boat.trials.length > 0 ? 'Sea trials of 2026-03-14, 2026-03-21' : 'Data sheet');
+      // Reedshank's two trials are in its boat file; Sorrel Belle's seven in its trial log (data/boats/sorrel-belle.trials.csv).
+      const basedOn: Readonly<Record<string, string>> = { reedshank: 'Sea trials of 2026-03-14, 2026-03-21', 'sorrel-belle': '7 sea trials, 2024-04-20 to 2026-06-20' };
+      expect(boats.cell(row, 'Based on').text).toBe(basedOn[boat.id] ?? 'Data sheet');
     });
   });
 

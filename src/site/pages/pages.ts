@@ -1,5 +1,5 @@
 /** The bodies of the site's pages; templates/ only pick the page and its data. */
-import { html, type SafeHtml } from '../html.ts';
+import { html, trustedHtml, type SafeHtml } from '../html.ts';
 import type { BoatView, BookView, FamilyView, LinkView, RepowerView, ReprintView, SiteView } from '../siteView.ts';
 import { pageLayout } from './layout.ts';
 import { facts, linkList, sheetFigure, table } from './parts.ts';
@@ -74,6 +74,7 @@ ${linkList(boat.links, root)}
 ${section('results', 'Predictions', html`${boat.tables.map((t) => table(t, root))}
 ${resultsLink(site, boat, root)}`)}
 ${boat.calibration ? section('trials', boat.calibration.heading, html`${boat.calibration.trials ? table(boat.calibration.trials, root) : ''}${boat.calibration.paragraphs.map((p) => html`<p>${p}</p>`)}`) : ''}
+${boat.trend ? section('trend', boat.trend.heading, html`${boat.trend.plots.map((p) => html`<figure class="trend">${trustedHtml(p.svg)}<figcaption>${p.caption}</figcaption></figure>`)}${boat.trend.paragraphs.map((p) => html`<p>${p}</p>`)}`) : ''}
 ${section('sheets', 'Sheets', html`${boat.sheets.map((s) => sheetFigure(s, root))}`)}`;
   return pageLayout({ site, title: boat.name, root, body, sheets: boat.sheets });
 }
