@@ -68,5 +68,5 @@ function plotSvg(t: ImpellerTrend, label: string): string {
   });
   parts.push(`<text x="${PAD.left}" y="${H - 6}" font-size="11">○ first trials · ● later trials · ✕ outside the limits · left to right in date order</text>`);
   const summary = `${label}: ${t.points.length} trials; ${t.points.map((p) => `${p.date} ${p.wotRpm} rpm ${pct(p.driftPct ?? 0)}${p.outside === 'yes' ? ' outside' : ''}`).join('; ')}`;
-  return `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${W} ${H}" width="${W}" height="${H}" role="img" aria-label="${escapeHtml(summary)}" font-family="sans-serif">${parts.join('')}</svg>`;
+  return `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${W} ${H}" width="${W}" height="${H}" style="max-width:100%;height:auto" role="img" aria-label="${escapeHtml(summary)}" font-family="sans-serif">${parts.join('')}</svg>`;
 }
